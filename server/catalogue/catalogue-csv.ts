@@ -5,6 +5,7 @@
  * problem with its line number, so nothing half-read is ever stored.
  */
 import { parse } from 'csv-parse/sync';
+import { EngineInputError } from '../engine/input-error';
 import { SectionInputError, validateSection } from '../engine/section';
 import type { CatalogueSection } from './catalogue-section';
 import { sectionKey, toSectionInput } from './catalogue';
@@ -22,9 +23,10 @@ export interface CatalogueCsvProblem {
   message: string;
 }
 
-export class CatalogueCsvError extends Error {
+export class CatalogueCsvError extends EngineInputError {
   constructor(readonly problems: readonly CatalogueCsvProblem[]) {
     super(
+      'catalogue',
       `The catalogue file has ${problems.length} problem${problems.length === 1 ? '' : 's'}: ` +
         problems
           .slice(0, 5)

@@ -8,6 +8,7 @@
  * ASTM: A992 and A572 Gr 50 Fy = 50 ksi, A36 Fy = 36 ksi (AISC Manual Table 2-4; ASTM A36 plates over 8 in take
  * 32 ksi, which is outside the rolled and welded I-sections this engine checks).
  */
+import { EngineInputError } from './input-error';
 import { MPA_PER_KSI } from './units';
 
 export type GradeId = 'S235' | 'S275' | 'S355' | 'S420' | 'S460' | 'A992' | 'A36' | 'A572-50';
@@ -24,9 +25,9 @@ export interface YieldStrength {
 }
 
 /** A grade/thickness/rule combination with no tabulated yield strength. */
-export class GradeError extends Error {
-  constructor(message: string) {
-    super(message);
+export class GradeError extends EngineInputError {
+  constructor(field: 'grade' | 'thickness_mm' | 'yieldRule', message: string) {
+    super(field, message);
     this.name = 'GradeError';
   }
 }
@@ -84,18 +85,18 @@ export function isGradeId(value: string): value is GradeId {
  */
 export function yieldStrength(grade: GradeId, thickness_mm: number, rule: YieldRule = 'en10025-2'): YieldStrength {
   if (!Number.isFinite(thickness_mm) || thickness_mm <= 0) {
-    throw new GradeError(`thickness_mm must be a positive number of millimetres, got ${thickness_mm}`);
+    throw new GradeError('thickness_mm', `thickness_mm must be a positive number of millimetres, got ${thickness_mm}`);
   }
-  if (!isGradeId(grade)) throw new GradeError(`Unknown grade '${String(grade)}'; allowed: ${GRADE_IDS.join(', ')}`);
+  if (!isGradeId(grade)) throw new GradeError('grade', `Unknown grade '${String(grade)}'; allowed: ${GRADE_IDS.join(', ')}`);
   if (!isEnGrade(grade)) {
     return { fy_MPa: ASTM_FY_KSI[grade] * MPA_PER_KSI, rule: 'astm', band: `Fy = ${ASTM_FY_KSI[grade]} ksi, all shape thicknesses` };
   }
-  if (rule === 'astm') throw new GradeError(`Grade ${grade} is an EN grade; choose rule 'en10025-2' or 'en1993-1-1-table-3.1'`);
+  if (rule === 'astm') throw new GradeError('yieldRule', `Grade ${grade} is an EN grade; choose rule 'en10025-2' or 'en1993-1-1-table-3.1'`);
   const table = rule === 'en10025-2' ? PRODUCT_STANDARD_BANDS[grade] : EUROCODE_TABLE_BANDS[grade];
   const index = table.findIndex((b) => thickness_mm <= b.upTo_mm);
   if (index < 0) {
     const source = rule === 'en10025-2' ? PRODUCT_STANDARD_NAME[grade] : 'EN 1993-1-1 Table 3.1';
-    throw new GradeError(`${source} gives no yield strength for ${grade} thicker than ${table[table.length - 1].upTo_mm} mm (t = ${thickness_mm} mm)`);
+    throw new GradeError('thickness_mm', `${source} gives no yield strength for ${grade} thicker than ${table[table.length - 1].upTo_mm} mm (t = ${thickness_mm} mm)`);
   }
   const lower = index === 0 ? 0 : table[index - 1].upTo_mm;
   const band = index === 0 ? `t ≤ ${table[0].upTo_mm} mm` : `${lower} < t ≤ ${table[index].upTo_mm} mm`;

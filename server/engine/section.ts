@@ -5,6 +5,7 @@
  * toe radius and slope), centred on the web axis as IfcIShapeProfileDef and IfcAsymmetricIShapeProfileDef define them.
  * Rolled sections have quarter-circle root fillets; welded ones are plates without fillets (weld throats ignored).
  */
+import { EngineInputError } from './input-error';
 
 export type Fabrication = 'rolled' | 'welded';
 
@@ -29,12 +30,9 @@ export interface ISectionInput {
 }
 
 /** Bad section geometry; `field` is the dotted path of the offending input (e.g. `topFlange.thickness_mm`). */
-export class SectionInputError extends Error {
-  constructor(
-    readonly field: string,
-    message: string,
-  ) {
-    super(`${field}: ${message}`);
+export class SectionInputError extends EngineInputError {
+  constructor(field: string, message: string) {
+    super(field, `${field}: ${message}`);
     this.name = 'SectionInputError';
   }
 }

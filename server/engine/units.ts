@@ -5,6 +5,7 @@
  * (International Yard and Pound Agreement, 1959); the pound-force is 0.45359237 kg × 9.80665 m/s² =
  * 4.4482216152605 N exactly (NIST SP 811, Appendix B). Stress factors are derived from those, never rounded.
  */
+import { EngineInputError } from './input-error';
 
 export type ForceUnit = 'N' | 'kN' | 'kip' | 'lbf';
 export type LengthUnit = 'mm' | 'm' | 'in' | 'ft';
@@ -21,13 +22,13 @@ export const MPA_PER_KSI = N_PER_KIP / (MM_PER_IN * MM_PER_IN);
 export const MPA_PER_PSI = N_PER_LBF / (MM_PER_IN * MM_PER_IN);
 
 /** Thrown for a unit name outside the allowed list; the message lists what is allowed. */
-export class UnitError extends Error {
+export class UnitError extends EngineInputError {
   constructor(
     readonly quantity: 'force' | 'length' | 'stress',
     readonly unit: string,
     readonly allowed: readonly string[],
   ) {
-    super(`Unknown ${quantity} unit '${unit}'; allowed: ${allowed.join(', ')}`);
+    super(`${quantity}Unit`, `Unknown ${quantity} unit '${unit}'; allowed: ${allowed.join(', ')}`);
     this.name = 'UnitError';
   }
 }
