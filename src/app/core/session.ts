@@ -46,11 +46,15 @@ export class Session {
   readonly canCreateProjects = computed(() => this.state()?.canCreateProjects ?? false);
   readonly devOutbox = computed(() => this.state()?.devOutbox ?? false);
 
-  /** Site admins may do everything; others what their role in that project allows. */
+  /**
+   * What the server listed for this project (it applies the role and the archived rule); a site
+   * admin may open projects the list does not name.
+   */
   can(projectId: string, action: ProjectAction): boolean {
     const me = this.state();
     if (!me) return false;
-    return me.user.isAdmin || (me.permissions[projectId]?.includes(action) ?? false);
+    const listed = me.permissions[projectId];
+    return listed ? listed.includes(action) : me.user.isAdmin;
   }
 
   /** Knows whether this user is a member of the project at all (admins see every project). */

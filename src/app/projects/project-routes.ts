@@ -1,0 +1,68 @@
+import { Route, Routes } from '@angular/router';
+import { projectPermissionGuard } from '../core/access-guards';
+import { ProjectAction } from '../core/permissions';
+import { PlannedAction } from './section-placeholder/section-placeholder';
+
+/** One entry of the project navigation; the same permission guards its route. */
+export interface ProjectSection {
+  path: string;
+  label: string;
+  icon: string;
+  permission: ProjectAction;
+}
+
+export const projectSections: readonly ProjectSection[] = [
+  { path: '', label: 'Overview', icon: 'space_dashboard', permission: 'project.read' },
+  { path: 'models', label: 'Models', icon: 'deployed_code', permission: 'model.read' },
+  { path: 'shear-results', label: 'Shear results', icon: 'table_rows', permission: 'model.read' },
+  { path: 'checks', label: 'Checks', icon: 'fact_check', permission: 'check.read' },
+  { path: '3d-view', label: '3D view', icon: 'view_in_ar', permission: 'model.read' },
+  { path: 'findings', label: 'Findings', icon: 'flag', permission: 'check.read' },
+  { path: 'members', label: 'Members', icon: 'group', permission: 'project.read' },
+];
+
+function section(path: string): ProjectSection {
+  return projectSections.find((entry) => entry.path === path)!;
+}
+
+function sectionRoute(path: string, route: Omit<Route, 'path'>): Route {
+  const entry = section(path);
+  return { path, title: entry.label, canActivate: [projectPermissionGuard(entry.permission)], ...route };
+}
+
+// Until a section's feature lands, its page says what it will offer and which of those actions
+// this user's role allows.
+function placeholderRoute(path: string, summary: string, plannedActions: PlannedAction[]): Route {
+  return sectionRoute(path, {
+    loadComponent: () => import('./section-placeholder/section-placeholder').then((m) => m.SectionPlaceholder),
+    data: { heading: section(path).label, summary, plannedActions },
+  });
+}
+
+/** Child routes of `/projects/:projectId`; feature work replaces a placeholder with its page. */
+export const projectRoutes: Routes = [
+  sectionRoute('', {
+    pathMatch: 'full',
+    loadComponent: () => import('./project-overview/project-overview').then((m) => m.ProjectOverview),
+  }),
+  placeholderRoute('models', 'IFC revisions of the structural model and the I-section members found in each.', [
+    { label: 'Upload IFC revision', icon: 'upload', permission: 'model.upload' },
+    { label: 'Compare revisions', icon: 'compare_arrows', permission: 'model.read' },
+  ]),
+  placeholderRoute('shear-results', 'Shear forces imported from the analysis and matched to members.', [
+    { label: 'Import shear results', icon: 'upload_file', permission: 'results.upload' },
+    { label: 'Fix member matching', icon: 'link', permission: 'matching.edit' },
+  ]),
+  placeholderRoute('checks', 'Web shear checks by the elastic method and the chosen design code.', [
+    { label: 'Start a check', icon: 'play_arrow', permission: 'check.run' },
+  ]),
+  placeholderRoute('3d-view', 'The model coloured by utilisation, with a legend.', []),
+  placeholderRoute('findings', 'Overstressed webs tracked from open to verified or accepted.', [
+    { label: 'Create finding', icon: 'add_comment', permission: 'finding.create' },
+    { label: 'Verify findings', icon: 'verified', permission: 'finding.verify' },
+    { label: 'Export BCF, PDF or CSV', icon: 'download', permission: 'export' },
+  ]),
+  sectionRoute('members', {
+    loadComponent: () => import('./project-members/project-members').then((m) => m.ProjectMembers),
+  }),
+];
