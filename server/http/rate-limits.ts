@@ -1,0 +1,56 @@
+import type { Request, RequestHandler } from 'express';
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { RateLimitedError } from './errors';
+
+const MINUTE_ms = 60_000;
+
+/** Limits per window; exported so tests can reach them without guessing. */
+export const RATE_LIMITS = {
+  /** Failed sign-ins for one e-mail address from one client. */
+  signInFailuresPerAccount: { limit: 10, windowMs: 15 * MINUTE_ms },
+  /** Failed sign-ins from one client across all addresses. */
+  signInFailuresPerClient: { limit: 50, windowMs: 15 * MINUTE_ms },
+  /** Unknown, expired or used invitation and reset tokens from one client. */
+  tokenFailuresPerClient: { limit: 30, windowMs: 15 * MINUTE_ms },
+  /** Password-reset e-mails requested for one address from one client (each sends mail). */
+  resetRequestsPerAccount: { limit: 5, windowMs: 60 * MINUTE_ms },
+} as const;
+
+type Limit = (typeof RATE_LIMITS)[keyof typeof RATE_LIMITS];
+
+function limiter(limit: Limit, options: { byAccount: boolean; failuresOnly: boolean }): RequestHandler {
+  return rateLimit({
+    ...limit,
+    standardHeaders: 'draft-7',
+    legacyHeaders: false,
+    skipSuccessfulRequests: options.failuresOnly,
+    keyGenerator: (req) => (options.byAccount ? `${clientKey(req)}|${emailOf(req)}` : clientKey(req)),
+    handler: (_req, _res, next) => next(new RateLimitedError()),
+  });
+}
+
+export function signInRateLimits(): RequestHandler[] {
+  return [
+    limiter(RATE_LIMITS.signInFailuresPerAccount, { byAccount: true, failuresOnly: true }),
+    limiter(RATE_LIMITS.signInFailuresPerClient, { byAccount: false, failuresOnly: true }),
+  ];
+}
+
+/** Guessing token links is what this slows down, so only failed look-ups count. */
+export function tokenLinkRateLimit(): RequestHandler {
+  return limiter(RATE_LIMITS.tokenFailuresPerClient, { byAccount: false, failuresOnly: true });
+}
+
+export function resetRequestRateLimit(): RequestHandler {
+  return limiter(RATE_LIMITS.resetRequestsPerAccount, { byAccount: true, failuresOnly: false });
+}
+
+function clientKey(req: Request): string {
+  return ipKeyGenerator(req.ip ?? 'unknown');
+}
+
+// Runs before validation, so the body may be anything.
+function emailOf(req: Request): string {
+  const email: unknown = (req.body as { email?: unknown } | undefined)?.email;
+  return typeof email === 'string' ? email.trim().toLowerCase() : '';
+}
