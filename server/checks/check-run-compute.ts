@@ -1,0 +1,317 @@
+/**
+ * The computation of a check run: every member of a model revision against its governing shear per load combination,
+ * by one standard with one set of parameters. Pure and synchronous (a worker runs it); plain data in and out.
+ *
+ * Capacity depends only on section, grade, fabrication and parameters, so it is prepared once per distinct
+ * combination of those and cached; each member × combination is then one division. The full engine result with its
+ * clause-by-clause trace is evaluated for the governing combination only.
+ */
+import { sectionKey } from '../catalogue/catalogue';
+import {
+  type CheckFlag,
+  type CheckParams,
+  evaluateCapacity,
+  type PreparedCapacity,
+  prepareCapacity,
+  utilisationOf,
+} from '../engine/check';
+import { type GradeId, isGradeId } from '../engine/grades';
+import { EngineInputError } from '../engine/input-error';
+import type { Fabrication, ISectionInput } from '../engine/section';
+import { shearStressProfile } from '../engine/shear-stress';
+import { formatNumber as f, step } from '../engine/trace';
+import type { MemberFlag, MemberRecord } from '../ifc/model-read-result';
+import type { GoverningShear } from '../results/governing-shear';
+import type { CheckParameters } from './check-parameters';
+
+export type CheckableMember = Pick<MemberRecord, 'globalId' | 'status' | 'reason' | 'profile' | 'material' | 'flags'>;
+
+export type MemberCheckStatus = 'pass' | 'fail' | 'not-checked' | 'not-applicable';
+
+export type RunFlag =
+  | CheckFlag
+  | MemberFlag
+  | 'no-results'
+  | 'fabrication-overridden'
+  | 'resistance-factor-overridden'
+  | 'several-result-keys';
+
+export interface CombinationCheck {
+  combination: string;
+  /** Signed, as imported. */
+  VEd_N: number;
+  utilisation: number;
+  station_mm?: number;
+  row: number;
+  memberKey: string;
+}
+
+export interface GoverningCheck extends CombinationCheck {
+  VRd_N: number;
+  /** Elastic τ = VQ/(It) at its peak, and the clear-web average V/(hw·tw), both for the governing |VEd|. */
+  tauMax_MPa: number;
+  tauAvgWeb_MPa: number;
+  /** EN 1993-1-1 (6.19)/(6.20), reported beside the check; null for AISC. */
+  elasticUtilisation: number | null;
+}
+
+export interface MemberCheck {
+  globalId: string;
+  status: MemberCheckStatus;
+  /** Passing, but at or above the warning ratio. */
+  warning: boolean;
+  /** Why a member was not checked or not applicable. */
+  reason?: string;
+  grade: GradeId | null;
+  fy_MPa: number | null;
+  fabrication: Fabrication | null;
+  governing: GoverningCheck | null;
+  combinations: CombinationCheck[];
+  flags: RunFlag[];
+}
+
+export interface CheckRunSummary {
+  members: number;
+  pass: number;
+  fail: number;
+  notChecked: number;
+  notApplicable: number;
+  warnings: number;
+  maxUtilisation: number | null;
+  maxUtilisationGlobalId: string | null;
+  /** Distinct capacities prepared (section × grade × fabrication). */
+  capacitiesPrepared: number;
+}
+
+export interface CheckRunComputation {
+  members: MemberCheck[];
+  summary: CheckRunSummary;
+}
+
+export interface CheckRunProgress {
+  done: number;
+  total: number;
+}
+
+export interface CheckRunInput {
+  members: readonly CheckableMember[];
+  /** Governing shear per load combination, by member GlobalId (see governingShearsByMember). */
+  shears: ReadonlyMap<string, readonly GoverningShear[]>;
+  parameters: CheckParameters;
+  onProgress?: (progress: CheckRunProgress) => void;
+}
+
+/** About a hundred progress reports per run, whatever its size. */
+const PROGRESS_STEPS = 100;
+
+export function computeCheckRun(input: CheckRunInput): CheckRunComputation {
+  const { members, shears, parameters, onProgress } = input;
+  const capacities = new CapacityCache(parameters);
+  const overrides = fabricationOverrides(parameters);
+  const every = Math.max(1, Math.ceil(members.length / PROGRESS_STEPS));
+  const results: MemberCheck[] = [];
+  members.forEach((member, index) => {
+    results.push(checkOneMember(member, shears.get(member.globalId) ?? [], parameters, overrides, capacities));
+    if (onProgress && ((index + 1) % every === 0 || index + 1 === members.length)) {
+      onProgress({ done: index + 1, total: members.length });
+    }
+  });
+  return { members: results, summary: summarise(results, capacities.size) };
+}
+
+function checkOneMember(
+  member: CheckableMember,
+  shears: readonly GoverningShear[],
+  parameters: CheckParameters,
+  overrides: ReadonlyMap<string, Fabrication>,
+  capacities: CapacityCache,
+): MemberCheck {
+  const memberFlags: RunFlag[] = [...member.flags];
+  const unchecked = (status: MemberCheckStatus, reason: string, flags: RunFlag[] = memberFlags): MemberCheck => ({
+    globalId: member.globalId,
+    status,
+    warning: false,
+    reason,
+    grade: null,
+    fy_MPa: null,
+    fabrication: member.profile?.fabrication ?? null,
+    governing: null,
+    combinations: [],
+    flags,
+  });
+  if (member.status === 'not-applicable') return unchecked('not-applicable', member.reason ?? 'The profile is not an I-section.');
+  if (!member.profile) return unchecked('not-checked', member.reason ?? 'No I-section could be read for this member.');
+  if (shears.length === 0) return unchecked('not-checked', 'No shear results were matched to this member.', [...memberFlags, 'no-results']);
+
+  const overridden = overrides.get(sectionKey(member.profile.name));
+  const fabrication = overridden ?? member.profile.fabrication;
+  const { depth_mm, webThickness_mm, topFlange, bottomFlange } = member.profile;
+  const section: ISectionInput = { depth_mm, webThickness_mm, topFlange, bottomFlange, fabrication };
+  const material = materialOf(member, parameters);
+  const prepared = capacities.get(section, material);
+  if (prepared instanceof EngineInputError) {
+    return unchecked('not-checked', `The section cannot be checked: ${prepared.message}.`, [...memberFlags, 'invalid-profile']);
+  }
+  const { capacity } = prepared;
+
+  const combinations = shears.map((shear) => ({
+    combination: shear.combination,
+    VEd_N: shear.shear_N,
+    utilisation: utilisationOf(capacity, shear.shear_N),
+    ...(shear.station_mm !== undefined && { station_mm: shear.station_mm }),
+    row: shear.row,
+    memberKey: shear.memberKey,
+  }));
+  let governing = combinations[0];
+  for (const combination of combinations) if (combination.utilisation > governing.utilisation) governing = combination;
+
+  const contextFlags: CheckFlag[] = [];
+  if (material.assumed) contextFlags.push('assumed-grade');
+  if (member.profile.source === 'catalogue') contextFlags.push('catalogue-section');
+  const result = evaluateCapacity(capacity, governing.VEd_N, contextFlags);
+  const runFlags: RunFlag[] = [];
+  if (overridden && overridden !== member.profile.fabrication) runFlags.push('fabrication-overridden');
+  if (prepared.resistanceOverridden) runFlags.push('resistance-factor-overridden');
+  if (new Set(shears.map((shear) => shear.memberKey)).size > 1) runFlags.push('several-result-keys');
+  const magnitude = Math.abs(governing.VEd_N);
+  return {
+    globalId: member.globalId,
+    status: result.status,
+    warning: result.warning,
+    grade: material.grade ?? null,
+    fy_MPa: result.fy_MPa,
+    fabrication,
+    governing: {
+      ...governing,
+      VRd_N: result.VRd_N,
+      tauMax_MPa: magnitude * prepared.tauMaxPerNewton_MPa,
+      tauAvgWeb_MPa: magnitude * prepared.tauAvgWebPerNewton_MPa,
+      elasticUtilisation: result.elasticUtilisation,
+    },
+    combinations,
+    flags: [...new Set<RunFlag>([...memberFlags, ...result.flags, ...runFlags])],
+  };
+}
+
+interface MaterialChoice {
+  grade?: GradeId;
+  fy_MPa?: number;
+  assumed: boolean;
+}
+
+/** The member's grade; its yield strength when the grade is not one the engine tabulates; else the run's default grade. */
+function materialOf(member: CheckableMember, parameters: CheckParameters): MaterialChoice {
+  const material = member.material;
+  if (material && !material.assumed) {
+    if (isGradeId(material.grade)) return { grade: material.grade, assumed: false };
+    if (Number.isFinite(material.fy_MPa) && material.fy_MPa > 0) return { fy_MPa: material.fy_MPa, assumed: false };
+  }
+  return { grade: parameters.defaultGrade, assumed: true };
+}
+
+function fabricationOverrides(parameters: CheckParameters): Map<string, Fabrication> {
+  return new Map(Object.entries(parameters.fabricationOverrides).map(([name, fabrication]) => [sectionKey(name), fabrication]));
+}
+
+interface PreparedMember {
+  capacity: PreparedCapacity;
+  /** τ is proportional to V, so the profile is computed once for 1 N and scaled. */
+  tauMaxPerNewton_MPa: number;
+  tauAvgWebPerNewton_MPa: number;
+  resistanceOverridden: boolean;
+}
+
+/** Prepared capacities by section × material; bad sections are cached as their error, so each is reported once per run. */
+class CapacityCache {
+  private readonly entries = new Map<string, PreparedMember | EngineInputError>();
+  private readonly engineParams: CheckParams;
+
+  constructor(private readonly parameters: CheckParameters) {
+    this.engineParams = engineParamsOf(parameters);
+  }
+
+  get size(): number {
+    return this.entries.size;
+  }
+
+  get(section: ISectionInput, material: MaterialChoice): PreparedMember | EngineInputError {
+    const key = JSON.stringify([section, material.grade ?? null, material.fy_MPa ?? null]);
+    let entry = this.entries.get(key);
+    if (!entry) {
+      entry = this.prepare(section, material);
+      this.entries.set(key, entry);
+    }
+    return entry;
+  }
+
+  private prepare(section: ISectionInput, material: MaterialChoice): PreparedMember | EngineInputError {
+    try {
+      const prepared = prepareCapacity(section, { grade: material.grade, fy_MPa: material.fy_MPa }, this.parameters.standard, this.engineParams);
+      const capacity = withResistanceFactor(prepared, this.parameters);
+      const unit = shearStressProfile(capacity.section, 1);
+      return {
+        capacity,
+        tauMaxPerNewton_MPa: unit.tauMax_MPa,
+        tauAvgWebPerNewton_MPa: unit.webAverageClear_MPa,
+        resistanceOverridden: capacity !== prepared,
+      };
+    } catch (error) {
+      if (error instanceof EngineInputError) return error;
+      throw error;
+    }
+  }
+}
+
+function engineParamsOf(parameters: CheckParameters): CheckParams {
+  const shared = { warningRatio: parameters.warningRatio, stiffenerSpacing_mm: parameters.stiffenerSpacing_mm };
+  if (parameters.standard !== 'en1993-1-1') return shared;
+  const { gammaM0, gammaM1, eta, yieldRule, endPost } = parameters;
+  return { ...shared, gammaM0, gammaM1, yieldRule, endPost, ...(eta !== null && { eta }) };
+}
+
+/**
+ * A project's own φv (LRFD) or Ωv (ASD) in place of the code's: available strength = φv·Vn or Vn/Ωv, with the step
+ * in the trace so the calculation sheet shows it.
+ */
+function withResistanceFactor(capacity: PreparedCapacity, parameters: CheckParameters): PreparedCapacity {
+  if (!capacity.aisc) return capacity;
+  const { vn_N } = capacity.aisc;
+  if (parameters.standard === 'aisc360-22-lrfd' && parameters.phiV !== null) {
+    const VRd_N = parameters.phiV * vn_N;
+    const override = step('AISC 360-22 §G1', 'Available shear strength with the project’s resistance factor', 'φv·Vn', `${f(parameters.phiV)} × ${f(vn_N / 1000)} kN`, VRd_N / 1000, 'kN');
+    return { ...capacity, VRd_N, trace: [...capacity.trace, override] };
+  }
+  if (parameters.standard === 'aisc360-22-asd' && parameters.omegaV !== null) {
+    const VRd_N = vn_N / parameters.omegaV;
+    const override = step('AISC 360-22 §G1', 'Allowable shear strength with the project’s safety factor', 'Vn/Ωv', `${f(vn_N / 1000)} kN / ${f(parameters.omegaV)}`, VRd_N / 1000, 'kN');
+    return { ...capacity, VRd_N, trace: [...capacity.trace, override] };
+  }
+  return capacity;
+}
+
+function summarise(results: readonly MemberCheck[], capacitiesPrepared: number): CheckRunSummary {
+  const summary: CheckRunSummary = {
+    members: results.length,
+    pass: 0,
+    fail: 0,
+    notChecked: 0,
+    notApplicable: 0,
+    warnings: 0,
+    maxUtilisation: null,
+    maxUtilisationGlobalId: null,
+    capacitiesPrepared,
+  };
+  for (const result of results) {
+    if (result.status === 'pass') summary.pass++;
+    else if (result.status === 'fail') summary.fail++;
+    else if (result.status === 'not-checked') summary.notChecked++;
+    else summary.notApplicable++;
+    if (result.warning) summary.warnings++;
+    const utilisation = result.governing?.utilisation;
+    if (utilisation !== undefined && (summary.maxUtilisation === null || utilisation > summary.maxUtilisation)) {
+      summary.maxUtilisation = utilisation;
+      summary.maxUtilisationGlobalId = result.globalId;
+    }
+  }
+  return summary;
+}

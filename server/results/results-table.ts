@@ -1,0 +1,151 @@
+/**
+ * Opens a results file (CSV or XLSX, told apart by content, not by name) as a header plus a stream of data records,
+ * the one shape both the preview and the reader work on.
+ */
+import fs from 'node:fs/promises';
+import { type Cell, cellText, type DecimalSeparator, isBlankCell, type RawRecord } from './cell-values';
+import { csvRecordChunks } from './csv-records';
+import { type CsvFormat, detectEncoding, firstRecordIsHeader, sniffCsvFormat } from './csv-format';
+import { ResultsFileError } from './results-file-error';
+import { listXlsxSheets, type XlsxSheet, xlsxRecordChunks } from './xlsx-workbook';
+
+export type ResultsFileKind = 'csv' | 'xlsx';
+
+export interface ResultsTableOptions {
+  /** XLSX: the sheet to read; required when the workbook has several. */
+  sheet?: string;
+  /** CSV: overrides of the sniffed format. */
+  csv?: Partial<CsvFormat>;
+  chunkSize?: number;
+}
+
+export interface ResultsTable {
+  kind: ResultsFileKind;
+  /** CSV only: the format used (sniffed, then overridden by the options). */
+  csv?: CsvFormat;
+  /** XLSX only: all worksheet names in tab order, and the one read. */
+  sheets?: string[];
+  sheet?: string;
+  decimalSeparator: DecimalSeparator;
+  /** Row of the header, or null when the file has none (columns are then called 'Column 1', 'Column 2', …). */
+  headerRow: number | null;
+  headers: string[];
+  /** The data records after the header. Read to the end or call `return()` to release the file. */
+  records: AsyncGenerator<RawRecord[]>;
+}
+
+const HEAD_BYTES = 64 * 1024;
+const DEFAULT_CHUNK = 1000;
+/** Records looked at to decide whether an XLSX sheet starts with a header. */
+const HEADER_LOOKAHEAD = 50;
+
+export function columnName(index: number): string {
+  return `Column ${index + 1}`;
+}
+
+export async function openResultsTable(path: string, options: ResultsTableOptions = {}): Promise<ResultsTable> {
+  const { head, complete } = await readHead(path);
+  if (head.length === 0) throw emptyFile();
+  const chunkSize = options.chunkSize ?? DEFAULT_CHUNK;
+  if (isZip(head)) return openXlsx(path, options.sheet, chunkSize);
+  if (isLegacyExcel(head)) {
+    throw new ResultsFileError('unsupported_format', 'This is an old-style .xls workbook. Save it as .xlsx or CSV and upload it again.');
+  }
+  const encoding = options.csv?.encoding ?? detectEncoding(head);
+  const sample = head.toString(encoding).replace(/^\uFEFF/, '');
+  if (sample.trim() === '') throw emptyFile();
+  const format: CsvFormat = { encoding, ...sniffCsvFormat(sample, complete), ...options.csv };
+  const { headerRow, headers, records } = await splitHeader(csvRecordChunks(path, format, chunkSize), () => format.hasHeaderRow);
+  return { kind: 'csv', csv: format, decimalSeparator: format.decimalSeparator, headerRow, headers, records };
+}
+
+async function openXlsx(path: string, wanted: string | undefined, chunkSize: number): Promise<ResultsTable> {
+  const sheets = await listXlsxSheets(path);
+  const names = sheets.map((sheet) => sheet.name);
+  const sheet = chooseSheet(sheets, wanted);
+  const { headerRow, headers, records } = await splitHeader(xlsxRecordChunks(path, sheet, chunkSize), (first) =>
+    firstRecordIsHeader(first.map((record) => record.cells.map(cellText))),
+  );
+  // Text cells in a workbook carry no locale, and numeric cells are numbers already.
+  return { kind: 'xlsx', sheets: names, sheet: sheet.name, decimalSeparator: '.', headerRow, headers, records };
+}
+
+function chooseSheet(sheets: XlsxSheet[], wanted: string | undefined): XlsxSheet {
+  const names = sheets.map((sheet) => sheet.name);
+  if (sheets.length === 0) throw new ResultsFileError('unreadable_xlsx', 'The XLSX workbook has no worksheets.');
+  if (wanted === undefined) {
+    if (sheets.length === 1) return sheets[0];
+    throw new ResultsFileError('sheet_required', `The workbook has ${sheets.length} sheets (${names.join(', ')}). Choose the sheet that holds the shear results.`, {
+      sheets: names,
+    });
+  }
+  const exact = sheets.find((sheet) => sheet.name === wanted);
+  const loose = sheets.filter((sheet) => sheet.name.trim().toLowerCase() === wanted.trim().toLowerCase());
+  const found = exact ?? (loose.length === 1 ? loose[0] : undefined);
+  if (found) return found;
+  throw new ResultsFileError('sheet_not_found', `The workbook has no sheet '${wanted}'. Its sheets are: ${names.join(', ')}.`, {
+    sheets: names,
+  });
+}
+
+/**
+ * Takes the header off the front of the record stream. `isHeader` sees the first non-blank records of the first
+ * chunk that has any; the remaining records stream on unchanged.
+ */
+async function splitHeader(
+  chunks: AsyncGenerator<RawRecord[]>,
+  isHeader: (firstRecords: RawRecord[]) => boolean,
+): Promise<Pick<ResultsTable, 'headerRow' | 'headers' | 'records'>> {
+  let first: RawRecord[] = [];
+  for (;;) {
+    const next = await chunks.next();
+    if (next.done) throw emptyFile();
+    first = next.value.filter((record) => !isBlankRecord(record.cells));
+    if (first.length > 0) break;
+  }
+  const lookahead = first.slice(0, HEADER_LOOKAHEAD);
+  const header = isHeader(lookahead) ? first[0] : undefined;
+  const width = Math.max(...lookahead.map((record) => record.cells.length));
+  const headers = header
+    ? header.cells.map((cell, index) => cellText(cell) || columnName(index))
+    : Array.from({ length: width }, (_, index) => columnName(index));
+  const afterHeader = header ? first.slice(1) : first;
+  return { headerRow: header?.row ?? null, headers, records: prepend(afterHeader, chunks) };
+}
+
+async function* prepend(first: RawRecord[], rest: AsyncGenerator<RawRecord[]>): AsyncGenerator<RawRecord[]> {
+  try {
+    if (first.length > 0) yield first;
+    yield* rest;
+  } finally {
+    await rest.return(undefined);
+  }
+}
+
+export function isBlankRecord(cells: readonly Cell[]): boolean {
+  return cells.every(isBlankCell);
+}
+
+async function readHead(path: string): Promise<{ head: Buffer; complete: boolean }> {
+  const file = await fs.open(path, 'r');
+  try {
+    const buffer = Buffer.alloc(HEAD_BYTES);
+    const { bytesRead } = await file.read(buffer, 0, HEAD_BYTES, 0);
+    return { head: buffer.subarray(0, bytesRead), complete: bytesRead < HEAD_BYTES };
+  } finally {
+    await file.close();
+  }
+}
+
+function isZip(head: Buffer): boolean {
+  return head.length >= 4 && head.readUInt32LE(0) === 0x04034b50;
+}
+
+/** The OLE2 compound-file signature of .xls workbooks. */
+function isLegacyExcel(head: Buffer): boolean {
+  return head.length >= 8 && head.subarray(0, 8).equals(Buffer.from([0xd0, 0xcf, 0x11, 0xe0, 0xa1, 0xb1, 0x1a, 0xe1]));
+}
+
+function emptyFile(): ResultsFileError {
+  return new ResultsFileError('empty_file', 'The file is empty: it holds no header and no rows.');
+}
