@@ -154,13 +154,10 @@ export function validateSection(input: ISectionInput): { top: FlangeGeometry; bo
   }
   const top = validateFlange(input.topFlange, 'topFlange', tw);
   const bottom = validateFlange(input.bottomFlange, 'bottomFlange', tw);
-  const flanges_mm = input.topFlange.thickness_mm + input.bottomFlange.thickness_mm;
-  if (flanges_mm >= depth) {
-    const thicker = input.topFlange.thickness_mm >= input.bottomFlange.thickness_mm ? 'topFlange' : 'bottomFlange';
-    throw new SectionInputError(
-      `${thicker}.thickness_mm`,
-      `flanges (${input.topFlange.thickness_mm} + ${input.bottomFlange.thickness_mm} mm) leave no web in a depth of ${depth} mm`,
-    );
+  for (const [flange, name] of [[input.topFlange, 'topFlange'], [input.bottomFlange, 'bottomFlange']] as const) {
+    if (flange.thickness_mm >= depth / 2) {
+      throw new SectionInputError(`${name}.thickness_mm`, `(${flange.thickness_mm} mm) is not less than half the depth (${depth / 2} mm)`);
+    }
   }
   if (top.filletWebTangent_mm + bottom.filletWebTangent_mm > depth + 1e-9) {
     const larger = top.filletRadius_mm >= bottom.filletRadius_mm ? 'topFlange' : 'bottomFlange';
