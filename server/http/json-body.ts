@@ -10,7 +10,10 @@ const JSON_LIMIT = '1mb';
  */
 export function jsonBody(): RequestHandler[] {
   const refuseOtherTypes: RequestHandler = (req, _res, next) => {
-    next(req.is(['application/json', 'multipart/form-data']) === false ? new UnsupportedMediaError() : undefined);
+    // type-is counts "Content-Length: 0" as a body; an empty POST (sign-out, archive) is fine.
+    const empty = req.headers['content-length'] === '0';
+    const refused = !empty && req.is(['application/json', 'multipart/form-data']) === false;
+    next(refused ? new UnsupportedMediaError() : undefined);
   };
   return [express.json({ limit: JSON_LIMIT }), refuseOtherTypes];
 }
