@@ -63,6 +63,10 @@ describe('firstRecordIsHeader', () => {
   it('does when it is the only record (a header without rows)', () => {
     expect(firstRecordIsHeader([['member', 'shear']])).toBe(true);
   });
+
+  it('does when no record holds a number (all text cannot tell, and exports usually have a header)', () => {
+    expect(firstRecordIsHeader([['member', 'shear'], ['B1', 'n/a']])).toBe(true);
+  });
 });
 
 describe('detectEncoding', () => {

@@ -106,12 +106,13 @@ function modeOf(values: number[]): number {
   return mode;
 }
 
-/** A first record without any number is a header, unless nothing after it holds a number either. */
+/**
+ * A first record without any number is a header. When no record has a number either the file cannot tell; results
+ * exports carry a header far more often than not, so it is taken as one (and a wrong guess shows in the preview).
+ */
 export function firstRecordIsHeader(records: readonly (readonly string[])[]): boolean {
-  const [first, ...rest] = records;
-  if (!first) return false;
-  if (first.some((cell) => cell.trim() !== '' && looksNumeric(cell))) return false;
-  return rest.length === 0 || rest.some((record) => record.some((cell) => looksNumeric(cell)));
+  const [first] = records;
+  return first !== undefined && !first.some((cell) => cell.trim() !== '' && looksNumeric(cell));
 }
 
 function sniffDecimalSeparator(data: readonly (readonly string[])[]): DecimalSeparator {

@@ -89,28 +89,28 @@ function chooseSheet(sheets: XlsxSheet[], wanted: string | undefined): XlsxSheet
 }
 
 /**
- * Takes the header off the front of the record stream. `isHeader` sees the first non-blank records of the first
- * chunk that has any; the remaining records stream on unchanged.
+ * Takes the header off the front of the record stream (blank records before it are dropped). `isHeader` sees the
+ * first non-blank records of the first chunk that has any; the records after the header stream on unchanged.
  */
 async function splitHeader(
   chunks: AsyncGenerator<RawRecord[]>,
   isHeader: (firstRecords: RawRecord[]) => boolean,
 ): Promise<Pick<ResultsTable, 'headerRow' | 'headers' | 'records'>> {
-  let first: RawRecord[] = [];
-  for (;;) {
+  let chunk: RawRecord[];
+  let start: number;
+  do {
     const next = await chunks.next();
     if (next.done) throw emptyFile();
-    first = next.value.filter((record) => !isBlankRecord(record.cells));
-    if (first.length > 0) break;
-  }
-  const lookahead = first.slice(0, HEADER_LOOKAHEAD);
-  const header = isHeader(lookahead) ? first[0] : undefined;
+    chunk = next.value;
+    start = chunk.findIndex((record) => !isBlankRecord(record.cells));
+  } while (start < 0);
+  const lookahead = chunk.slice(start).filter((record) => !isBlankRecord(record.cells)).slice(0, HEADER_LOOKAHEAD);
+  const header = isHeader(lookahead) ? chunk[start] : undefined;
   const width = Math.max(...lookahead.map((record) => record.cells.length));
   const headers = header
     ? header.cells.map((cell, index) => cellText(cell) || columnName(index))
     : Array.from({ length: width }, (_, index) => columnName(index));
-  const afterHeader = header ? first.slice(1) : first;
-  return { headerRow: header?.row ?? null, headers, records: prepend(afterHeader, chunks) };
+  return { headerRow: header?.row ?? null, headers, records: prepend(chunk.slice(header ? start + 1 : start), chunks) };
 }
 
 async function* prepend(first: RawRecord[], rest: AsyncGenerator<RawRecord[]>): AsyncGenerator<RawRecord[]> {
