@@ -11,11 +11,9 @@ import { bootstrapApplication } from '@angular/platform-browser';
 import { provideRouter, TitleStrategy, withComponentInputBinding, withRouterConfig } from '@angular/router';
 import { App } from './app/app';
 import { appRoutes } from './app/app.routes';
-import { apiErrorInterceptor } from './app/core/api-error.interceptor';
-import { csrfInterceptor } from './app/core/csrf.interceptor';
+import { apiInterceptors } from './app/core/api-interceptors';
 import { ErrorReporter } from './app/core/error-reporter';
 import { PageTitle } from './app/core/page-title';
-import { requestProgressInterceptor } from './app/core/request-progress';
 
 bootstrapApplication(App, {
   providers: [
@@ -31,8 +29,7 @@ bootstrapApplication(App, {
       withRouterConfig({ paramsInheritanceStrategy: 'always' }),
     ),
     { provide: TitleStrategy, useClass: PageTitle },
-    // Outermost first: progress sees every request; the CSRF retry happens before errors are mapped.
-    provideHttpClient(withInterceptors([requestProgressInterceptor, apiErrorInterceptor, csrfInterceptor])),
+    provideHttpClient(withInterceptors(apiInterceptors)),
     provideAppInitializer(() => {
       // Icons come from the Material Symbols Outlined font shipped in fonts/.
       inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');

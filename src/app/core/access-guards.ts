@@ -6,10 +6,10 @@ import { signInUrl } from './sign-in-redirect';
 
 export const NOT_FOUND_PATH = '/not-found';
 
-// Keeps the address the user typed, and says the same for "missing" and "not yours" so no
-// project's existence leaks.
-function notFound(router: Router): RedirectCommand {
-  return new RedirectCommand(router.parseUrl(NOT_FOUND_PATH), { skipLocationChange: true });
+// Shows the not-found page under the address the user asked for, and says the same for "missing"
+// and "not yours" so no project's existence leaks.
+function notFound(router: Router, requestedUrl: string): RedirectCommand {
+  return new RedirectCommand(router.parseUrl(NOT_FOUND_PATH), { browserUrl: requestedUrl });
 }
 
 function projectIdOf(route: ActivatedRouteSnapshot): string | null {
@@ -31,7 +31,7 @@ export const adminGuard: CanActivateFn = async (_route, state) => {
   const router = inject(Router);
   const me = await session.ensureLoaded();
   if (!me) return signInUrl(router, state.url);
-  return me.user.isAdmin || notFound(router);
+  return me.user.isAdmin || notFound(router, state.url);
 };
 
 /** Lets the user in when their role in the route's project (`:projectId`) allows `action`. */
@@ -44,6 +44,6 @@ export function projectPermissionGuard(action: ProjectAction): CanActivateFn {
     // A project we have not heard of may be a membership granted since the session was loaded.
     if (me && projectId && !session.knowsProject(projectId)) me = await session.refresh();
     if (!me) return signInUrl(router, state.url);
-    return (!!projectId && session.can(projectId, action)) || notFound(router);
+    return (!!projectId && session.can(projectId, action)) || notFound(router, state.url);
   };
 }

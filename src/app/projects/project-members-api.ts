@@ -5,10 +5,9 @@ import { ProjectRole } from '../core/permissions';
 import { Member } from './project';
 
 /** What adding by e-mail did: an existing user became a member, or an invitation went out. */
-export interface MemberAddition {
-  member?: Member;
-  invitation?: { id: string; email: string; expiresAt: string };
-}
+export type MemberAddition =
+  | { outcome: 'added'; member: Member }
+  | { outcome: 'invited'; invitation: { id: string; email: string; expiresAt: string } };
 
 /** Writes to `/api/projects/:projectId/members`; the page reads the list with httpResource. */
 @Injectable({ providedIn: 'root' })

@@ -12,8 +12,11 @@ export function standardLabel(id: StandardId): string {
   return STANDARDS.find((standard) => standard.id === id)?.label ?? id;
 }
 
-/** Field lengths the server accepts (server/projects/project.entity.ts). */
+/** Field lengths the server accepts (server/projects/project-fields.ts). */
 export const PROJECT_FIELD_LIMITS = { name: 120, code: 32, description: 2000, client: 200, location: 200 } as const;
+
+/** Project codes as the server accepts them: they appear on drawings and in file names. */
+export const PROJECT_CODE_PATTERN = /^[A-Za-z0-9][A-Za-z0-9._-]{0,31}$/;
 
 /** A project as the API lists it; `role` is the signed-in user's role (null for a site admin who is not a member). */
 export interface Project {

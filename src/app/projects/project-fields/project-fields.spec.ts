@@ -11,10 +11,14 @@ describe('project form', () => {
     expect(form.valid).toBe(true);
   });
 
-  it('rejects a code longer than the 32 characters the server stores', () => {
+  it.each([
+    ['longer than 32 characters', 'X'.repeat(33)],
+    ['with a space', 'DR 01'],
+    ['starting with a dash', '-DR01'],
+  ])('rejects a code %s, as the server would', (_case, code) => {
     const form = createProjectForm();
-    form.patchValue({ name: 'Depot roof', code: 'X'.repeat(33) });
-    expect(form.controls.code.hasError('maxlength')).toBe(true);
+    form.patchValue({ name: 'Depot roof', code });
+    expect(form.controls.code.hasError('pattern')).toBe(true);
   });
 
   it('starts from the project when editing and trims what is sent', () => {

@@ -3,7 +3,7 @@ import { AbstractControl, FormControl, FormGroup, ReactiveFormsModule, Validatio
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import { Project, PROJECT_FIELD_LIMITS, ProjectDraft, StandardId, STANDARDS } from '../project';
+import { Project, PROJECT_CODE_PATTERN, PROJECT_FIELD_LIMITS, ProjectDraft, StandardId, STANDARDS } from '../project';
 
 export type ProjectForm = FormGroup<{
   name: FormControl<string>;
@@ -28,8 +28,11 @@ function text(value: string, maxLength: number, required = false): FormControl<s
 export function createProjectForm(project?: Project): ProjectForm {
   return new FormGroup({
     name: text(project?.name ?? '', PROJECT_FIELD_LIMITS.name, true),
-    code: text(project?.code ?? '', PROJECT_FIELD_LIMITS.code, true),
-    standard: new FormControl<StandardId>(project?.standard ?? 'en1993-1-1', { nonNullable: true }),
+    code: new FormControl(project?.code ?? '', {
+      nonNullable: true,
+      validators: [notBlank, Validators.pattern(PROJECT_CODE_PATTERN)],
+    }),
+    standard: new FormControl<StandardId>(project?.standard ?? 'aisc360-22-lrfd', { nonNullable: true }),
     client: text(project?.client ?? '', PROJECT_FIELD_LIMITS.client),
     location: text(project?.location ?? '', PROJECT_FIELD_LIMITS.location),
     description: text(project?.description ?? '', PROJECT_FIELD_LIMITS.description),

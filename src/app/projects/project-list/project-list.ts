@@ -28,7 +28,8 @@ export class ProjectList {
   protected readonly showArchived = signal(false);
   protected readonly projects = httpResource<{ projects: Project[] }>(() => ({
     url: '/api/projects',
-    params: { archived: String(this.showArchived()) },
+    // Archived projects join the list, marked as such, rather than replacing it.
+    params: { archived: this.showArchived() ? 'all' : 'false' },
   }));
 
   protected readonly rows = computed(() =>

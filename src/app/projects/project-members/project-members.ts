@@ -114,6 +114,6 @@ export class ProjectMembers {
 }
 
 function describeAddition(addition: MemberAddition, email: string): string {
-  if (addition.invitation) return `${email} has no account yet: an invitation was sent.`;
-  return `${addition.member?.name ?? email} was added.`;
+  if (addition.outcome === 'invited') return `${email} has no account yet: an invitation was sent.`;
+  return `${addition.member.name} was added as ${ROLE_LABELS[addition.member.role].toLowerCase()}.`;
 }

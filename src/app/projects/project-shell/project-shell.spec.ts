@@ -1,0 +1,124 @@
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { apiInterceptors } from '../../core/api-interceptors';
+import { nextRequest, settle } from '../../core/http.testing';
+import { ProjectAction, ProjectRole } from '../../core/permissions';
+import { Session } from '../../core/session';
+import { meFor, ROLE_ACTIONS, TEST_PROJECT_ID } from '../../core/session.testing';
+import { Project } from '../project';
+import { projectRoutes } from '../project-routes';
+import { ProjectShell } from './project-shell';
+
+const project: Project = {
+  id: TEST_PROJECT_ID,
+  name: 'Ferry terminal canopy',
+  code: 'FTC-2',
+  description: '',
+  client: '',
+  location: '',
+  standard: 'en1993-1-1',
+  archived: false,
+  createdAt: '2026-03-02T08:00:00Z',
+};
+
+const ALL_SECTIONS = ['Overview', 'Models', 'Shear results', 'Checks', '3D view', 'Findings', 'Members'];
+
+describe('ProjectShell navigation', () => {
+  let backend: HttpTestingController;
+
+  beforeEach(() => {
+    TestBed.configureTestingModule({
+      providers: [
+        provideRouter(
+          [{ path: 'projects/:projectId', component: ProjectShell, children: projectRoutes }],
+          withComponentInputBinding(),
+          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
+        ),
+        provideHttpClient(withInterceptors(apiInterceptors)),
+        provideHttpClientTesting(),
+      ],
+    });
+    backend = TestBed.inject(HttpTestingController);
+  });
+
+  afterEach(() => backend.verify());
+
+  /** Opens a section as `role`, answering the project request with `permissions`. */
+  async function openAs(
+    role: ProjectRole,
+    section: string,
+    permissions: ProjectAction[] = ROLE_ACTIONS[role],
+  ): Promise<HTMLElement> {
+    const loading = TestBed.inject(Session).refresh();
+    backend.expectOne('/api/auth/me').flush(meFor(role));
+    await loading;
+    const harness = await RouterTestingHarness.create();
+    const opening = harness.navigateByUrl(`/projects/${TEST_PROJECT_ID}${section ? `/${section}` : ''}`);
+    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project, role, permissions });
+    await opening;
+    await settle();
+    harness.detectChanges();
+    return harness.fixture.nativeElement as HTMLElement;
+  }
+
+  // What a sighted user reads: icon ligature names are not part of the label.
+  function label(element: Element): string {
+    const copy = element.cloneNode(true) as Element;
+    copy.querySelectorAll('mat-icon').forEach((icon) => icon.remove());
+    return copy.textContent!.trim();
+  }
+
+  function sectionLinks(page: HTMLElement): string[] {
+    return [...page.querySelectorAll('nav[aria-label="Project sections"] a')].map(label);
+  }
+
+  function buttons(page: HTMLElement): string[] {
+    return [...page.querySelectorAll('tl-section-placeholder button')].map(label);
+  }
+
+  it.each(['coordinator', 'engineer', 'reviewer'] as const)('shows every section to a %s, who may read them all', async (role) => {
+    const page = await openAs(role, 'checks');
+    expect(sectionLinks(page)).toEqual(ALL_SECTIONS);
+    expect(label(page.querySelector('a[aria-current="page"]')!)).toBe('Checks');
+    expect(page.querySelector('.project-heading')?.textContent).toContain('Ferry terminal canopy');
+  });
+
+  it('offers the upload of a model revision to a coordinator only', async () => {
+    expect(buttons(await openAs('coordinator', 'models'))).toEqual(['Upload IFC revision', 'Compare revisions']);
+  });
+
+  it.each(['engineer', 'reviewer'] as const)('does not offer a model upload to a %s', async (role) => {
+    const actions = buttons(await openAs(role, 'models'));
+    expect(actions).toEqual(['Compare revisions']);
+  });
+
+  it('offers starting a check to an engineer', async () => {
+    expect(buttons(await openAs('engineer', 'checks'))).toEqual(['Start a check']);
+  });
+
+  it.each(['coordinator', 'reviewer'] as const)('does not offer starting a check to a %s', async (role) => {
+    expect(buttons(await openAs(role, 'checks'))).toEqual([]);
+  });
+
+  it('offers verifying findings to a reviewer only', async () => {
+    const actions = buttons(await openAs('reviewer', 'findings'));
+    expect(actions).toContain('Verify findings');
+    expect(actions).not.toContain('Create finding');
+  });
+
+  it('hides a section whose permission the project answer leaves out', async () => {
+    // A role that could read the project but not its models would not see the model sections.
+    const page = await openAs('reviewer', '', ['project.read', 'check.read']);
+    expect(sectionLinks(page)).toEqual(['Overview', 'Checks', 'Findings', 'Members']);
+  });
+
+  it('follows the archived rule the server applied: no uploads in an archived project', async () => {
+    const readOnly = ROLE_ACTIONS.coordinator.filter((action) =>
+      ['project.read', 'model.read', 'check.read', 'export', 'project.archive'].includes(action),
+    );
+    expect(buttons(await openAs('coordinator', 'models', readOnly))).toEqual(['Compare revisions']);
+  });
+});

@@ -1,0 +1,200 @@
+/**
+ * Each demo role signs in through the real client, served by the real server, in Debian's chromium,
+ * and sees the navigation and actions its role allows on the demo project.
+ */
+import { mkdtemp, rm } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
+import { BrowserContext, chromium, Page } from 'playwright-core';
+import { DEMO_PASSWORD } from '../../server/demo/seed';
+import { RunningServer, startServer } from '../../server/main';
+
+const CHROMIUM = '/usr/bin/chromium';
+const CHROMIUM_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--use-gl=angle',
+  '--use-angle=swiftshader',
+  '--enable-unsafe-swiftshader',
+];
+const DEPOT = 'Brindlecote Riverside Depot and Offices';
+const ALL_SECTIONS = ['Overview', 'Models', 'Shear results', 'Checks', '3D view', 'Findings', 'Members'];
+const SCREENSHOTS = process.env.TAULENS_SCREENSHOTS ?? os.tmpdir();
+
+let server: RunningServer;
+let context: BrowserContext;
+let page: Page;
+let dataDir: string;
+let profileDir: string;
+
+beforeAll(async () => {
+  dataDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-data-'));
+  profileDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-profile-'));
+  server = await startServer({
+    port: 0,
+    dataDir,
+    fakeSmtp: true,
+    fakeSmtpPort: 0,
+    seedDemo: true,
+    logLevel: 'error',
+    webRoot: path.resolve(__dirname, '../../dist/web/browser'),
+  });
+  context = await chromium.launchPersistentContext(profileDir, {
+    executablePath: CHROMIUM,
+    headless: true,
+    args: CHROMIUM_ARGS,
+    viewport: { width: 1280, height: 800 },
+  });
+  page = context.pages()[0] ?? (await context.newPage());
+  page.setDefaultTimeout(15_000);
+});
+
+afterAll(async () => {
+  await context?.close();
+  await server?.close();
+  await rm(profileDir, { recursive: true, force: true });
+  await rm(dataDir, { recursive: true, force: true });
+});
+
+async function signIn(email: string): Promise<void> {
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail address').fill(email);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${server.url}/projects`);
+  await page.getByRole('link', { name: new RegExp(DEPOT) }).waitFor();
+}
+
+async function signOut(): Promise<void> {
+  await page.getByRole('button', { name: /^Account:/ }).click();
+  await page.getByRole('menuitem', { name: 'Sign out' }).click();
+  await page.waitForURL(`${server.url}/sign-in`);
+}
+
+/** The words of the links in a navigation landmark, without icon ligature names. */
+async function linkLabels(navigationName: string): Promise<string[]> {
+  return page
+    .getByRole('navigation', { name: navigationName })
+    .getByRole('link')
+    .evaluateAll((links) =>
+      links.map((link) => {
+        const copy = link.cloneNode(true) as HTMLElement;
+        copy.querySelectorAll('mat-icon').forEach((icon) => icon.remove());
+        return copy.textContent!.trim();
+      }),
+    );
+}
+
+async function openDepot(): Promise<void> {
+  await page.getByRole('link', { name: new RegExp(DEPOT) }).click();
+  await page.getByRole('heading', { level: 1, name: DEPOT }).waitFor();
+}
+
+async function openSection(label: string, landmark: string): Promise<void> {
+  await page.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: label }).click();
+  await page.getByRole('heading', { level: 1, name: landmark }).waitFor();
+}
+
+async function count(role: 'button' | 'link', name: string): Promise<number> {
+  return page.getByRole(role, { name, exact: true }).count();
+}
+
+test('an admin sees user admin, every project and the outbox', async () => {
+  await signIn('admin@taulens.test');
+  expect(await linkLabels('Main')).toEqual(['Projects', 'Users', 'Outbox']);
+  expect(await count('button', 'New project')).toBe(1);
+  expect(await page.getByRole('link', { name: /Orrinbeck Canteen Roof Extension/ }).count()).toBe(1);
+  await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-projects-admin.png') });
+
+  await openDepot();
+  expect(await linkLabels('Project sections')).toEqual(ALL_SECTIONS);
+  expect(await count('button', 'Edit details')).toBe(1);
+
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).click();
+  await page.getByRole('heading', { level: 1, name: 'Users' }).waitFor();
+  await page.getByRole('cell', { name: 'reviewer@taulens.test' }).waitFor();
+  expect(await count('button', 'Invite user')).toBe(1);
+  await signOut();
+});
+
+test('a coordinator edits the project, uploads models and manages members, but has no user admin', async () => {
+  await signIn('coordinator@taulens.test');
+  expect(await linkLabels('Main')).toEqual(['Projects', 'Outbox']);
+  expect(await count('button', 'New project')).toBe(1);
+
+  await openDepot();
+  expect(await linkLabels('Project sections')).toEqual(ALL_SECTIONS);
+  expect(await count('button', 'Edit details')).toBe(1);
+  expect(await count('button', 'Archive project')).toBe(1);
+  await page.getByRole('heading', { name: 'Before you rely on a result' }).waitFor();
+  await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-overview-coordinator.png'), fullPage: true });
+
+  await openSection('Models', 'Models');
+  await page.getByRole('button', { name: 'Upload IFC revision' }).waitFor();
+
+  await openSection('Members', 'Members');
+  await page.getByRole('cell', { name: 'engineer@taulens.test' }).waitFor();
+  expect(await count('button', 'Add member')).toBe(1);
+
+  await page.goto(`${server.url}/admin/users`);
+  await page.getByRole('heading', { name: 'Nothing here' }).waitFor();
+  expect(page.url()).toBe(`${server.url}/admin/users`);
+  await signOut();
+});
+
+test('an engineer runs checks but neither edits the project nor uploads', async () => {
+  await signIn('engineer@taulens.test');
+  expect(await linkLabels('Main')).toEqual(['Projects', 'Outbox']);
+  expect(await count('button', 'New project')).toBe(0);
+
+  await openDepot();
+  expect(await linkLabels('Project sections')).toEqual(ALL_SECTIONS);
+  expect(await count('button', 'Edit details')).toBe(0);
+  expect(await count('button', 'Archive project')).toBe(0);
+
+  await openSection('Checks', 'Checks');
+  await page.getByRole('button', { name: 'Start a check' }).waitFor();
+
+  await openSection('Models', 'Models');
+  await page.getByRole('button', { name: 'Compare revisions' }).waitFor();
+  expect(await count('button', 'Upload IFC revision')).toBe(0);
+
+  await openSection('Members', 'Members');
+  await page.getByRole('cell', { name: 'coordinator@taulens.test' }).waitFor();
+  expect(await count('button', 'Add member')).toBe(0);
+  await signOut();
+});
+
+test('a reviewer verifies findings and sees no upload button', async () => {
+  await signIn('reviewer@taulens.test');
+  expect(await linkLabels('Main')).toEqual(['Projects', 'Outbox']);
+
+  await openDepot();
+  expect(await linkLabels('Project sections')).toEqual(ALL_SECTIONS);
+  expect(await count('button', 'Edit details')).toBe(0);
+
+  await openSection('Findings', 'Findings');
+  await page.getByRole('button', { name: 'Verify findings' }).waitFor();
+  expect(await count('button', 'Create finding')).toBe(0);
+
+  await openSection('Models', 'Models');
+  await page.getByRole('button', { name: 'Compare revisions' }).waitFor();
+  expect(await count('button', 'Upload IFC revision')).toBe(0);
+
+  // On a phone-sized screen the sections move behind a button.
+  await page.setViewportSize({ width: 390, height: 800 });
+  await page.getByRole('button', { name: 'Open project sections' }).click();
+  const sections = page.getByRole('navigation', { name: 'Project sections' });
+  await sections.getByRole('link', { name: 'Checks' }).click();
+  await page.getByRole('heading', { level: 1, name: 'Checks' }).waitFor();
+  // Picking a section closes the sliding list again.
+  await sections.waitFor({ state: 'hidden' });
+  await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-narrow-reviewer.png') });
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await signOut();
+});
