@@ -7,12 +7,12 @@
  * clause-by-clause trace is evaluated for the governing combination only.
  */
 import { sectionKey } from '../catalogue/catalogue';
+import { CapacityCache } from '../engine/capacity-cache';
 import {
   type CheckFlag,
   type CheckParams,
   evaluateCapacity,
   type PreparedCapacity,
-  prepareCapacity,
   utilisationOf,
 } from '../engine/check';
 import { type GradeId, isGradeId } from '../engine/grades';
@@ -106,7 +106,7 @@ const PROGRESS_STEPS = 100;
 
 export function computeCheckRun(input: CheckRunInput): CheckRunComputation {
   const { members, shears, parameters, onProgress } = input;
-  const capacities = new CapacityCache(parameters);
+  const capacities = new RunCapacities(parameters);
   const overrides = fabricationOverrides(parameters);
   const every = Math.max(1, Math.ceil(members.length / PROGRESS_STEPS));
   const results: MemberCheck[] = [];
@@ -124,7 +124,7 @@ function checkOneMember(
   shears: readonly GoverningShear[],
   parameters: CheckParameters,
   overrides: ReadonlyMap<string, Fabrication>,
-  capacities: CapacityCache,
+  capacities: RunCapacities,
 ): MemberCheck {
   const memberFlags: RunFlag[] = [...member.flags];
   const unchecked = (status: MemberCheckStatus, reason: string, flags: RunFlag[] = memberFlags): MemberCheck => ({
@@ -221,9 +221,13 @@ interface PreparedMember {
   resistanceOverridden: boolean;
 }
 
-/** Prepared capacities by section × material; bad sections are cached as their error, so each is reported once per run. */
-class CapacityCache {
-  private readonly entries = new Map<string, PreparedMember | EngineInputError>();
+/**
+ * The engine's capacity cache plus what a run adds once per prepared capacity: the unit shear-stress profile and a
+ * project resistance factor. A section the engine refuses comes back as its error.
+ */
+class RunCapacities {
+  private readonly engine = new CapacityCache();
+  private readonly prepared = new Map<PreparedCapacity, PreparedMember>();
   private readonly engineParams: CheckParams;
 
   constructor(private readonly parameters: CheckParameters) {
@@ -231,34 +235,30 @@ class CapacityCache {
   }
 
   get size(): number {
-    return this.entries.size;
+    return this.engine.size;
   }
 
   get(section: ISectionInput, material: MaterialChoice): PreparedMember | EngineInputError {
-    const key = JSON.stringify([section, material.grade ?? null, material.fy_MPa ?? null]);
-    let entry = this.entries.get(key);
-    if (!entry) {
-      entry = this.prepare(section, material);
-      this.entries.set(key, entry);
-    }
-    return entry;
-  }
-
-  private prepare(section: ISectionInput, material: MaterialChoice): PreparedMember | EngineInputError {
+    let base: PreparedCapacity;
     try {
-      const prepared = prepareCapacity(section, { grade: material.grade, fy_MPa: material.fy_MPa }, this.parameters.standard, this.engineParams);
-      const capacity = withResistanceFactor(prepared, this.parameters);
-      const unit = shearStressProfile(capacity.section, 1);
-      return {
-        capacity,
-        tauMaxPerNewton_MPa: unit.tauMax_MPa,
-        tauAvgWebPerNewton_MPa: unit.webAverageClear_MPa,
-        resistanceOverridden: capacity !== prepared,
-      };
+      base = this.engine.get(section, { grade: material.grade, fy_MPa: material.fy_MPa }, this.parameters.standard, this.engineParams);
     } catch (error) {
       if (error instanceof EngineInputError) return error;
       throw error;
     }
+    let entry = this.prepared.get(base);
+    if (!entry) {
+      const capacity = withResistanceFactor(base, this.parameters);
+      const unit = shearStressProfile(capacity.section, 1);
+      entry = {
+        capacity,
+        tauMaxPerNewton_MPa: unit.tauMax_MPa,
+        tauAvgWebPerNewton_MPa: unit.webAverageClear_MPa,
+        resistanceOverridden: capacity !== base,
+      };
+      this.prepared.set(base, entry);
+    }
+    return entry;
   }
 }
 
