@@ -5,22 +5,23 @@
 import { type CheckParams, type MaterialInput, type PreparedCapacity, prepareCapacity, type Standard } from './check';
 import type { ISectionInput } from './section';
 
+function flangeKey(f: ISectionInput['topFlange']): string {
+  return `${f.width_mm},${f.thickness_mm},${f.filletRadius_mm},${f.edgeRadius_mm ?? 0},${f.slope_rad ?? 0}`;
+}
+
+function paramsKey(params: CheckParams): string {
+  const keys = Object.keys(params);
+  if (keys.length === 0) return '';
+  // Fixed key order, so equal parameter sets give equal keys however the caller built the object.
+  return keys
+    .sort()
+    .map((k) => `${k}=${String(params[k as keyof CheckParams] ?? null)}`)
+    .join(';');
+}
+
+/** Text key of everything the prepared capacity depends on (built by hand: it runs once per member). */
 export function capacityKey(section: ISectionInput, material: MaterialInput, standard: Standard, params: CheckParams = {}): string {
-  const flange = (f: ISectionInput['topFlange']): number[] => [f.width_mm, f.thickness_mm, f.filletRadius_mm, f.edgeRadius_mm ?? 0, f.slope_rad ?? 0];
-  return JSON.stringify([
-    standard,
-    section.fabrication,
-    section.depth_mm,
-    section.webThickness_mm,
-    flange(section.topFlange),
-    flange(section.bottomFlange),
-    material.grade ?? null,
-    material.fy_MPa ?? null,
-    // Fixed key order, so equal parameter sets give equal keys however the caller built the object.
-    Object.keys(params)
-      .sort()
-      .map((k) => [k, params[k as keyof CheckParams] ?? null]),
-  ]);
+  return `${standard}|${section.fabrication}|${section.depth_mm},${section.webThickness_mm}|${flangeKey(section.topFlange)}|${flangeKey(section.bottomFlange)}|${material.grade ?? ''}|${material.fy_MPa ?? ''}|${paramsKey(params)}`;
 }
 
 export class CapacityCache {
