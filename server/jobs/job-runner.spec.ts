@@ -22,7 +22,7 @@ describe('job runner', () => {
   it('brings a domain error back as the same class, code and details', async () => {
     const failure = jobs.run(COUNT_UP, { n: 0, fail: 'domain' });
     await expect(failure).rejects.toBeInstanceOf(ValidationError);
-    await expect(failure).rejects.toMatchObject({ code: 'bad_n', message: 'n must be positive', details: { n: 0 } });
+    await expect(failure).rejects.toMatchObject({ code: 'bad_n', message: 'n must be positive', details: [{ location: 'body', field: 'n', message: 'must be positive' }] });
   });
 
   it('rejects with the worker error for anything else', async () => {

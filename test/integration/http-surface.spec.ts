@@ -1,4 +1,4 @@
-import { mkdir, writeFile } from 'node:fs/promises';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
@@ -84,14 +84,17 @@ describe('HTTP surface', () => {
 
 describe('HTTP surface behind TLS, with a built client', () => {
   let app: TestApp;
+  let webRoot: string;
   beforeAll(async () => {
-    const webRoot = path.join(os.tmpdir(), `taulens-web-${process.pid}`);
-    await mkdir(webRoot, { recursive: true });
+    webRoot = await mkdtemp(path.join(os.tmpdir(), 'taulens-web-'));
     await writeFile(path.join(webRoot, 'index.html'), '<!doctype html><title>Taulens</title><tl-root></tl-root>');
     await writeFile(path.join(webRoot, 'main-ABCD1234.js'), 'console.log(1)');
     app = await startTestApp({ publicUrl: 'https://taulens.example.org', trustProxy: true, webRoot });
   });
-  afterAll(() => app.close());
+  afterAll(async () => {
+    await app.close();
+    await rm(webRoot, { recursive: true, force: true });
+  });
 
   it('serves index.html for client routes and the files as they are', async () => {
     const page = await request(app.url).get('/projects/123/findings').expect(200).expect('content-type', /html/);
