@@ -5,6 +5,7 @@ import { prepareCapacity } from './check';
 import type { ISectionInput } from './section';
 import { sectionProperties } from './section-properties';
 import { expectClose } from './expect-close';
+import { SLENDER_GIRDER } from './test-sections';
 import { fromNewtons, MPA_PER_KSI, toMillimetres } from './units';
 
 const E_MPA = 29000 * MPA_PER_KSI; // AISC 360-22 §B3 / Manual: E = 29 000 ksi
@@ -78,14 +79,7 @@ describe('AISC 360-22 §G2.1(a) limit for rolled shapes', () => {
 });
 
 describe('AISC 360-22 §G2.1(b) for built-up girders', () => {
-  // Invented slender plate girder: web 1540 × 10 mm, flanges 400 × 30 mm, Fy = 50 ksi.
-  const girder: ISectionInput = {
-    depth_mm: 1600,
-    webThickness_mm: 10,
-    topFlange: { width_mm: 400, thickness_mm: 30, filletRadius_mm: 0 },
-    bottomFlange: { width_mm: 400, thickness_mm: 30, filletRadius_mm: 0 },
-    fabrication: 'welded',
-  };
+  const girder = SLENDER_GIRDER;
   const props = sectionProperties(girder);
 
   it('uses the clear distance between flanges and Cv1 = 1.10·√(kv·E/Fy)/(h/tw) for a slender web (hand calculation)', () => {

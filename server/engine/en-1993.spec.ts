@@ -1,9 +1,9 @@
 import { findSection, toSectionInput } from '../catalogue/catalogue';
 import { prepareCapacity } from './check';
 import { enShearCapacity, epsilonOf, shearBucklingCoefficientKTau, webContributionFactorChiW } from './en-1993';
-import type { ISectionInput } from './section';
 import { sectionProperties } from './section-properties';
 import { expectClose } from './expect-close';
+import { iSection, SLENDER_GIRDER } from './test-sections';
 
 const SQRT3 = Math.sqrt(3);
 const recommended = { gammaM0: 1, gammaM1: 1, eta: 1.2, endPost: 'non-rigid' as const, stiffenerSpacing_mm: null };
@@ -22,13 +22,7 @@ describe('EN 1993-1-1 §6.2.6 plastic shear resistance', () => {
   });
 
   it('takes Av = η·hw·tw for welded sections and as the lower bound for rolled ones', () => {
-    const welded: ISectionInput = {
-      depth_mm: 700,
-      webThickness_mm: 8,
-      topFlange: { width_mm: 250, thickness_mm: 20, filletRadius_mm: 0 },
-      bottomFlange: { width_mm: 250, thickness_mm: 20, filletRadius_mm: 0 },
-      fabrication: 'welded',
-    };
+    const welded = iSection(700, 8, [250, 20, 0]);
     const c = enShearCapacity(sectionProperties(welded), 355, recommended);
     expect(c.av_mm2).toBeCloseTo(1.2 * 660 * 8, 9);
     expectClose(c.vplRd_N, (1.2 * 660 * 8 * 355) / SQRT3, 1e-14, 'Vpl,Rd welded');
@@ -78,14 +72,8 @@ describe('EN 10025-2 against EN 1993-1-1 Table 3.1 yield strengths', () => {
 });
 
 describe('EN 1993-1-5 §5 for a slender welded girder (hand calculation of the published formulae)', () => {
-  // Invented girder: web 1540 × 10 mm, flanges 400 × 30 mm, S355 (fy = 355 MPa for the 30 mm flange under Table 3.1).
-  const girder: ISectionInput = {
-    depth_mm: 1600,
-    webThickness_mm: 10,
-    topFlange: { width_mm: 400, thickness_mm: 30, filletRadius_mm: 0 },
-    bottomFlange: { width_mm: 400, thickness_mm: 30, filletRadius_mm: 0 },
-    fabrication: 'welded',
-  };
+  // S355 with fy = 355 MPa as given (the 30 mm flanges would take 345 MPa under EN 10025-2).
+  const girder = SLENDER_GIRDER;
   const props = sectionProperties(girder);
   const eps = Math.sqrt(235 / 355);
   const lambda = 1540 / (86.4 * 10 * eps);

@@ -1,5 +1,6 @@
 import { type ISectionInput } from './section';
 import { sectionProperties } from './section-properties';
+import { iSection } from './test-sections';
 import { expectClose } from './expect-close';
 
 type Point = readonly [number, number];
@@ -96,44 +97,12 @@ function compareWithPolygon(s: ISectionInput, tolerance: number): void {
 }
 
 describe('sectionProperties against an independent polygon integration', () => {
-  it('matches for a welded asymmetric section made of plates (exact polygon, no arcs)', () => {
-    // Invented mono-symmetric girder: wide top flange, narrow bottom flange.
-    compareWithPolygon(
-      {
-        depth_mm: 600,
-        webThickness_mm: 10,
-        topFlange: { width_mm: 300, thickness_mm: 20, filletRadius_mm: 0 },
-        bottomFlange: { width_mm: 150, thickness_mm: 12, filletRadius_mm: 0 },
-        fabrication: 'welded',
-      },
-      1e-12,
-    );
-  });
-
-  it('matches for a rolled asymmetric section with different root fillets (arcs as 4000 chords each)', () => {
-    compareWithPolygon(
-      {
-        depth_mm: 500,
-        webThickness_mm: 10,
-        topFlange: { width_mm: 250, thickness_mm: 20, filletRadius_mm: 15 },
-        bottomFlange: { width_mm: 180, thickness_mm: 14, filletRadius_mm: 10 },
-        fabrication: 'rolled',
-      },
-      1e-8,
-    );
-  });
-
-  it('matches for a doubly symmetric rolled section with IPE 300 dimensions', () => {
-    compareWithPolygon(
-      {
-        depth_mm: 300,
-        webThickness_mm: 7.1,
-        topFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
-        bottomFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
-        fabrication: 'rolled',
-      },
-      1e-8,
-    );
+  it.each([
+    ['a welded mono-symmetric section of plates (exact polygon, no arcs)', iSection(600, 10, [300, 20, 0], [150, 12, 0]), 1e-12],
+    ['a rolled asymmetric section with different root fillets (arcs as 4000 chords each)', iSection(500, 10, [250, 20, 15], [180, 14, 10]), 1e-8],
+    ['a doubly symmetric rolled section with IPE 300 dimensions', iSection(300, 7.1, [150, 10.7, 15]), 1e-8],
+  ])('matches for %s', (_name, section, tolerance) => {
+    compareWithPolygon(section, tolerance);
   });
 
   it('matches a tapered flange without roundings, outlined as a trapezoid', () => {
@@ -176,13 +145,7 @@ describe('sectionProperties against an independent polygon integration', () => {
 });
 
 describe('sectionProperties closed forms', () => {
-  const plates: ISectionInput = {
-    depth_mm: 400,
-    webThickness_mm: 8,
-    topFlange: { width_mm: 200, thickness_mm: 15, filletRadius_mm: 0 },
-    bottomFlange: { width_mm: 200, thickness_mm: 15, filletRadius_mm: 0 },
-    fabrication: 'welded',
-  };
+  const plates = iSection(400, 8, [200, 15, 0]);
 
   it('gives the three-rectangle I-section results (any mechanics-of-materials text)', () => {
     // I = [b·d³ − (b − tw)·hw³]/12, Q(NA) = b·tf·(d − tf)/2 + tw·hw²/8, with hw = d − 2tf.
@@ -234,13 +197,7 @@ describe('sectionProperties against a published section table', () => {
   it('reproduces IPE 300', () => {
     // EN 10365 dimensions h 300, b 150, tw 7.1, tf 10.7, r 15; A = 53.81 cm², Iy = 8356 cm⁴ as printed in open EN
     // section tables (ArcelorMittal "Sections and Merchant Bars"); Wpl,y = 628.4 cm³ and Avz = 25.68 cm² from memory.
-    const p = sectionProperties({
-      depth_mm: 300,
-      webThickness_mm: 7.1,
-      topFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
-      bottomFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
-      fabrication: 'rolled',
-    });
+    const p = sectionProperties(iSection(300, 7.1, [150, 10.7, 15]));
     expectClose(p.area_mm2 / 100, 53.81, 5e-4, 'A (cm²)');
     expectClose(p.iMajor_mm4 / 1e4, 8356, 5e-4, 'Iy (cm⁴)');
     expectClose(p.plasticModulusMajor_mm3 / 1e3, 628.4, 5e-4, 'Wpl,y (cm³)');

@@ -1,18 +1,12 @@
 import { findSection, toSectionInput } from '../catalogue/catalogue';
 import { EngineInputError } from './input-error';
-import type { ISectionInput } from './section';
 import { sectionProperties } from './section-properties';
 import { shearStressAt_MPa, shearStressProfile } from './shear-stress';
 import { expectClose } from './expect-close';
+import { iSection } from './test-sections';
 
 // Invented welded girder of three plates.
-const plates: ISectionInput = {
-  depth_mm: 500,
-  webThickness_mm: 9,
-  topFlange: { width_mm: 220, thickness_mm: 16, filletRadius_mm: 0 },
-  bottomFlange: { width_mm: 220, thickness_mm: 16, filletRadius_mm: 0 },
-  fabrication: 'welded',
-};
+const plates = iSection(500, 9, [220, 16, 0]);
 
 describe('shearStressProfile for an I-section of three rectangles', () => {
   const V = 300e3;
@@ -100,13 +94,7 @@ describe('web-average rule of thumb (common practice, no source)', () => {
 
   it('fails for a narrow-flange girder, where the web carries the shear like a rectangle', () => {
     // Invented counter-case: 80 mm flanges on a 600 mm web; a rectangle alone would give 1/1.5 = 0.67.
-    const narrow: ISectionInput = {
-      depth_mm: 600,
-      webThickness_mm: 10,
-      topFlange: { width_mm: 80, thickness_mm: 10, filletRadius_mm: 0 },
-      bottomFlange: { width_mm: 80, thickness_mm: 10, filletRadius_mm: 0 },
-      fabrication: 'welded',
-    };
+    const narrow = iSection(600, 10, [80, 10, 0]);
     const profile = shearStressProfile(sectionProperties(narrow), 100e3);
     expect(profile.clearAverageToMax).toBeLessThan(0.85);
     expect(profile.clearAverageToMax).toBeGreaterThan(2 / 3);
