@@ -1,9 +1,10 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { User } from '../users/user.entity';
+import { LinkTokenRecord } from './link-token-record';
 
-/** An e-mailed, single-use link to choose a new password; only the token's hash is stored. */
+/** An e-mailed, single-use link to choose a new password. */
 @Entity({ name: 'password_reset' })
-export class PasswordReset {
+export class PasswordReset extends LinkTokenRecord {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
@@ -14,17 +15,4 @@ export class PasswordReset {
   @ManyToOne(() => User, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'userId' })
   user?: User;
-
-  @Index({ unique: true })
-  @Column({ type: String, length: 64 })
-  tokenHash: string;
-
-  @Column({ type: Date })
-  expiresAt: Date;
-
-  @Column({ type: Date, nullable: true })
-  usedAt: Date | null;
-
-  @CreateDateColumn()
-  createdAt: Date;
 }

@@ -23,9 +23,9 @@ export function requestLogger(logger: Logger): RequestHandler {
     },
     customLogLevel: (req, res, error) => {
       if (error || res.statusCode >= 500) return 'error';
-      if (res.statusCode >= 400) return 'warn';
-      // Static files of the client are only interesting when debugging.
-      return req.url?.startsWith('/api/') ? 'info' : 'debug';
+      // 4xx answers are normal traffic (every anonymous page load gets a 401 from /api/auth/me);
+      // static files served fine only matter when debugging.
+      return req.url?.startsWith('/api/') || res.statusCode >= 400 ? 'info' : 'debug';
     },
     autoLogging: { ignore: (req) => req.url === '/api/health' },
     serializers: {

@@ -1,10 +1,11 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { LinkTokenRecord } from '../auth/link-token-record';
 import { Project } from '../projects/project.entity';
 import { PROJECT_ROLES, type ProjectRole } from '../projects/project-role';
 
-/** An e-mailed, single-use link to create an account; only the token's hash is stored. */
+/** An e-mailed, single-use link to create an account. */
 @Entity({ name: 'invitation' })
-export class Invitation {
+export class Invitation extends LinkTokenRecord {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
@@ -29,19 +30,6 @@ export class Invitation {
   @Column({ type: 'simple-enum', enum: PROJECT_ROLES, nullable: true })
   role: ProjectRole | null;
 
-  @Index({ unique: true })
-  @Column({ type: String, length: 64 })
-  tokenHash: string;
-
-  @Column({ type: Date })
-  expiresAt: Date;
-
-  @Column({ type: Date, nullable: true })
-  usedAt: Date | null;
-
   @Column({ type: String, nullable: true })
   invitedById: string | null;
-
-  @CreateDateColumn()
-  createdAt: Date;
 }
