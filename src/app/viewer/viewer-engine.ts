@@ -9,6 +9,7 @@ import {
   Box3,
   Color,
   DirectionalLight,
+  LinearSRGBColorSpace,
   type Material,
   Matrix4,
   MeshBasicMaterial,
@@ -117,6 +118,25 @@ const KEY_ORBIT_RAD = Math.PI / 36;
 const KEY_PAN_PX = 40;
 const KEY_ZOOM_FACTOR = 1.2;
 
+/**
+ * Whether WebGL runs in software (SwiftShader, llvmpipe…), as on machines without a GPU and in CI. There every
+ * pixel is shaded on the CPU and 4× multisampling about doubles the frame time, so the engine goes without it.
+ */
+export function rendersInSoftware(): boolean {
+  const gl = document.createElement('canvas').getContext('webgl2');
+  if (gl === null) return false;
+  const info = gl.getExtension('WEBGL_debug_renderer_info');
+  const renderer = String(gl.getParameter(info ? info.UNMASKED_RENDERER_WEBGL : gl.RENDERER));
+  gl.getExtension('WEBGL_lose_context')?.loseContext();
+  return /swiftshader|llvmpipe|softpipe|software/i.test(renderer);
+}
+
+/** sRGB byte → linear value (IEC 61966-2-1), so recolouring does no powers per member. */
+const SRGB_BYTE_TO_LINEAR = Float32Array.from({ length: 256 }, (_, byte) => {
+  const c = byte / 255;
+  return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+});
+
 const _matrix = /*@__PURE__*/ new Matrix4();
 const _box = /*@__PURE__*/ new Box3();
 const _point = /*@__PURE__*/ new Vector3();
@@ -181,7 +201,7 @@ export class ViewerEngine {
     // camera and renderer
     let renderer: WebGLRenderer;
     try {
-      renderer = new WebGLRenderer({ canvas, antialias: true, powerPreference: 'high-performance' });
+      renderer = new WebGLRenderer({ canvas, antialias: !rendersInSoftware(), powerPreference: 'high-performance' });
     } catch (error) {
       throw new WebGlUnavailableError(error instanceof Error ? error.message : String(error));
     }
@@ -314,8 +334,13 @@ export class ViewerEngine {
       if (fromMap !== undefined) coloured++;
       const colour = fromMap ?? fallback;
       if (colour !== current) {
-        // setHex reads sRGB and converts to the linear working space the colour texture holds.
-        _colour.setHex(colour);
+        // The colour texture holds linear values; the table does the sRGB decoding.
+        _colour.setRGB(
+          SRGB_BYTE_TO_LINEAR[(colour >> 16) & 0xff],
+          SRGB_BYTE_TO_LINEAR[(colour >> 8) & 0xff],
+          SRGB_BYTE_TO_LINEAR[colour & 0xff],
+          LinearSRGBColorSpace,
+        );
         current = colour;
       }
       for (let instance = index.firstInstanceOf(element); instance < index.endInstanceOf(element); instance++) {
