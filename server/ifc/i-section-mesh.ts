@@ -1,0 +1,107 @@
+/**
+ * Our own mesh of an extruded I-section, for members web-ifc cannot tessellate (it rejects
+ * IfcAsymmetricIShapeProfileDef, for one). The outline is centred on its bounding box as IFC places parameterised
+ * profiles, with quarter-circle root fillets; flange slopes and toe radii are left out: the mesh is for display only,
+ * the check uses the exact section properties.
+ */
+import type { MemberProfile } from './model-read-result';
+import { cross, normalize, type Vec3 } from './matrix4';
+
+export type Point2 = [number, number];
+
+/** Arc points of a fillet, from angle a0 to a1 (radians) about (cx, cy), excluding the first point. */
+function arc(cx: number, cy: number, r: number, a0: number, a1: number, segments: number): Point2[] {
+  const points: Point2[] = [];
+  for (let i = 1; i <= segments; i++) {
+    const a = a0 + ((a1 - a0) * i) / segments;
+    points.push([cx + r * Math.cos(a), cy + r * Math.sin(a)]);
+  }
+  return points;
+}
+
+/** Counter-clockwise outline in mm; `segments` per quarter-circle fillet. */
+export function iSectionOutline(profile: Pick<MemberProfile, 'depth_mm' | 'webThickness_mm' | 'topFlange' | 'bottomFlange'>, segments = 3): Point2[] {
+  const h = profile.depth_mm / 2;
+  const w = profile.webThickness_mm / 2;
+  const { topFlange: top, bottomFlange: bottom } = profile;
+  const yb = -h + bottom.thickness_mm;
+  const yt = h - top.thickness_mm;
+  const rb = bottom.filletRadius_mm;
+  const rt = top.filletRadius_mm;
+  const q = Math.PI / 2;
+  const points: Point2[] = [[-bottom.width_mm / 2, -h], [bottom.width_mm / 2, -h], [bottom.width_mm / 2, yb]];
+  points.push([w + rb, yb], ...(rb > 0 ? arc(w + rb, yb + rb, rb, 3 * q, 2 * q, segments) : [[w, yb] as Point2]));
+  points.push([w, yt - rt], ...(rt > 0 ? arc(w + rt, yt - rt, rt, 2 * q, q, segments) : [[w + rt, yt] as Point2]));
+  points.push([top.width_mm / 2, yt], [top.width_mm / 2, h], [-top.width_mm / 2, h], [-top.width_mm / 2, yt]);
+  points.push([-w - rt, yt], ...(rt > 0 ? arc(-w - rt, yt - rt, rt, q, 0, segments) : [[-w, yt] as Point2]));
+  points.push([-w, yb + rb], ...(rb > 0 ? arc(-w - rb, yb + rb, rb, 0, -q, segments) : [[-w - rb, yb] as Point2]));
+  points.push([-bottom.width_mm / 2, yb]);
+  // Zero radii repeat corner points; drop the repeats so that no edge has zero length.
+  return points.filter((p, i) => {
+    const next = points[(i + 1) % points.length];
+    return Math.abs(p[0] - next[0]) > 1e-9 || Math.abs(p[1] - next[1]) > 1e-9;
+  });
+}
+
+function cross2(o: Point2, a: Point2, b: Point2): number {
+  return (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
+}
+
+function inTriangle(p: Point2, a: Point2, b: Point2, c: Point2): boolean {
+  return cross2(a, b, p) >= 0 && cross2(b, c, p) >= 0 && cross2(c, a, p) >= 0;
+}
+
+/** Ear clipping of a simple counter-clockwise polygon; returns index triples, counter-clockwise. */
+export function triangulate(polygon: readonly Point2[]): number[] {
+  const remaining = polygon.map((_, i) => i);
+  const triangles: number[] = [];
+  let guard = polygon.length * polygon.length;
+  while (remaining.length > 3 && guard-- > 0) {
+    for (let k = 0; k < remaining.length; k++) {
+      const [i0, i1, i2] = [remaining[(k + remaining.length - 1) % remaining.length], remaining[k], remaining[(k + 1) % remaining.length]];
+      const [a, b, c] = [polygon[i0], polygon[i1], polygon[i2]];
+      if (cross2(a, b, c) <= 1e-12) continue;
+      const blocked = remaining.some((j) => j !== i0 && j !== i1 && j !== i2 && inTriangle(polygon[j], a, b, c));
+      if (blocked) continue;
+      triangles.push(i0, i1, i2);
+      remaining.splice(k, 1);
+      break;
+    }
+  }
+  if (remaining.length === 3) triangles.push(remaining[0], remaining[1], remaining[2]);
+  return triangles;
+}
+
+/**
+ * Prism of `outline` (in the solid's xy plane, model units) swept by `direction × depth`: caps and flat-shaded sides,
+ * as x, y, z, nx, ny, nz per vertex.
+ */
+export function extrudedMesh(outline: readonly Point2[], direction: Vec3, depth: number): { vertices: Float32Array; indices: Uint32Array } {
+  const n = outline.length;
+  const cap = triangulate(outline);
+  const vertices = new Float32Array((2 * n + 4 * n) * 6);
+  const indices: number[] = [];
+  const [dx, dy, dz] = [direction[0] * depth, direction[1] * depth, direction[2] * depth];
+  let v = 0;
+  const put = (x: number, y: number, z: number, normal: Vec3): number => {
+    vertices.set([x, y, z, normal[0], normal[1], normal[2]], v * 6);
+    return v++;
+  };
+  const bottom = outline.map(([x, y]) => put(x, y, 0, [0, 0, -1]));
+  const top = outline.map(([x, y]) => put(x + dx, y + dy, dz, [0, 0, 1]));
+  for (let t = 0; t < cap.length; t += 3) {
+    indices.push(top[cap[t]], top[cap[t + 1]], top[cap[t + 2]]);
+    indices.push(bottom[cap[t]], bottom[cap[t + 2]], bottom[cap[t + 1]]);
+  }
+  for (let i = 0; i < n; i++) {
+    const [x0, y0] = outline[i];
+    const [x1, y1] = outline[(i + 1) % n];
+    const normal = normalize(cross([x1 - x0, y1 - y0, 0], direction)) ?? [0, 0, 1];
+    const a = put(x0, y0, 0, normal);
+    const b = put(x1, y1, 0, normal);
+    const c = put(x1 + dx, y1 + dy, dz, normal);
+    const d = put(x0 + dx, y0 + dy, dz, normal);
+    indices.push(a, b, c, a, c, d);
+  }
+  return { vertices, indices: Uint32Array.from(indices) };
+}

@@ -1,0 +1,189 @@
+/**
+ * One MemberRecord per IfcBeam, IfcColumn and IfcMember (with their subtypes, e.g. the IFC4 *StandardCase classes):
+ * identity and placement in the building, material and grade, axis and length, and the section. A member that cannot
+ * be read fully is kept with status 'flagged' and the reason, never dropped and never a crash.
+ */
+import { IFCBEAM, IFCCOLUMN, IFCMEMBER } from 'web-ifc';
+import type { CatalogueSection } from '../catalogue/catalogue-section';
+import { type GradeId, gradeFromMaterialName, GradeError, yieldStrength, type EnYieldRule } from '../engine/grades';
+import { type Mat4, transformPoint, type Vec3 } from './matrix4';
+import { MaterialReader, type MaterialReading } from './material-reader';
+import { SectionResolver, type SectionOutcome } from './member-section';
+import type { MemberFlag, MemberMaterial, MemberRecord, MemberStatus, Point3_mm } from './model-read-result';
+import { readObjectPlacement } from './placement-reader';
+import { ProfileReader } from './profile-reader';
+import { type ElementShape, type MemberLine, ShapeReader, type SweptSolid } from './shape-reader';
+import { SpatialIndex } from './spatial-index';
+import { enumOf, refOf, type StepLines, textOf } from './step-lines';
+
+export const MEMBER_TYPES = [IFCBEAM, IFCCOLUMN, IFCMEMBER] as const;
+
+export interface MemberReaderOptions {
+  ifc2x3: boolean;
+  scaleToMm: number;
+  radiansPerAngleUnit: number;
+  /** Grade for members whose material names none (the project's default grade). */
+  defaultGrade: GradeId;
+  yieldRule: EnYieldRule;
+  projectCatalogue?: readonly CatalogueSection[];
+}
+
+/** What the geometry step needs to build a member's mesh itself when web-ifc cannot tessellate its profile. */
+export interface MemberSolid {
+  solid: SweptSolid;
+  /** Element placement in model units. */
+  placement: Mat4;
+}
+
+export interface MemberReading {
+  record: MemberRecord;
+  /** Present for members with a usable section and a swept body. */
+  solid?: MemberSolid;
+}
+
+/** IfcElementType.PredefinedType: position 9 of IfcBeamType, IfcColumnType and IfcMemberType. */
+const TYPE_PREDEFINED_AT = 9;
+const UNSET_PREDEFINED = new Set(['NOTDEFINED']);
+
+export class MemberReader {
+  private readonly spatial: SpatialIndex;
+  private readonly materials: MaterialReader;
+  private readonly shapes: ShapeReader;
+  private readonly profiles: ProfileReader;
+  private readonly sections: SectionResolver;
+  private readonly typePredefined = new Map<number, string | null>();
+
+  constructor(
+    private readonly lines: StepLines,
+    private readonly options: MemberReaderOptions,
+  ) {
+    this.spatial = new SpatialIndex(lines);
+    this.materials = new MaterialReader(lines);
+    this.shapes = new ShapeReader(lines, options.radiansPerAngleUnit);
+    this.profiles = new ProfileReader(lines, options.ifc2x3, options.scaleToMm, options.radiansPerAngleUnit);
+    this.sections = new SectionResolver(options.projectCatalogue);
+  }
+
+  /** Express ids of all beams, columns and members, in file order. */
+  memberIds(): number[] {
+    return MEMBER_TYPES.flatMap((type) => this.lines.idsOfType(type, true)).sort((a, b) => a - b);
+  }
+
+  read(expressId: number): MemberReading {
+    const line = this.lines.line(expressId);
+    const args = line?.args ?? [];
+    const typeId = this.spatial.typeOf(expressId);
+    const objectType = textOf(args[4]);
+    const shape = this.shapes.read(refOf(args[6]));
+    const material = this.materials.materialOf(expressId, typeId);
+    const flags: MemberFlag[] = [...(material?.flags ?? [])];
+
+    const solid = shape.solids[0];
+    if (shape.solids.length > 1 && new Set(shape.solids.map((s) => s.profileId)).size > 1) flags.push('several-profiles');
+    if (solid?.tapered) flags.push('tapered');
+    const outcome = this.section(shape, material, objectType);
+    flags.push(...(outcome.status === 'not-applicable' ? [] : outcome.flags));
+
+    const placement = readObjectPlacement(this.lines, refOf(args[5]));
+    const line3d = this.memberLine(shape, solid, placement);
+    if (line3d?.curved) flags.push('curved');
+    if (shape.hasRepresentation && !line3d) flags.push('no-axis');
+
+    let status: MemberStatus = outcome.status;
+    let reason = outcome.status === 'ok' ? undefined : outcome.reason;
+    if (!shape.hasRepresentation) {
+      flags.push('no-representation');
+      status = 'flagged';
+      reason = 'The member has no shape representation, so it has no axis, length or geometry.' + (reason ? ` ${reason}` : '');
+    }
+    const grade = this.material(material, outcome, flags);
+    if (grade.error && status === 'ok') {
+      status = 'flagged';
+      reason = grade.error;
+    }
+
+    const record: MemberRecord = {
+      globalId: textOf(args[0]) ?? `#${expressId}`,
+      expressId,
+      ifcClass: this.lines.typeName(line?.type ?? 0),
+      name: textOf(args[2]),
+      tag: textOf(args[7]),
+      objectType,
+      predefinedType: this.predefinedType(enumOf(args[8]), typeId),
+      storey: this.spatial.storeyOf(expressId),
+      material: grade.material,
+      length_mm: line3d ? line3d.length * this.options.scaleToMm : null,
+      axis: line3d ? { start_mm: this.toMm(line3d.start), end_mm: this.toMm(line3d.end) } : null,
+      status,
+      ...(reason ? { reason } : {}),
+      profile: outcome.status === 'ok' ? outcome.profile : null,
+      section: outcome.status === 'ok' ? outcome.section : null,
+      flags: [...new Set(flags)],
+    };
+    return outcome.status === 'ok' && solid ? { record, solid: { solid, placement } } : { record };
+  }
+
+  /** Frame, direction and depth of a member's extruded solid, for building its mesh (undefined if not extruded). */
+  extrusionOf(solid: SweptSolid): ReturnType<ShapeReader['extrusion']> {
+    return this.shapes.extrusion(solid);
+  }
+
+  private section(shape: ElementShape, material: MaterialReading | undefined, objectType: string | null): SectionOutcome {
+    const profileId = material?.profileId ?? shape.solids[0]?.profileId;
+    if (profileId === undefined) {
+      if (!shape.hasRepresentation) return { status: 'flagged', reason: '', flags: ['no-profile'] };
+      const body = shape.otherBodyTypes.length ? `its body is ${[...new Set(shape.otherBodyTypes)].join(', ')}` : 'it has no body representation';
+      return { status: 'flagged', reason: `No profile to read the section from: ${body}.`, flags: ['no-profile'] };
+    }
+    return this.sections.resolve(this.profiles.read(profileId), [material?.profileName ?? null, objectType]);
+  }
+
+  /** Axis from the Axis representation, else from the first swept solid, placed in model coordinates. */
+  private memberLine(shape: ElementShape, solid: SweptSolid | undefined, placement: Mat4): MemberLine | undefined {
+    const local = this.shapes.axisLine(shape) ?? (solid ? this.shapes.solidLine(solid) : undefined);
+    if (!local) return undefined;
+    const start = transformPoint(placement, local.start);
+    const end = transformPoint(placement, local.end);
+    // A straight line's length follows its placed end points; a curve's is measured along it (rigid placements).
+    return { ...local, start, end, length: local.curved ? local.length : Math.hypot(end[0] - start[0], end[1] - start[1], end[2] - start[2]) };
+  }
+
+  private toMm(p: Vec3): Point3_mm {
+    const s = this.options.scaleToMm;
+    return [p[0] * s, p[1] * s, p[2] * s];
+  }
+
+  private predefinedType(own: string | null, typeId: number | undefined): string | null {
+    if (own && !UNSET_PREDEFINED.has(own)) return own;
+    if (typeId === undefined) return own;
+    let fromType = this.typePredefined.get(typeId);
+    if (fromType === undefined) {
+      fromType = enumOf(this.lines.line(typeId)?.args[TYPE_PREDEFINED_AT]);
+      this.typePredefined.set(typeId, fromType);
+    }
+    return fromType ?? own;
+  }
+
+  /**
+   * Grade from the material name, else the default grade (flagged 'assumed-grade'); fy for the thickest plate of the
+   * section, so only members with a section get one (and only they carry the grade flags).
+   */
+  private material(material: MaterialReading | undefined, outcome: SectionOutcome, flags: MemberFlag[]): { material: MemberMaterial | null; error?: string } {
+    const name = material?.name ?? null;
+    const named = name === null ? null : gradeFromMaterialName(name);
+    const grade = named ?? this.options.defaultGrade;
+    const assumed = named === null;
+    if (outcome.status !== 'ok') return { material: name === null ? null : { name, grade, fy_MPa: null, assumed } };
+    if (name === null) flags.push('no-material');
+    if (assumed) flags.push('assumed-grade');
+    const p = outcome.profile;
+    const thickness_mm = Math.max(p.topFlange.thickness_mm, p.bottomFlange.thickness_mm, p.webThickness_mm);
+    try {
+      return { material: { name, grade, fy_MPa: yieldStrength(grade, thickness_mm, this.options.yieldRule).fy_MPa, assumed } };
+    } catch (error) {
+      if (!(error instanceof GradeError)) throw error;
+      return { material: { name, grade, fy_MPa: null, assumed }, error: `No yield strength for the grade: ${error.message}.` };
+    }
+  }
+}
+

@@ -1,0 +1,164 @@
+/**
+ * The parts of an element's shape the member reader needs: the Axis curve, and the swept solids of the Body with
+ * their profiles, found through boolean results (cut and coped ends), CSG trees and mapped items (a type's
+ * representation maps placed by IfcMappedItem). Solid positions are read only when asked for, since most members
+ * take their axis from the Axis representation.
+ */
+import {
+  IFCBOOLEANCLIPPINGRESULT,
+  IFCBOOLEANRESULT,
+  IFCCSGSOLID,
+  IFCEXTRUDEDAREASOLID,
+  IFCEXTRUDEDAREASOLIDTAPERED,
+  IFCFIXEDREFERENCESWEPTAREASOLID,
+  IFCMAPPEDITEM,
+  IFCREVOLVEDAREASOLID,
+  IFCREVOLVEDAREASOLIDTAPERED,
+  IFCSURFACECURVESWEPTAREASOLID,
+} from 'web-ifc';
+import { type AxisCurve, axisCurve } from './axis-curve';
+import { add, cross, dot, type Mat4, multiply, norm, normalize, scale, subtract, transformPoint, type Vec3 } from './matrix4';
+import { readAxisPlacement, readDirection, readPoint, readTransformationOperator } from './placement-reader';
+import { numberOf, refOf, refsOf, type StepLines, type StepValue, textOf } from './step-lines';
+
+export interface SweptSolid {
+  solidType: number;
+  profileId: number | undefined;
+  /** The solid's arguments as read (SweptArea, Position, …). */
+  args: StepValue[];
+  /** Mapping transforms between the solid's representation and the element (undefined for a direct item). */
+  transform: Mat4 | undefined;
+  clipped: boolean;
+  tapered: boolean;
+}
+
+export interface ElementShape {
+  hasRepresentation: boolean;
+  axisItemId: number | undefined;
+  solids: SweptSolid[];
+  /** Body items that carry no profile (breps, tessellated sets, swept disks), by IFC type. */
+  otherBodyTypes: string[];
+}
+
+/** A straight or curved member line in element coordinates and model units. */
+export type MemberLine = AxisCurve;
+
+const SWEPT = new Set([
+  IFCEXTRUDEDAREASOLID,
+  IFCEXTRUDEDAREASOLIDTAPERED,
+  IFCREVOLVEDAREASOLID,
+  IFCREVOLVEDAREASOLIDTAPERED,
+  IFCSURFACECURVESWEPTAREASOLID,
+  IFCFIXEDREFERENCESWEPTAREASOLID,
+]);
+const TAPERED = new Set([IFCEXTRUDEDAREASOLIDTAPERED, IFCREVOLVEDAREASOLIDTAPERED]);
+/** Identifiers of representations that are never the body (ISO 16739 representation identifiers). */
+const NOT_BODY = new Set(['AXIS', 'BOX', 'FOOTPRINT', 'ANNOTATION', 'REFERENCE', 'CLEARANCE', 'COG', 'PROFILE', 'LIGHTING', 'SURFACE']);
+const MAX_DEPTH = 12;
+
+export class ShapeReader {
+  constructor(
+    private readonly lines: StepLines,
+    private readonly radiansPerAngleUnit: number,
+  ) {}
+
+  read(productShapeId: number | undefined): ElementShape {
+    const shape: ElementShape = { hasRepresentation: false, axisItemId: undefined, solids: [], otherBodyTypes: [] };
+    const productShape = this.lines.line(productShapeId);
+    if (!productShape) return shape;
+    const representations = refsOf(productShape.args[2]).map((id) => this.lines.line(id)).filter((r) => r !== undefined);
+    shape.hasRepresentation = representations.length > 0;
+    const bodies = representations.filter((r) => textOf(r.args[1])?.toUpperCase().startsWith('BODY'));
+    const bodyCandidates = bodies.length > 0 ? bodies : representations.filter((r) => !NOT_BODY.has(textOf(r.args[1])?.toUpperCase() ?? ''));
+    for (const representation of representations) {
+      if (textOf(representation.args[1])?.toUpperCase() === 'AXIS') shape.axisItemId ??= refsOf(representation.args[3])[0];
+    }
+    for (const body of bodyCandidates) {
+      for (const item of refsOf(body.args[3])) this.collect(item, undefined, false, shape, 0);
+    }
+    return shape;
+  }
+
+  private collect(itemId: number, transform: Mat4 | undefined, clipped: boolean, shape: ElementShape, depth: number): void {
+    const type = this.lines.typeOf(itemId);
+    if (depth > MAX_DEPTH || type === 0) return;
+    if (SWEPT.has(type)) {
+      const args = this.lines.line(itemId)?.args ?? [];
+      shape.solids.push({ solidType: type, profileId: refOf(args[0]), args, transform, clipped, tapered: TAPERED.has(type) });
+      return;
+    }
+    if (type === IFCBOOLEANRESULT || type === IFCBOOLEANCLIPPINGRESULT) {
+      const first = refOf(this.lines.line(itemId)?.args[1]);
+      if (first !== undefined) this.collect(first, transform, true, shape, depth + 1);
+      return;
+    }
+    if (type === IFCCSGSOLID) {
+      const root = refOf(this.lines.line(itemId)?.args[0]);
+      if (root !== undefined) this.collect(root, transform, clipped, shape, depth + 1);
+      return;
+    }
+    if (type === IFCMAPPEDITEM) {
+      const mapped = this.lines.line(itemId);
+      const map = this.lines.line(refOf(mapped?.args[0]));
+      const representation = this.lines.line(refOf(map?.args[1]));
+      // As web-ifc places mapped geometry: the mapping target applied after the map's origin.
+      const local = multiply(readTransformationOperator(this.lines, refOf(mapped?.args[1])), readAxisPlacement(this.lines, refOf(map?.args[0])));
+      const combined = transform ? multiply(transform, local) : local;
+      for (const item of refsOf(representation?.args[3])) this.collect(item, combined, clipped, shape, depth + 1);
+      return;
+    }
+    shape.otherBodyTypes.push(this.lines.typeName(type));
+  }
+
+  /** Position of a swept solid in element coordinates (model units). */
+  solidFrame(solid: SweptSolid): Mat4 {
+    const position = readAxisPlacement(this.lines, refOf(solid.args[1]));
+    return solid.transform ? multiply(solid.transform, position) : position;
+  }
+
+  /** The member line of the Axis representation, in element coordinates. */
+  axisLine(shape: ElementShape): MemberLine | undefined {
+    return shape.axisItemId === undefined ? undefined : axisCurve(this.lines, shape.axisItemId, this.radiansPerAngleUnit);
+  }
+
+  /** Frame, unit direction (in frame coordinates) and depth of an extruded solid; undefined for other solids. */
+  extrusion(solid: SweptSolid): { frame: Mat4; direction: Vec3; depth: number } | undefined {
+    if (solid.solidType !== IFCEXTRUDEDAREASOLID && solid.solidType !== IFCEXTRUDEDAREASOLIDTAPERED) return undefined;
+    const direction = normalize(readDirection(this.lines, refOf(solid.args[2])) ?? [0, 0, 1]);
+    const depth = numberOf(solid.args[3]);
+    if (!direction || !(depth !== undefined && depth > 0)) return undefined;
+    return { frame: this.solidFrame(solid), direction, depth };
+  }
+
+  /**
+   * The member line implied by a swept solid: for an extrusion the path of the profile origin, for a revolution the
+   * arc the profile origin describes about the revolution axis.
+   */
+  solidLine(solid: SweptSolid): MemberLine | undefined {
+    const extrusion = this.extrusion(solid);
+    if (extrusion) {
+      const start = transformPoint(extrusion.frame, [0, 0, 0]);
+      const end = transformPoint(extrusion.frame, scale(extrusion.direction, extrusion.depth));
+      return { start, end, length: norm(subtract(end, start)), curved: false };
+    }
+    if (solid.solidType !== IFCREVOLVEDAREASOLID && solid.solidType !== IFCREVOLVEDAREASOLIDTAPERED) return undefined;
+    const frame = this.solidFrame(solid);
+    const axisPlacement = this.lines.line(refOf(solid.args[2]));
+    const axisOrigin = readPoint(this.lines, refOf(axisPlacement?.args[0])) ?? [0, 0, 0];
+    const axisDirection = normalize(readDirection(this.lines, refOf(axisPlacement?.args[1])) ?? [0, 0, 1]);
+    const angle = (numberOf(solid.args[3]) ?? NaN) * this.radiansPerAngleUnit;
+    if (!axisDirection || !Number.isFinite(angle)) return undefined;
+    // In the solid's own coordinates the profile origin is (0,0,0); rotate it about the axis (Rodrigues).
+    const r = subtract([0, 0, 0], axisOrigin);
+    const along = scale(axisDirection, dot(r, axisDirection));
+    const radial = subtract(r, along);
+    const rotated = add(add(scale(radial, Math.cos(angle)), scale(cross(axisDirection, radial), Math.sin(angle))), add(axisOrigin, along));
+    const frameScale = norm([frame[0], frame[1], frame[2]]);
+    return {
+      start: transformPoint(frame, [0, 0, 0]),
+      end: transformPoint(frame, rotated),
+      length: norm(radial) * Math.abs(angle) * frameScale,
+      curved: true,
+    };
+  }
+}

@@ -1,0 +1,97 @@
+/**
+ * Generator of invented steel frames as IFC files, for tests and benchmarks (100 to 50,000 members).
+ *
+ *   ts-node -P tsconfig.server.json test/generator/generate-frame.ts --members 20000 --schema IFC4 --unit mm --out x.ifc
+ *
+ * Options: --members N (default 100), --schema IFC4|IFC4X3|IFC2X3 (IFC4), --unit mm|m|inch|foot (mm),
+ * --defects (three broken beams on the first floor), --far (site 485 km / 5270 km from the project origin).
+ */
+import * as fs from 'node:fs';
+import { frameLayout, type FrameLayout, type Vec3 } from './frame-layout';
+import { imperialSections, metricSections } from './frame-sections';
+import { type FrameSchema, type FrameUnit, FrameWriter } from './frame-writer';
+
+export interface GenerateFrameOptions {
+  members: number;
+  schema?: FrameSchema;
+  unit?: FrameUnit;
+  defects?: boolean;
+  siteOrigin_mm?: Vec3;
+  fileName?: string;
+}
+
+/** Survey-style coordinates of a site far from the project origin (invented). */
+export const FAR_SITE_ORIGIN_MM: Vec3 = [485_000_000, 5_270_000_000, 12_000];
+
+function write(options: GenerateFrameOptions, sink: (text: string) => void): FrameLayout {
+  const schema = options.schema ?? 'IFC4';
+  const unit = options.unit ?? 'mm';
+  const layout = frameLayout(options.members);
+  const fileName = options.fileName ?? `harbour-warehouse-${options.members}.ifc`;
+  sink(FrameWriter.header({ schema, fileName }));
+  new FrameWriter(
+    {
+      schema,
+      unit,
+      layout,
+      sections: unit === 'inch' || unit === 'foot' ? imperialSections() : metricSections(),
+      defects: options.defects ?? false,
+      siteOrigin_mm: options.siteOrigin_mm ?? [0, 0, 0],
+      fileName,
+    },
+    sink,
+  ).write();
+  sink(FrameWriter.footer());
+  return layout;
+}
+
+/** The whole file as a string (for small models in tests). */
+export function generateFrame(options: GenerateFrameOptions): string {
+  const parts: string[] = [];
+  write(options, (text) => parts.push(text));
+  return parts.join('');
+}
+
+/** Streams the file to `path`; returns the layout that was written. */
+export function writeFrameFile(path: string, options: GenerateFrameOptions): FrameLayout {
+  const fd = fs.openSync(path, 'w');
+  try {
+    return write(options, (text) => fs.writeSync(fd, text));
+  } finally {
+    fs.closeSync(fd);
+  }
+}
+
+function parseArguments(argv: readonly string[]): GenerateFrameOptions & { out: string } {
+  const value = (flag: string): string | undefined => {
+    const i = argv.indexOf(flag);
+    return i >= 0 ? argv[i + 1] : undefined;
+  };
+  const members = Number(value('--members') ?? 100);
+  const schema = (value('--schema') ?? 'IFC4').toUpperCase();
+  const unit = value('--unit') ?? 'mm';
+  const out = value('--out');
+  if (!Number.isInteger(members) || members < 1) throw new Error('--members must be a positive whole number');
+  if (!['IFC4', 'IFC4X3', 'IFC2X3'].includes(schema)) throw new Error('--schema must be IFC4, IFC4X3 or IFC2X3');
+  if (!['mm', 'm', 'inch', 'foot'].includes(unit)) throw new Error('--unit must be mm, m, inch or foot');
+  if (!out) throw new Error('--out <file.ifc> is required');
+  return {
+    members,
+    schema: schema as FrameSchema,
+    unit: unit as FrameUnit,
+    defects: argv.includes('--defects'),
+    siteOrigin_mm: argv.includes('--far') ? FAR_SITE_ORIGIN_MM : undefined,
+    out,
+  };
+}
+
+if (require.main === module) {
+  try {
+    const options = parseArguments(process.argv.slice(2));
+    const layout = writeFrameFile(options.out, options);
+    console.log(`${options.out}: ${layout.slots.length} members, ${layout.bays}×${layout.bays} bays, ${layout.storeys} storeys, ${options.schema}, ${options.unit}`);
+  } catch (error) {
+    console.error(error instanceof Error ? error.message : String(error));
+    process.exit(2);
+  }
+}
