@@ -198,3 +198,35 @@ test('a reviewer verifies findings and sees no upload button', async () => {
   await page.setViewportSize({ width: 1280, height: 800 });
   await signOut();
 });
+
+test('an invitation e-mailed by the admin opens from the outbox and brings the invitee into the project', async () => {
+  await signIn('admin@taulens.test');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).click();
+  await page.getByRole('button', { name: 'Invite user' }).click();
+  const dialog = page.getByRole('dialog');
+  await dialog.getByLabel('E-mail address').fill('new.detailer@taulens.test');
+  await dialog.getByLabel('Add to project (optional)').click();
+  await page.getByRole('option', { name: new RegExp(DEPOT) }).click();
+  await dialog.getByRole('button', { name: 'Send invitation' }).click();
+  await page.getByText('Invitation sent to new.detailer@taulens.test.').waitFor();
+
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click();
+  const message = page.getByRole('listitem').filter({ hasText: 'new.detailer@taulens.test' });
+  await message.locator('summary').click();
+  const link = message.getByRole('link', { name: /\/invitations\// });
+  const href = await link.getAttribute('href');
+  expect(href).toMatch(/\/invitations\/[^/]+$/);
+  await signOut();
+
+  // The link carries the configured public address; the path is what the client routes.
+  await page.goto(`${server.url}${new URL(href!).pathname}`);
+  await page.getByText('You were invited as').waitFor();
+  await page.getByLabel('Your name').fill('Nell Detailer');
+  await page.getByLabel('New password').fill('a new long password');
+  await page.getByLabel('Repeat the password').fill('a new long password');
+  await page.getByRole('button', { name: 'Create account' }).click();
+  await page.waitForURL(`${server.url}/projects`);
+  await page.getByRole('link', { name: new RegExp(DEPOT) }).waitFor();
+  expect(await count('button', 'New project')).toBe(0);
+  await signOut();
+});

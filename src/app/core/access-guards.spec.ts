@@ -1,13 +1,11 @@
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { Location } from '@angular/common';
 import { Component } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter, Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import { adminGuard, NOT_FOUND_PATH, projectPermissionGuard, signedInGuard } from './access-guards';
-import { apiInterceptors } from './api-interceptors';
-import { nextRequest } from './http.testing';
+import { nextRequest, provideApiForTests } from './http.testing';
 import { Me, Session } from './session';
 import { meFor, TEST_PROJECT_ID } from './session.testing';
 
@@ -41,8 +39,7 @@ describe('route guards', () => {
           },
           { path: NOT_FOUND_PATH.slice(1), component: NotFoundPage },
         ]),
-        provideHttpClient(withInterceptors(apiInterceptors)),
-        provideHttpClientTesting(),
+        ...provideApiForTests(),
       ],
     });
     backend = TestBed.inject(HttpTestingController);

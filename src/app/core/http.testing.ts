@@ -1,6 +1,8 @@
 // HttpTestingController helpers for client specs. Not imported by the app.
-import { HttpRequest } from '@angular/common/http';
-import { HttpTestingController, TestRequest } from '@angular/common/http/testing';
+import { HttpRequest, provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
+import { EnvironmentProviders, Provider } from '@angular/core';
+import { apiInterceptors } from './api-interceptors';
 
 type RequestMatch = string | { method?: string; url?: string } | ((request: HttpRequest<unknown>) => boolean);
 
@@ -9,10 +11,11 @@ type RequestMatch = string | { method?: string; url?: string } | ((request: Http
  * detection and async handlers run later). Fails if it never comes.
  */
 export async function nextRequest(backend: HttpTestingController, match: RequestMatch): Promise<TestRequest> {
-  for (let tries = 0; tries < 50; tries++) {
+  // Up to about a second: dialogs hand over their result only after their closing animation.
+  for (let tries = 0; tries < 100; tries++) {
     const [request] = backend.match(match);
     if (request) return request;
-    await new Promise((resolve) => setTimeout(resolve));
+    await new Promise((resolve) => setTimeout(resolve, tries < 10 ? 0 : 10));
   }
   throw new Error(`No request matched ${typeof match === 'function' ? 'the predicate' : JSON.stringify(match)}`);
 }
@@ -20,4 +23,9 @@ export async function nextRequest(backend: HttpTestingController, match: Request
 /** Lets pending tasks (navigation, change detection) finish. */
 export function settle(): Promise<void> {
   return new Promise((resolve) => setTimeout(resolve, 10));
+}
+
+/** The app's HTTP stack (all interceptors) over the testing backend. */
+export function provideApiForTests(): (Provider | EnvironmentProviders)[] {
+  return [provideHttpClient(withInterceptors(apiInterceptors)), provideHttpClientTesting()];
 }

@@ -1,9 +1,8 @@
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import { apiInterceptors } from './api-interceptors';
 import { CSRF_HEADER, CSRF_TOKEN_URL } from './csrf.interceptor';
+import { provideApiForTests } from './http.testing';
 import { Session } from './session';
 import { meFor, TEST_PROJECT_ID } from './session.testing';
 
@@ -16,7 +15,7 @@ describe('Session', () => {
 
   beforeEach(() => {
     TestBed.configureTestingModule({
-      providers: [provideRouter([]), provideHttpClient(withInterceptors(apiInterceptors)), provideHttpClientTesting()],
+      providers: [provideRouter([]), ...provideApiForTests()],
     });
     session = TestBed.inject(Session);
     backend = TestBed.inject(HttpTestingController);

@@ -1,6 +1,8 @@
 // Sessions for client specs. Not imported by the app.
-import { PROJECT_ROLES, ProjectAction, ProjectRole } from './permissions';
-import { Me } from './session';
+import { HttpTestingController } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { ProjectAction, ProjectRole } from './permissions';
+import { Me, Session } from './session';
 
 export const TEST_PROJECT_ID = '6f0c2a53-3c1e-4c8e-9a4f-2b1d7e5a9c10';
 
@@ -26,8 +28,6 @@ export const ROLE_ACTIONS: Readonly<Record<ProjectRole, ProjectAction[]>> = {
   reviewer: [...EVERY_MEMBER, 'finding.verify', 'finding.accept', 'finding.assign'],
 };
 
-export const ALL_ACTIONS: ProjectAction[] = [...new Set(PROJECT_ROLES.flatMap((role) => ROLE_ACTIONS[role]))];
-
 /** `GET /api/auth/me` for a member with `role` in the test project, or for a site admin with no membership. */
 export function meFor(role: ProjectRole | 'admin', projectId = TEST_PROJECT_ID): Me {
   const isAdmin = role === 'admin';
@@ -38,4 +38,11 @@ export function meFor(role: ProjectRole | 'admin', projectId = TEST_PROJECT_ID):
     canCreateProjects: isAdmin || role === 'coordinator',
     devOutbox: false,
   };
+}
+
+/** Loads `me` into the Session as if the server had answered `GET /api/auth/me`. */
+export async function signInForTest(me: Me): Promise<void> {
+  const loading = TestBed.inject(Session).refresh();
+  TestBed.inject(HttpTestingController).expectOne('/api/auth/me').flush(me);
+  await loading;
 }

@@ -422,9 +422,9 @@ export class ViewerEngine {
     this.requestRender();
   }
 
-  setStandardView(view: StandardView): void {
+  setStandardView(view: StandardView, animate = true): void {
     if (this.model === null) return;
-    this.requireRig().frame(this.boundingSphere, true, ...this.standardViewVectors(view));
+    this.requireRig().frame(this.boundingSphere, animate, ...this.standardViewVectors(view));
     this.requestRender();
   }
 
@@ -539,11 +539,14 @@ export class ViewerEngine {
     const size = box.getSize(new Vector3());
     const axis = size.x >= size.y && size.x >= size.z ? 'x' : size.y >= size.z ? 'y' : 'z';
     const canvas = this.requireRenderer().domElement;
+    const camera = this.requireRig().camera;
+    // The camera's matrices are otherwise brought up to date by the next render.
+    camera.updateMatrixWorld();
     // Along the element's long axis through the middle of its box: a beam's web, a column's core.
     for (const along of [0.5, 0.3, 0.7, 0.15, 0.85]) {
       box.getCenter(_point);
       _point[axis] = box.min[axis] + size[axis] * along;
-      _point.project(this.requireRig().camera);
+      _point.project(camera);
       if (Math.abs(_point.x) > 1 || Math.abs(_point.y) > 1 || Math.abs(_point.z) > 1) continue;
       const x_px = ((_point.x + 1) / 2) * canvas.clientWidth;
       const y_px = ((1 - _point.y) / 2) * canvas.clientHeight;

@@ -1,6 +1,6 @@
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
@@ -42,28 +42,31 @@ export class AcceptInvitation {
     return error ? linkProblemOf(error) : null;
   });
 
-  protected readonly name = new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(120)] });
-  protected readonly password = createNewPasswordForm();
+  protected readonly form = new FormGroup({
+    name: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(120)] }),
+    password: createNewPasswordForm(),
+  });
   protected readonly saving = signal(false);
   protected readonly failure = signal<string | null>(null);
 
   constructor() {
     // The admin may have typed a name already; the invitee can still change it.
     effect(() => {
-      if (this.invitation.hasValue() && !this.name.dirty) this.name.setValue(this.invitation.value().name ?? '');
+      const name = this.form.controls.name;
+      if (this.invitation.hasValue() && !name.dirty) name.setValue(this.invitation.value().name ?? '');
     });
   }
 
   protected async acceptInvitation(): Promise<void> {
-    if (this.name.invalid || this.password.invalid) {
-      this.name.markAsTouched();
-      this.password.markAllAsTouched();
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
       return;
     }
+    const { name, password } = this.form.getRawValue();
     this.saving.set(true);
     this.failure.set(null);
     try {
-      await firstValueFrom(this.api.acceptInvitation(this.token(), this.name.value.trim(), this.password.getRawValue().password));
+      await firstValueFrom(this.api.acceptInvitation(this.token(), name.trim(), password.password));
       await this.session.signedInByServer();
       await this.router.navigateByUrl('/projects');
     } catch (error) {

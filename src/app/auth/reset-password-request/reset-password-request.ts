@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
@@ -19,17 +19,19 @@ import { AuthCard } from '../auth-card/auth-card';
 export class ResetPasswordRequest {
   private readonly api = inject(AuthApi);
 
-  protected readonly email = new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.email] });
+  protected readonly form = new FormGroup({
+    email: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.email] }),
+  });
   protected readonly sending = signal(false);
   protected readonly sentTo = signal<string | null>(null);
   protected readonly failure = signal<string | null>(null);
 
   protected requestLink(): void {
-    if (this.email.invalid) {
-      this.email.markAsTouched();
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
       return;
     }
-    const email = this.email.value.trim();
+    const email = this.form.getRawValue().email.trim();
     this.sending.set(true);
     this.failure.set(null);
     this.api.requestPasswordReset(email).subscribe({

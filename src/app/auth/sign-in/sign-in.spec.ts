@@ -1,12 +1,10 @@
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { Component } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { apiInterceptors } from '../../core/api-interceptors';
 import { CSRF_TOKEN_URL } from '../../core/csrf.interceptor';
-import { nextRequest, settle } from '../../core/http.testing';
+import { nextRequest, settle, provideApiForTests } from '../../core/http.testing';
 import { meFor } from '../../core/session.testing';
 import { SignIn } from './sign-in';
 
@@ -27,8 +25,7 @@ describe('SignIn', () => {
           ],
           withComponentInputBinding(),
         ),
-        provideHttpClient(withInterceptors(apiInterceptors)),
-        provideHttpClientTesting(),
+        ...provideApiForTests(),
       ],
     });
     backend = TestBed.inject(HttpTestingController);

@@ -1,13 +1,10 @@
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { apiInterceptors } from '../../core/api-interceptors';
-import { nextRequest, settle } from '../../core/http.testing';
+import { nextRequest, settle, provideApiForTests } from '../../core/http.testing';
 import { ProjectAction, ProjectRole } from '../../core/permissions';
-import { Session } from '../../core/session';
-import { meFor, ROLE_ACTIONS, TEST_PROJECT_ID } from '../../core/session.testing';
+import { meFor, ROLE_ACTIONS, signInForTest, TEST_PROJECT_ID } from '../../core/session.testing';
 import { Project } from '../project';
 import { projectRoutes } from '../project-routes';
 import { ProjectShell } from './project-shell';
@@ -37,8 +34,7 @@ describe('ProjectShell navigation', () => {
           withComponentInputBinding(),
           withRouterConfig({ paramsInheritanceStrategy: 'always' }),
         ),
-        provideHttpClient(withInterceptors(apiInterceptors)),
-        provideHttpClientTesting(),
+        ...provideApiForTests(),
       ],
     });
     backend = TestBed.inject(HttpTestingController);
@@ -52,9 +48,7 @@ describe('ProjectShell navigation', () => {
     section: string,
     permissions: ProjectAction[] = ROLE_ACTIONS[role],
   ): Promise<HTMLElement> {
-    const loading = TestBed.inject(Session).refresh();
-    backend.expectOne('/api/auth/me').flush(meFor(role));
-    await loading;
+    await signInForTest(meFor(role));
     const harness = await RouterTestingHarness.create();
     const opening = harness.navigateByUrl(`/projects/${TEST_PROJECT_ID}${section ? `/${section}` : ''}`);
     (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project, role, permissions });

@@ -1,0 +1,119 @@
+import { HttpTestingController } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { CSRF_TOKEN_URL } from '../../core/csrf.interceptor';
+import { nextRequest, provideApiForTests, settle } from '../../core/http.testing';
+import { ProjectRole } from '../../core/permissions';
+import { meFor, ROLE_ACTIONS, signInForTest, TEST_PROJECT_ID } from '../../core/session.testing';
+import { Member, Project } from '../project';
+import { projectRoutes } from '../project-routes';
+import { ProjectShell } from '../project-shell/project-shell';
+
+const project: Project = {
+  id: TEST_PROJECT_ID,
+  name: 'Ferry terminal canopy',
+  code: 'FTC-2',
+  description: '',
+  client: '',
+  location: '',
+  standard: 'en1993-1-1',
+  archived: false,
+  createdAt: '2026-03-02T08:00:00Z',
+};
+const members: Member[] = [
+  { userId: 'user-coordinator', email: 'coordinator@example.test', name: 'Test coordinator', role: 'coordinator' },
+  { userId: 'user-engineer', email: 'engineer@example.test', name: 'Test engineer', role: 'engineer' },
+];
+const membersUrl = `/api/projects/${TEST_PROJECT_ID}/members`;
+
+describe('ProjectMembers', () => {
+  let backend: HttpTestingController;
+
+  beforeEach(() => {
+    TestBed.configureTestingModule({
+      providers: [
+        provideRouter(
+          [{ path: 'projects/:projectId', component: ProjectShell, children: projectRoutes }],
+          withComponentInputBinding(),
+          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
+        ),
+        ...provideApiForTests(),
+      ],
+    });
+    backend = TestBed.inject(HttpTestingController);
+  });
+
+  afterEach(() => backend.verify());
+
+  async function open(role: ProjectRole): Promise<HTMLElement> {
+    await signInForTest(meFor(role));
+    const harness = await RouterTestingHarness.create();
+    const opening = harness.navigateByUrl(`/projects/${TEST_PROJECT_ID}/members`);
+    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project, role, permissions: ROLE_ACTIONS[role] });
+    await opening;
+    (await nextRequest(backend, membersUrl)).flush({ members });
+    await settle();
+    return harness.routeNativeElement!.querySelector<HTMLElement>('tl-project-members')!;
+  }
+
+  async function answerAfterToken(match: { method: string; url: string }, body: unknown, status = 200) {
+    (await nextRequest(backend, CSRF_TOKEN_URL)).flush({ token: 't' });
+    const request = await nextRequest(backend, match);
+    request.flush(body, { status, statusText: String(status) });
+    return request.request.body;
+  }
+
+  async function reloadsAfterWrite(): Promise<void> {
+    (await nextRequest(backend, membersUrl)).flush({ members });
+    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({
+      project,
+      role: 'coordinator',
+      permissions: ROLE_ACTIONS.coordinator,
+    });
+    (await nextRequest(backend, '/api/auth/me')).flush(meFor('coordinator'));
+    await settle();
+  }
+
+  it('lists members read-only for an engineer', async () => {
+    const page = await open('engineer');
+    expect([...page.querySelectorAll('tbody tr')].map((row) => row.querySelector('td')!.textContent!.trim())).toEqual([
+      'Test coordinator',
+      'Test engineer (you)',
+    ]);
+    expect(page.querySelector('form')).toBeNull();
+    expect(page.querySelector('mat-select')).toBeNull();
+    expect(page.textContent).toContain('Engineer');
+  });
+
+  it('lets a coordinator add someone without an account, which sends an invitation', async () => {
+    const page = await open('coordinator');
+    const email = page.querySelector<HTMLInputElement>('input[type=email]')!;
+    email.value = 'newcomer@example.test';
+    email.dispatchEvent(new Event('input'));
+    page.querySelector<HTMLButtonElement>('form button[type=submit]')!.click();
+    const sent = await answerAfterToken(
+      { method: 'POST', url: membersUrl },
+      { outcome: 'invited', invitation: { id: 'i1', email: 'newcomer@example.test', expiresAt: '2026-03-09T08:00:00Z' } },
+      201,
+    );
+    expect(sent).toEqual({ email: 'newcomer@example.test', role: 'engineer' });
+    await reloadsAfterWrite();
+    expect(page.querySelector('[role=status]')?.textContent).toContain('newcomer@example.test has no account yet: an invitation was sent.');
+  });
+
+  it("shows the server's refusal to remove the last coordinator", async () => {
+    const page = await open('coordinator');
+    page.querySelector<HTMLButtonElement>('button[aria-label="Remove Test coordinator"]')!.click();
+    await settle();
+    [...document.querySelectorAll<HTMLButtonElement>('mat-dialog-actions button')].find((b) => b.textContent?.trim() === 'Remove')!.click();
+    await answerAfterToken(
+      { method: 'DELETE', url: `${membersUrl}/user-coordinator` },
+      { error: { code: 'last_coordinator', message: 'A project needs at least one coordinator.' } },
+      409,
+    );
+    (await nextRequest(backend, membersUrl)).flush({ members });
+    await settle();
+    expect(page.querySelector('[role=alert]')?.textContent).toContain('A project needs at least one coordinator.');
+  });
+});

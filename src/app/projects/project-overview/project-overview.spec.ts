@@ -1,0 +1,99 @@
+import { HttpTestingController } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { CSRF_TOKEN_URL } from '../../core/csrf.interceptor';
+import { nextRequest, provideApiForTests, settle } from '../../core/http.testing';
+import { ProjectAction, ProjectRole } from '../../core/permissions';
+import { meFor, ROLE_ACTIONS, signInForTest, TEST_PROJECT_ID } from '../../core/session.testing';
+import { Project } from '../project';
+import { projectRoutes } from '../project-routes';
+import { ProjectShell } from '../project-shell/project-shell';
+
+const project: Project = {
+  id: TEST_PROJECT_ID,
+  name: 'Ferry terminal canopy',
+  code: 'FTC-2',
+  description: 'Cantilevered canopy on tapered welded girders.',
+  client: 'Port authority',
+  location: 'Pier 2',
+  standard: 'en1993-1-1',
+  archived: false,
+  createdAt: '2026-03-02T08:00:00Z',
+};
+
+describe('ProjectOverview', () => {
+  let backend: HttpTestingController;
+  let harness: RouterTestingHarness;
+
+  beforeEach(() => {
+    TestBed.configureTestingModule({
+      providers: [
+        provideRouter(
+          [{ path: 'projects/:projectId', component: ProjectShell, children: projectRoutes }],
+          withComponentInputBinding(),
+          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
+        ),
+        ...provideApiForTests(),
+      ],
+    });
+    backend = TestBed.inject(HttpTestingController);
+  });
+
+  afterEach(() => backend.verify());
+
+  async function open(role: ProjectRole, permissions: ProjectAction[] = ROLE_ACTIONS[role], shown = project) {
+    await signInForTest(meFor(role));
+    harness = await RouterTestingHarness.create();
+    const opening = harness.navigateByUrl(`/projects/${TEST_PROJECT_ID}`);
+    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project: shown, role, permissions });
+    await opening;
+    await settle();
+    return harness.routeNativeElement!.querySelector<HTMLElement>('tl-project-overview')!;
+  }
+
+  const buttonLabels = (page: HTMLElement) =>
+    [...page.querySelectorAll('.header-actions button')].map((b) => b.textContent!.replace(/^\s*\w+\s+/, '').trim());
+
+  it('shows the details and the cautions to every member', async () => {
+    const page = await open('engineer');
+    expect(page.textContent).toContain('EN 1993-1-1 with EN 1993-1-5');
+    expect(page.textContent).toContain('Port authority');
+    expect(page.querySelector('tl-cautions-notice')?.textContent).toContain('engineer of record');
+    expect(buttonLabels(page)).toEqual([]);
+  });
+
+  it('lets a coordinator edit and archive', async () => {
+    expect(buttonLabels(await open('coordinator'))).toEqual(['Edit details', 'Archive project']);
+  });
+
+  it('offers only restoring an archived project', async () => {
+    // The server leaves project.edit out for archived projects (server/auth/permissions.ts).
+    const readOnly: ProjectAction[] = ['project.read', 'model.read', 'check.read', 'export', 'project.archive'];
+    const page = await open('coordinator', readOnly, { ...project, archived: true });
+    expect(buttonLabels(page)).toEqual(['Restore project']);
+    expect(page.textContent).toContain('Archived: a read-only record.');
+  });
+
+  it('saves edited details and shows the saved project', async () => {
+    const page = await open('coordinator');
+    page.querySelector<HTMLButtonElement>('.header-actions button')!.click();
+    await settle();
+    const name = page.querySelector<HTMLInputElement>('input[formcontrolname=name]')!;
+    name.value = 'Ferry terminal canopy, east';
+    name.dispatchEvent(new Event('input'));
+    page.querySelector<HTMLButtonElement>('.edit-form button[type=submit]')!.click();
+
+    (await nextRequest(backend, CSRF_TOKEN_URL)).flush({ token: 't' });
+    const patch = await nextRequest(backend, { method: 'PATCH', url: `/api/projects/${TEST_PROJECT_ID}` });
+    expect(patch.request.body).toMatchObject({ name: 'Ferry terminal canopy, east', code: 'FTC-2' });
+    const saved = { ...project, name: 'Ferry terminal canopy, east' };
+    patch.flush({ project: saved });
+
+    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project: saved, role: 'coordinator', permissions: ROLE_ACTIONS.coordinator });
+    (await nextRequest(backend, '/api/auth/me')).flush(meFor('coordinator'));
+    await settle();
+    expect(page.querySelector('h1')?.textContent).toBe('Ferry terminal canopy, east');
+    expect(page.querySelector('.edit-form')).toBeNull();
+  });
+});
