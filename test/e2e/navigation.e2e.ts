@@ -76,18 +76,10 @@ async function signOut(): Promise<void> {
   await page.waitForURL(`${server.url}/sign-in`);
 }
 
-/** The words of the links in a navigation landmark, without icon ligature names. */
+/** The words of the links in a navigation landmark (each link's label span, without the icon's ligature name). */
 async function linkLabels(navigationName: string): Promise<string[]> {
-  return page
-    .getByRole('navigation', { name: navigationName })
-    .getByRole('link')
-    .evaluateAll((links) =>
-      links.map((link) => {
-        const copy = link.cloneNode(true) as HTMLElement;
-        copy.querySelectorAll('mat-icon').forEach((icon) => icon.remove());
-        return copy.textContent!.trim();
-      }),
-    );
+  const labels = await page.getByRole('navigation', { name: navigationName }).getByRole('link').locator('span').allTextContents();
+  return labels.map((label) => label.trim());
 }
 
 async function openDepot(): Promise<void> {

@@ -161,29 +161,30 @@ describe('utilisation scale', () => {
 });
 
 describe('utilisation legend', () => {
-  it('lists the ten bins from low to high, then over 100 % and not checked', () => {
+  it('reads from over 100 % at the top through the bins from high to low to not checked', () => {
     const legend = utilisationLegend();
     expect(legend.map((entry) => entry.label)).toEqual([
-      '0–10 %',
-      '10–20 %',
-      '20–30 %',
-      '30–40 %',
-      '40–50 %',
-      '50–60 %',
-      '60–70 %',
-      '70–80 %',
-      '80–90 %',
-      '90–100 %',
       'over 100 %',
+      '90–100 %',
+      '80–90 %',
+      '70–80 %',
+      '60–70 %',
+      '50–60 %',
+      '40–50 %',
+      '30–40 %',
+      '20–30 %',
+      '10–20 %',
+      '0–10 %',
       'not checked',
     ]);
-    expect(legend.slice(0, 10).map((entry) => entry.colour)).toEqual(UTILISATION_BIN_COLOURS);
+    expect(legend.slice(1, 11).map((entry) => entry.colour)).toEqual([...UTILISATION_BIN_COLOURS].reverse());
   });
 
   it('shows each bin in the colour the scale gives a ratio inside it', () => {
-    utilisationLegend()
-      .slice(0, 10)
-      .forEach((entry, bin) => expect(utilisationColour(bin / 10 + 0.05)).toBe(entry.colour));
+    for (const entry of utilisationLegend().slice(1, 11)) {
+      const lowerPercent = Number(entry.label.split('–')[0]);
+      expect(utilisationColour(lowerPercent / 100 + 0.05)).toBe(entry.colour);
+    }
   });
 });
 

@@ -69,7 +69,7 @@ function percent(bin: number): number {
   return (bin * 100) / UTILISATION_BIN_COUNT;
 }
 
-/** Legend of the utilisation colouring: the ten bins from low to high, then over 100 %, then not checked. */
+/** Legend of the utilisation colouring, read from the top: over 100 %, the ten bins from high to low, not checked. */
 export function utilisationLegend(): LegendEntry[] {
   const bins = UTILISATION_BIN_COLOURS.map((colour, bin) => ({
     key: `bin-${bin}`,
@@ -77,8 +77,8 @@ export function utilisationLegend(): LegendEntry[] {
     colour,
   }));
   return [
-    ...bins,
     { key: 'over', label: 'over 100 %', colour: OVER_CAPACITY_COLOUR },
+    ...bins.reverse(),
     { key: 'not-checked', label: 'not checked', colour: NOT_CHECKED_COLOUR },
   ];
 }

@@ -351,6 +351,16 @@ export class ViewerEngine {
     return { coloured, notInModel: colours.size - coloured };
   }
 
+  /** Background behind the model, any CSS colour three.js reads (hex, rgb()); the host passes its theme surface. */
+  setBackground(cssColour: string): void {
+    (this.scene.background as Color).setStyle(cssColour);
+    this.requestRender();
+  }
+
+  currentShading(): Shading {
+    return this.shading;
+  }
+
   setShading(shading: Shading): void {
     this.shading = shading;
     if (this.model?.members) this.model.members.mesh.material = this.memberMaterial();
@@ -379,6 +389,10 @@ export class ViewerEngine {
     this.hidden.clear();
     this.isolated = null;
     this.applyVisibility();
+  }
+
+  contextVisible(): boolean {
+    return this.contextShown;
   }
 
   setContextVisible(visible: boolean): void {

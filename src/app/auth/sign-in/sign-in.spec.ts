@@ -44,13 +44,13 @@ describe('SignIn', () => {
     input.dispatchEvent(new Event('input'));
   }
 
-  async function submit(element: HTMLElement, email: string, password: string): Promise<void> {
+  function submit(element: HTMLElement, email: string, password: string): void {
     type(element, 'input[type=email]', email);
     type(element, 'input[type=password]', password);
     element.querySelector<HTMLButtonElement>('button[type=submit]')!.click();
   }
 
-  async function answerLogin(status: 200 | 401 | 429, body: unknown): Promise<unknown> {
+  async function answerLogin(status: 200 | 401 | 429, body: object): Promise<unknown> {
     (await nextRequest(backend, CSRF_TOKEN_URL)).flush({ token: 't' });
     const login = await nextRequest(backend, { method: 'POST', url: '/api/auth/login' });
     login.flush(body, { status, statusText: String(status) });
@@ -59,7 +59,7 @@ describe('SignIn', () => {
 
   it('signs in and returns to the page that asked for it', async () => {
     const page = await openSignIn();
-    await submit(page, ' engineer@example.test ', 'correct horse battery');
+    submit(page, ' engineer@example.test ', 'correct horse battery');
     expect(await answerLogin(200, { user: meFor('engineer').user })).toEqual({
       email: 'engineer@example.test',
       password: 'correct horse battery',
@@ -71,7 +71,7 @@ describe('SignIn', () => {
 
   it("shows the server's message for a wrong password and clears the password", async () => {
     const page = await openSignIn();
-    await submit(page, 'engineer@example.test', 'not the password');
+    submit(page, 'engineer@example.test', 'not the password');
     await answerLogin(401, {
       error: { code: 'invalid_credentials', message: 'The e-mail address or password is not right.' },
     });
@@ -83,7 +83,7 @@ describe('SignIn', () => {
 
   it('says to wait when sign-in is rate limited', async () => {
     const page = await openSignIn();
-    await submit(page, 'engineer@example.test', 'guess number eleven');
+    submit(page, 'engineer@example.test', 'guess number eleven');
     await answerLogin(429, { error: { code: 'rate_limited', message: 'Too many attempts. Wait a few minutes and try again.' } });
     await harness.fixture.whenStable();
     expect(page.querySelector('[role=alert]')?.textContent).toContain('Too many attempts');
@@ -91,7 +91,7 @@ describe('SignIn', () => {
 
   it('sends nothing while the form is incomplete', async () => {
     const page = await openSignIn();
-    await submit(page, 'not-an-address', '');
+    submit(page, 'not-an-address', '');
     await harness.fixture.whenStable();
     expect(backend.match(() => true)).toEqual([]);
     expect(page.textContent).toContain('This is not an e-mail address.');
@@ -100,7 +100,7 @@ describe('SignIn', () => {
 
   it('ignores a return address on another site', async () => {
     const page = await openSignIn('/sign-in?returnUrl=%2F%2Felsewhere.test%2Fphish');
-    await submit(page, 'engineer@example.test', 'correct horse battery');
+    submit(page, 'engineer@example.test', 'correct horse battery');
     await answerLogin(200, { user: meFor('engineer').user });
     (await nextRequest(backend, '/api/auth/me')).flush(meFor('engineer'));
     await settle();

@@ -57,7 +57,7 @@ describe('ProjectMembers', () => {
     return harness.routeNativeElement!.querySelector<HTMLElement>('tl-project-members')!;
   }
 
-  async function answerAfterToken(match: { method: string; url: string }, body: unknown, status = 200) {
+  async function answerAfterToken(match: { method: string; url: string }, body: object, status = 200) {
     (await nextRequest(backend, CSRF_TOKEN_URL)).flush({ token: 't' });
     const request = await nextRequest(backend, match);
     request.flush(body, { status, statusText: String(status) });
