@@ -3,8 +3,8 @@
  * recomputes what it draws: the section outline and τ(y), sampled by the engine from the section and the governing
  * shear force recorded here.
  */
-import type { CheckFlag, ResolvedCheckParams, Standard } from '../engine/check';
-import type { GradeId } from '../engine/grades';
+import type { CheckParameters } from '../checks/check-parameters';
+import type { CheckRunSummary, MemberCheck } from '../checks/check-run-compute';
 import type { ISectionInput } from '../engine/section';
 import type { TraceStep } from '../engine/trace';
 import type { FindingExport } from '../findings/export/finding-export';
@@ -26,31 +26,17 @@ export interface ReportRun {
   inputFiles: readonly ReportInputFile[];
 }
 
-export interface ReportCombination {
-  name: string;
-  /** Signed shear force from the analysis; the check uses |VEd|. */
-  shear_kN: number;
-  capacity_kN: number;
-  utilisation: number;
-}
-
 export interface CalculationSheetData {
   memberLabel: string;
-  globalId: string;
   profileName: string;
-  grade?: GradeId;
   storey?: string;
+  /** The section as checked (after any fabrication override of the run). */
   section: ISectionInput;
-  fy_MPa: number;
-  /** 'fail' above 100 %, 'warning' for a flagged member that passes. */
-  status: 'fail' | 'warning';
-  flags: readonly CheckFlag[];
-  /** The load combination with the largest utilisation. */
-  governing: ReportCombination;
-  combinations: readonly ReportCombination[];
-  /** Clause-by-clause trace of the governing combination, as the engine wrote it. */
+  /** The member's result in the run: failing, or passing with a warning; it must have a governing combination. */
+  check: MemberCheck;
+  /** Clause-by-clause trace of the governing combination, as the engine's evaluateCapacity wrote it. */
   trace: readonly TraceStep[];
-  /** EN 1993-1-1 (6.19) limit fy/(√3·γM0), drawn on the τ(y) plot; absent for AISC. */
+  /** EN 1993-1-1 (6.19) limit fy/(√3·γM0) from the prepared capacity, drawn on the τ(y) plot; absent for AISC. */
   elasticLimit_MPa?: number;
 }
 
@@ -63,15 +49,13 @@ export interface SignOffEntry {
 export interface CheckReportData {
   project: { name: string; reference?: string };
   revision: { label: string; fileName: string };
-  parameters: {
-    standard: Standard;
-    params: ResolvedCheckParams;
-    /** National annex or project basis the γ factors come from, as people name it. */
-    basis?: string;
-  };
+  /** The run's parameters as stored, and the national annex or project basis they come from, as people name it. */
+  parameters: CheckParameters;
+  parametersBasis?: string;
   run: ReportRun;
-  members: { passed: number; flagged: number; failed: number; notChecked: number };
-  highest?: { memberLabel: string; combination: string; utilisation: number };
+  summary: CheckRunSummary;
+  /** How people name the member with the highest utilisation (summary.maxUtilisationGlobalId). */
+  highestMemberLabel?: string;
   findings: readonly FindingExport[];
   sheets: readonly CalculationSheetData[];
   signOff: { prepared?: SignOffEntry; checked?: SignOffEntry; approved?: SignOffEntry };

@@ -4,7 +4,8 @@
  * in its footer.
  */
 import PDFDocument from 'pdfkit';
-import type { CheckFlag } from '../engine/check';
+import type { GoverningCheck, RunFlag } from '../checks/check-run-compute';
+import { ValidationError } from '../http/errors';
 import { sectionProperties } from '../engine/section-properties';
 import { shearStressProfile } from '../engine/shear-stress';
 import {
@@ -36,14 +37,17 @@ export interface CheckReportOptions {
   compress?: boolean;
 }
 
-/** Plain-language notes for the engine's flags. */
-const FLAG_TEXT: Readonly<Record<CheckFlag, string>> = {
+/** Plain-language notes for the flags a sheet most often carries; others are printed by name. */
+const FLAG_TEXT: Readonly<Partial<Record<RunFlag, string>>> = {
   'web-buckling-governs': 'Web shear buckling reduces the capacity.',
   'web-proportion-limit': 'The web is more slender than the code allows for an unstiffened web.',
   'elastic-check-exceeded': 'The elastic check (6.19) is exceeded although the plastic check passes.',
   'yield-strength-given': 'The yield strength was given directly, not taken from the grade.',
   'assumed-grade': "The grade was assumed: the model's material name was not recognised.",
   'catalogue-section': 'Section dimensions come from the catalogue, not from the model.',
+  'fabrication-overridden': 'The run sets the fabrication (rolled or welded) differently from the model.',
+  'resistance-factor-overridden': 'A project resistance factor replaces the code value.',
+  'several-result-keys': 'Shear results of several analysis members are combined for this member.',
 };
 
 const SHEET_STATUS = {
@@ -117,7 +121,7 @@ function signOffBlock(doc: Pdf, signOff: CheckReportData['signOff']): void {
 function parametersAndRun(doc: Pdf, data: CheckReportData): void {
   doc.addPage();
   heading(doc, 'Check parameters');
-  const rows = parameterRows(data.parameters.standard, data.parameters.params, data.parameters.basis);
+  const rows = parameterRows(data.parameters, data.parametersBasis);
   table(doc, [{ header: 'Parameter', weight: 1.2 }, { header: 'Value', weight: 2.4 }], rows.map((row) => [row.label, row.value]), TEXT_SIZE.body);
 
   heading(doc, 'Check run record');
@@ -147,22 +151,28 @@ function findingCounts(data: CheckReportData): Map<FindingStatus, number> {
   return counts;
 }
 
+function countCell(count: number, fill: string): TableRow[number] {
+  return { text: String(count), fill: count > 0 ? fill : undefined };
+}
+
 function summary(doc: Pdf, data: CheckReportData): void {
   heading(doc, 'Summary');
-  const members = data.members;
+  const members = data.summary;
   table(
     doc,
-    [{ header: 'Members', weight: 2 }, { header: 'Count', weight: 1, align: 'right', role: 'mono' }],
+    [{ header: `Members (${members.members})`, weight: 2 }, { header: 'Count', weight: 1, align: 'right', role: 'mono' }],
     [
-      ['Pass', String(members.passed)],
-      ['Pass, flagged as close to capacity', { text: String(members.flagged), fill: members.flagged > 0 ? COLOURS.warning : undefined }],
-      ['Fail', { text: String(members.failed), fill: members.failed > 0 ? COLOURS.fail : undefined }],
+      ['Pass', String(members.pass)],
+      ['of which close to capacity', countCell(members.warnings, COLOURS.warning)],
+      ['Fail', countCell(members.fail, COLOURS.fail)],
       ['Not checked', String(members.notChecked)],
+      ['Not an I-section web check', String(members.notApplicable)],
     ],
     TEXT_SIZE.body,
   );
-  if (data.highest) {
-    paragraph(doc, `Highest utilisation: ${percentText(data.highest.utilisation)} — ${data.highest.memberLabel}, load combination ${data.highest.combination}.`, { role: 'bold' });
+  if (members.maxUtilisation !== null) {
+    const who = data.highestMemberLabel ?? members.maxUtilisationGlobalId ?? '';
+    paragraph(doc, `Highest utilisation: ${percentText(members.maxUtilisation)} — ${who}.`, { role: 'bold' });
   }
   const counts = findingCounts(data);
   table(
@@ -208,9 +218,9 @@ const DRAWING_WIDTH_PT = 200;
 const DIMENSION_ROOM_PT = 60;
 const LABEL_COLUMN_PT = 78;
 
-function sheetDrawings(doc: Pdf, sheet: CalculationSheetData): void {
+function sheetDrawings(doc: Pdf, sheet: CalculationSheetData, governing: GoverningCheck): void {
   const props = sectionProperties(sheet.section);
-  const profile = shearStressProfile(props, sheet.governing.shear_kN * 1000);
+  const profile = shearStressProfile(props, governing.VEd_N);
   const width_mm = Math.max(sheet.section.topFlange.width_mm, sheet.section.bottomFlange.width_mm);
   const innerHeight = DRAWING_HEIGHT_PT - DIMENSION_ROOM_PT;
   const scale = drawingScale(width_mm, props.depth_mm, DRAWING_WIDTH_PT - DIMENSION_ROOM_PT, innerHeight);
@@ -229,7 +239,8 @@ function sheetDrawings(doc: Pdf, sheet: CalculationSheetData): void {
   writeText(doc, `Section to scale 1:${formatNumber(scale)} on A4; dimensions in mm.`, 'body', PAGE.margin_pt, y, { size: TEXT_SIZE.tiny, color: COLOURS.muted, width: DRAWING_WIDTH_PT });
   writeText(
     doc,
-    `Elastic shear stress τ(y) = V·Q(y)/(I·t(y)) for the governing VEd = ${formatNumber(Math.abs(sheet.governing.shear_kN))} kN, level with the section.`,
+    `Elastic shear stress τ(y) = V·Q(y)/(I·t(y)) for the governing VEd = ${kN(governing.VEd_N)} kN, level with the section. ` +
+      'At each flange τ jumps where the width changes: "jump a / b" gives the value just inside the web (or fillet) and just inside the flange.',
     'body',
     plotLeft,
     y,
@@ -244,22 +255,37 @@ function sheetDrawings(doc: Pdf, sheet: CalculationSheetData): void {
   doc.y += 8;
 }
 
+function kN(force_N: number): string {
+  return formatNumber(Math.abs(force_N) / 1000);
+}
+
+function flagText(flag: RunFlag): string {
+  return FLAG_TEXT[flag] ?? `Flag: ${flag}.`;
+}
+
 function calculationSheet(doc: Pdf, sheet: CalculationSheetData, data: CheckReportData): void {
+  const { check } = sheet;
+  const governing = check.governing;
+  if (governing === null) {
+    throw new ValidationError(`The calculation sheet for ${sheet.memberLabel} needs a checked member: it has no governing combination.`, {
+      code: 'report_sheet_invalid',
+    });
+  }
   doc.addPage();
   heading(doc, `Calculation sheet — ${sheet.memberLabel}`);
-  const status = SHEET_STATUS[sheet.status];
+  const status = check.status === 'fail' ? SHEET_STATUS.fail : SHEET_STATUS.warning;
   table(
     doc,
     [{ header: 'Member', weight: 1 }, { header: '', weight: 1.6 }, { header: 'Result', weight: 1 }, { header: '', weight: 1.2 }],
     [
-      ['GlobalId', { text: sheet.globalId }, 'Standard', STANDARD_LABELS[data.parameters.standard]],
-      ['Profile', sheet.profileName, 'Governing combination', sheet.governing.name],
-      ['Grade', `${sheet.grade ?? 'given fy'} · fy = ${formatNumber(sheet.fy_MPa)} MPa`, 'VEd / VRd', `${formatNumber(Math.abs(sheet.governing.shear_kN))} / ${formatNumber(sheet.governing.capacity_kN)} kN`],
-      ['Storey', sheet.storey ?? '—', 'Utilisation', { text: `${percentText(sheet.governing.utilisation)} · ${status.label}`, fill: status.fill }],
+      ['GlobalId', check.globalId, 'Standard', STANDARD_LABELS[data.parameters.standard]],
+      ['Profile', `${sheet.profileName} (${check.fabrication ?? sheet.section.fabrication})`, 'Governing combination', governing.combination],
+      ['Grade', `${check.grade ?? 'given fy'} · fy = ${formatNumber(check.fy_MPa ?? Number.NaN)} MPa`, 'VEd / VRd', `${kN(governing.VEd_N)} / ${kN(governing.VRd_N)} kN`],
+      ['Storey', sheet.storey ?? '—', 'Utilisation', { text: `${percentText(governing.utilisation)} · ${status.label}`, fill: status.fill }],
     ],
   );
-  sheetDrawings(doc, sheet);
-  if (sheet.flags.length > 0) paragraph(doc, sheet.flags.map((flag) => `• ${FLAG_TEXT[flag]}`).join('\n'), { size: TEXT_SIZE.small });
+  sheetDrawings(doc, sheet, governing);
+  if (check.flags.length > 0) paragraph(doc, check.flags.map((flag) => `• ${flagText(flag)}`).join('\n'), { size: TEXT_SIZE.small });
 
   heading(doc, 'Clause by clause (governing combination)');
   table(
@@ -284,6 +310,7 @@ function calculationSheet(doc: Pdf, sheet: CalculationSheetData, data: CheckRepo
   );
 
   heading(doc, 'Load combinations');
+  paragraph(doc, 'The capacity does not depend on the combination; each row is |VEd| / VRd.', { size: TEXT_SIZE.small, color: COLOURS.muted });
   table(
     doc,
     [
@@ -292,10 +319,10 @@ function calculationSheet(doc: Pdf, sheet: CalculationSheetData, data: CheckRepo
       { header: 'VRd [kN]', weight: 1, align: 'right', role: 'mono' },
       { header: 'Utilisation', weight: 1, align: 'right', role: 'mono' },
     ],
-    sheet.combinations.map((combination) => [
-      combination.name === sheet.governing.name ? `${combination.name} (governing)` : combination.name,
-      formatNumber(combination.shear_kN),
-      formatNumber(combination.capacity_kN),
+    check.combinations.map((combination) => [
+      combination.combination === governing.combination ? `${combination.combination} (governing)` : combination.combination,
+      formatNumber(combination.VEd_N / 1000),
+      kN(governing.VRd_N),
       utilisationCell(combination.utilisation),
     ]),
   );

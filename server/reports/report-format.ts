@@ -1,7 +1,7 @@
 /** How the report writes numbers, dates and check parameters. */
-import type { ResolvedCheckParams, Standard } from '../engine/check';
+import type { CheckParameters } from '../checks/check-parameters';
+import type { Standard } from '../engine/check';
 import { formatNumber } from '../engine/trace';
-import { MPA_PER_KSI } from '../engine/units';
 
 export { formatNumber };
 
@@ -39,24 +39,33 @@ function stiffenerText(spacing_mm: number | null): string {
   return spacing_mm === null ? 'none (unstiffened web)' : `${formatNumber(spacing_mm)} mm clear spacing`;
 }
 
-/** The parameters that entered the check, in the order an engineer reads them for the standard used. */
-export function parameterRows(standard: Standard, params: ResolvedCheckParams, basis?: string): ParameterRow[] {
-  const rows: ParameterRow[] = [{ label: 'Standard', value: STANDARD_LABELS[standard] }];
-  if (basis !== undefined && basis.trim() !== '') rows.push({ label: 'Basis of the factors', value: basis });
-  if (standard === 'en1993-1-1') {
-    rows.push(
-      { label: 'γM0', value: formatNumber(params.gammaM0) },
-      { label: 'γM1', value: formatNumber(params.gammaM1) },
-      { label: 'η (EN 1993-1-5 §5.1)', value: params.eta === null ? '1.20 up to fy = 460 MPa, 1.00 above (recommended)' : formatNumber(params.eta) },
-      { label: 'Yield strength by thickness', value: params.yieldRule === 'en10025-2' ? 'EN 10025-2' : 'EN 1993-1-1 Table 3.1' },
-      { label: 'End post', value: params.endPost },
-    );
-  } else {
-    rows.push({ label: 'E', value: `${formatNumber(params.e_MPa / MPA_PER_KSI, 5)} ksi (${formatNumber(params.e_MPa, 6)} MPa)` });
+function standardRows(parameters: CheckParameters): ParameterRow[] {
+  switch (parameters.standard) {
+    case 'en1993-1-1':
+      return [
+        { label: 'γM0', value: formatNumber(parameters.gammaM0) },
+        { label: 'γM1', value: formatNumber(parameters.gammaM1) },
+        { label: 'η (EN 1993-1-5 §5.1)', value: parameters.eta === null ? '1.20 up to fy = 460 MPa, 1.00 above (recommended)' : formatNumber(parameters.eta) },
+        { label: 'Yield strength by thickness', value: parameters.yieldRule === 'en10025-2' ? 'EN 10025-2' : 'EN 1993-1-1 Table 3.1' },
+        { label: 'End post (EN 1993-1-5 Table 5.1)', value: parameters.endPost },
+      ];
+    case 'aisc360-22-lrfd':
+      return [{ label: 'φv', value: parameters.phiV === null ? 'by §G1/§G2.1 (1.00 or 0.90)' : `${formatNumber(parameters.phiV)} (project value)` }];
+    case 'aisc360-22-asd':
+      return [{ label: 'Ωv', value: parameters.omegaV === null ? 'by §G1/§G2.1 (1.50 or 1.67)' : `${formatNumber(parameters.omegaV)} (project value)` }];
   }
-  rows.push(
-    { label: 'Transverse stiffeners', value: stiffenerText(params.stiffenerSpacing_mm) },
-    { label: 'Flag as close to capacity from', value: percentText(params.warningRatio) },
-  );
-  return rows;
+}
+
+/** The parameters that entered the check, in the order an engineer reads them for the standard used. */
+export function parameterRows(parameters: CheckParameters, basis?: string): ParameterRow[] {
+  const overrides = Object.entries(parameters.fabricationOverrides).map(([profile, fabrication]) => `${profile}: ${fabrication}`);
+  return [
+    { label: 'Standard', value: STANDARD_LABELS[parameters.standard] },
+    ...(basis !== undefined && basis.trim() !== '' ? [{ label: 'Basis of the factors', value: basis }] : []),
+    ...standardRows(parameters),
+    { label: 'Grade where the model names none', value: parameters.defaultGrade },
+    { label: 'Transverse stiffeners', value: stiffenerText(parameters.stiffenerSpacing_mm) },
+    { label: 'Fabrication set by the run', value: overrides.length > 0 ? overrides.join(', ') : 'none (as read from the model)' },
+    { label: 'Flag as close to capacity from', value: percentText(parameters.warningRatio) },
+  ];
 }

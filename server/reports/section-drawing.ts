@@ -188,7 +188,7 @@ export function drawShearStressPlot(
   // The jump at each junction: stress just inside the web (or fillet) and just inside the flange.
   for (const junction of [profile.topJunction, profile.bottomJunction]) {
     const point = plotPoint(frame, box, scale, junction.webSide_MPa, junction.level_mm);
-    levelLabel(doc, box, point, `${formatNumber(junction.webSide_MPa)} | ${formatNumber(junction.flangeSide_MPa)} flange`);
+    levelLabel(doc, box, point, `jump ${formatNumber(junction.webSide_MPa)} / ${formatNumber(junction.flangeSide_MPa)}`);
   }
 
   const legend: PlotLegendEntry[] = [];

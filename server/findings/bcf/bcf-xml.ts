@@ -5,6 +5,7 @@
  */
 import { XMLBuilder, XMLParser, XMLValidator } from 'fast-xml-parser';
 import { ValidationError } from '../../http/errors';
+import { distinctValues } from '../export/finding-export';
 
 /** An element tree for XMLBuilder: `@_name` keys are attributes, arrays repeat an element, undefined is left out. */
 export type XmlNode = { [key: string]: XmlValue };
@@ -30,7 +31,7 @@ export function xmlText(value: string): string {
 
 /** Trimmed, non-blank, first occurrence only, ready for XML. */
 export function distinctTexts(values: readonly string[]): string[] {
-  return [...new Set(values.map((value) => value.trim()).filter((value) => value !== ''))].map(xmlText);
+  return distinctValues(values).map(xmlText);
 }
 
 /** A complete UTF-8 document for one root element. */

@@ -36,6 +36,11 @@ export const FINDING_KIND_LABELS: Readonly<Record<FindingKind, string>> = {
   manual: 'Manual finding',
 };
 
+/** Labels and user lists as exported: trimmed, blanks dropped, each value once in first-seen order. */
+export function distinctValues(values: readonly string[]): string[] {
+  return [...new Set(values.map((value) => value.trim()).filter((value) => value !== ''))];
+}
+
 export interface FindingComment {
   /** UUID, stable across exports so a re-import can tell new comments from known ones. */
   guid: string;
