@@ -5,26 +5,15 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { BrowserContext, chromium, Page } from 'playwright-core';
+import { BrowserContext, Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../server/demo/seed';
 import { RunningServer, startServer } from '../../server/main';
+import { launchChromium } from './chromium';
 
-const CHROMIUM = '/usr/bin/chromium';
-const CHROMIUM_ARGS = [
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--use-gl=angle',
-  '--use-angle=swiftshader',
-  '--enable-unsafe-swiftshader',
-];
 const DEPOT = 'Brindlecote Riverside Depot and Offices';
 const ALL_SECTIONS = ['Overview', 'Models', 'Shear results', 'Checks', '3D view', 'Findings', 'Members'];
-const SCREENSHOTS = process.env.TAULENS_SCREENSHOTS ?? os.tmpdir();
+// Screenshots for looking at the rendered look by eye; nothing compares them.
+const SCREENSHOTS = os.tmpdir();
 
 let server: RunningServer;
 let context: BrowserContext;
@@ -44,12 +33,7 @@ beforeAll(async () => {
     logLevel: 'error',
     webRoot: path.resolve(__dirname, '../../dist/web/browser'),
   });
-  context = await chromium.launchPersistentContext(profileDir, {
-    executablePath: CHROMIUM,
-    headless: true,
-    args: CHROMIUM_ARGS,
-    viewport: { width: 1280, height: 800 },
-  });
+  context = await launchChromium(profileDir);
   page = context.pages()[0] ?? (await context.newPage());
   page.setDefaultTimeout(15_000);
 });

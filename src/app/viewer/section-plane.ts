@@ -21,7 +21,7 @@ import {
   Vector3,
 } from 'three';
 import type { GpuResources } from './gpu-resources';
-import { type Vec3, ifcToThreeDirection } from './ifc-axes';
+import { type Vec3, ifcToThreeDirection, threeToIfcDirection } from './ifc-axes';
 
 /** The IFC axis the cut is square to: z gives a horizontal cut (a plan), x and y vertical cuts. */
 export type SectionAxis = 'x' | 'y' | 'z';
@@ -83,6 +83,13 @@ export class SectionPlane {
 
   get active(): boolean {
     return this.planes.length > 0;
+  }
+
+  /** The IFC axis the active cut is square to, or null for a cut at another angle (from a viewpoint). */
+  get axis(): SectionAxis | null {
+    const normal = threeToIfcDirection([this.plane.normal.x, this.plane.normal.y, this.plane.normal.z]);
+    const index = normal.findIndex((component) => Math.abs(component) > 0.9999);
+    return index < 0 ? null : (['x', 'y', 'z'] as const)[index];
   }
 
   /** The model's box, which sizes the sheet and limits how far the handle goes. */

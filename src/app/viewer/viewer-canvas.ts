@@ -20,6 +20,7 @@ import { type ColourMode, memberColours } from './member-colouring';
 import { type MemberFilters, NO_MEMBER_FILTERS, filteredGlobalIds } from './member-filters';
 import type { ViewerMember } from './viewer-member';
 import {
+  type ColourResult,
   type GlbSource,
   type LoadProgress,
   ModelLoadError,
@@ -64,6 +65,8 @@ export class ViewerCanvas {
 
   /** The running engine, for commands (framing, views, cuts, snapshots); null until WebGL has started. */
   readonly engine = signal<ViewerEngine | null>(null);
+  /** How the last colouring matched the model: members coloured and results naming no element of it. */
+  readonly colouring = signal<ColourResult | null>(null);
 
   protected readonly canvas = viewChild.required<ElementRef<HTMLCanvasElement>>('canvas');
   protected readonly state = signal<CanvasState>('starting');
@@ -82,7 +85,7 @@ export class ViewerCanvas {
     effect(() => {
       const engine = this.engine();
       if (engine === null || this.modelVersion() === 0) return;
-      engine.setColours(memberColours(this.members(), this.colourMode()));
+      this.colouring.set(engine.setColours(memberColours(this.members(), this.colourMode())));
     });
     effect(() => {
       const engine = this.engine();

@@ -469,8 +469,9 @@ export class ViewerEngine {
     this.requestRender();
   }
 
-  sectionActive(): boolean {
-    return this.section.active;
+  /** The cut now shown: null for none, `{ axis: null }` for a cut at an angle (restored from a viewpoint). */
+  sectionState(): { axis: SectionAxis | null } | null {
+    return this.section.active ? { axis: this.section.axis } : null;
   }
 
   /** The current view in IFC axes, ready for a finding's BCF viewpoint. */
@@ -569,8 +570,9 @@ export class ViewerEngine {
     return null;
   }
 
+  /** Figures of the last frame and the GPU memory held; zeros once disposed. */
   stats(): ViewerStats {
-    const info = this.requireRenderer().info;
+    const info = this.renderer?.info ?? { memory: { geometries: 0, textures: 0 }, programs: null };
     return {
       drawCalls: this.lastFrame.drawCalls,
       triangles: this.lastFrame.triangles,

@@ -1,26 +1,12 @@
 import { HttpTestingController } from '@angular/common/http/testing';
-import { TestBed } from '@angular/core/testing';
-import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
-import { RouterTestingHarness } from '@angular/router/testing';
 import { CSRF_TOKEN_URL } from '../../core/csrf.interceptor';
-import { nextRequest, provideApiForTests, settle } from '../../core/http.testing';
+import { nextRequest, settle } from '../../core/http.testing';
 import { ProjectRole } from '../../core/permissions';
-import { meFor, ROLE_ACTIONS, signInForTest, TEST_PROJECT_ID } from '../../core/session.testing';
-import { Member, Project } from '../project';
-import { projectRoutes } from '../project-routes';
-import { ProjectShell } from '../project-shell/project-shell';
+import { meFor, ROLE_ACTIONS, TEST_PROJECT_ID } from '../../core/session.testing';
+import { Member } from '../project';
+import { configureProjectPagesForTests, openProjectSection, TEST_PROJECT } from '../project.testing';
 
-const project: Project = {
-  id: TEST_PROJECT_ID,
-  name: 'Ferry terminal canopy',
-  code: 'FTC-2',
-  description: '',
-  client: '',
-  location: '',
-  standard: 'en1993-1-1',
-  archived: false,
-  createdAt: '2026-03-02T08:00:00Z',
-};
+const project = TEST_PROJECT;
 const members: Member[] = [
   { userId: 'user-coordinator', email: 'coordinator@example.test', name: 'Test coordinator', role: 'coordinator' },
   { userId: 'user-engineer', email: 'engineer@example.test', name: 'Test engineer', role: 'engineer' },
@@ -31,27 +17,13 @@ describe('ProjectMembers', () => {
   let backend: HttpTestingController;
 
   beforeEach(() => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideRouter(
-          [{ path: 'projects/:projectId', component: ProjectShell, children: projectRoutes }],
-          withComponentInputBinding(),
-          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
-        ),
-        ...provideApiForTests(),
-      ],
-    });
-    backend = TestBed.inject(HttpTestingController);
+    backend = configureProjectPagesForTests();
   });
 
   afterEach(() => backend.verify());
 
   async function open(role: ProjectRole): Promise<HTMLElement> {
-    await signInForTest(meFor(role));
-    const harness = await RouterTestingHarness.create();
-    const opening = harness.navigateByUrl(`/projects/${TEST_PROJECT_ID}/members`);
-    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project, role, permissions: ROLE_ACTIONS[role] });
-    await opening;
+    const harness = await openProjectSection(role, 'members');
     (await nextRequest(backend, membersUrl)).flush({ members });
     await settle();
     return harness.routeNativeElement!.querySelector<HTMLElement>('tl-project-members')!;

@@ -1,54 +1,23 @@
 import { HttpTestingController } from '@angular/common/http/testing';
-import { TestBed } from '@angular/core/testing';
-import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
-import { RouterTestingHarness } from '@angular/router/testing';
 import { CSRF_TOKEN_URL } from '../../core/csrf.interceptor';
-import { nextRequest, provideApiForTests, settle } from '../../core/http.testing';
+import { nextRequest, settle } from '../../core/http.testing';
 import { ProjectAction, ProjectRole } from '../../core/permissions';
-import { meFor, ROLE_ACTIONS, signInForTest, TEST_PROJECT_ID } from '../../core/session.testing';
-import { Project } from '../project';
-import { projectRoutes } from '../project-routes';
-import { ProjectShell } from '../project-shell/project-shell';
+import { meFor, ROLE_ACTIONS, TEST_PROJECT_ID } from '../../core/session.testing';
+import { configureProjectPagesForTests, openProjectSection, TEST_PROJECT } from '../project.testing';
 
-const project: Project = {
-  id: TEST_PROJECT_ID,
-  name: 'Ferry terminal canopy',
-  code: 'FTC-2',
-  description: 'Cantilevered canopy on tapered welded girders.',
-  client: 'Port authority',
-  location: 'Pier 2',
-  standard: 'en1993-1-1',
-  archived: false,
-  createdAt: '2026-03-02T08:00:00Z',
-};
+const project = TEST_PROJECT;
 
 describe('ProjectOverview', () => {
   let backend: HttpTestingController;
-  let harness: RouterTestingHarness;
 
   beforeEach(() => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideRouter(
-          [{ path: 'projects/:projectId', component: ProjectShell, children: projectRoutes }],
-          withComponentInputBinding(),
-          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
-        ),
-        ...provideApiForTests(),
-      ],
-    });
-    backend = TestBed.inject(HttpTestingController);
+    backend = configureProjectPagesForTests();
   });
 
   afterEach(() => backend.verify());
 
   async function open(role: ProjectRole, permissions: ProjectAction[] = ROLE_ACTIONS[role], shown = project) {
-    await signInForTest(meFor(role));
-    harness = await RouterTestingHarness.create();
-    const opening = harness.navigateByUrl(`/projects/${TEST_PROJECT_ID}`);
-    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project: shown, role, permissions });
-    await opening;
-    await settle();
+    const harness = await openProjectSection(role, '', { permissions, project: shown });
     return harness.routeNativeElement!.querySelector<HTMLElement>('tl-project-overview')!;
   }
 

@@ -1,25 +1,7 @@
 import { HttpTestingController } from '@angular/common/http/testing';
-import { TestBed } from '@angular/core/testing';
-import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
-import { RouterTestingHarness } from '@angular/router/testing';
-import { nextRequest, settle, provideApiForTests } from '../../core/http.testing';
 import { ProjectAction, ProjectRole } from '../../core/permissions';
-import { meFor, ROLE_ACTIONS, signInForTest, TEST_PROJECT_ID } from '../../core/session.testing';
-import { Project } from '../project';
-import { projectRoutes } from '../project-routes';
-import { ProjectShell } from './project-shell';
-
-const project: Project = {
-  id: TEST_PROJECT_ID,
-  name: 'Ferry terminal canopy',
-  code: 'FTC-2',
-  description: '',
-  client: '',
-  location: '',
-  standard: 'en1993-1-1',
-  archived: false,
-  createdAt: '2026-03-02T08:00:00Z',
-};
+import { ROLE_ACTIONS } from '../../core/session.testing';
+import { configureProjectPagesForTests, openProjectSection } from '../project.testing';
 
 const ALL_SECTIONS = ['Overview', 'Models', 'Shear results', 'Checks', '3D view', 'Findings', 'Members'];
 
@@ -27,17 +9,7 @@ describe('ProjectShell navigation', () => {
   let backend: HttpTestingController;
 
   beforeEach(() => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideRouter(
-          [{ path: 'projects/:projectId', component: ProjectShell, children: projectRoutes }],
-          withComponentInputBinding(),
-          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
-        ),
-        ...provideApiForTests(),
-      ],
-    });
-    backend = TestBed.inject(HttpTestingController);
+    backend = configureProjectPagesForTests();
   });
 
   afterEach(() => backend.verify());
@@ -48,12 +20,7 @@ describe('ProjectShell navigation', () => {
     section: string,
     permissions: ProjectAction[] = ROLE_ACTIONS[role],
   ): Promise<HTMLElement> {
-    await signInForTest(meFor(role));
-    const harness = await RouterTestingHarness.create();
-    const opening = harness.navigateByUrl(`/projects/${TEST_PROJECT_ID}${section ? `/${section}` : ''}`);
-    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project, role, permissions });
-    await opening;
-    await settle();
+    const harness = await openProjectSection(role, section, { permissions });
     harness.detectChanges();
     return harness.fixture.nativeElement as HTMLElement;
   }
