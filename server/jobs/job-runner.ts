@@ -34,17 +34,22 @@ export function workerFile(callerFilename: string, relativePath: string): string
 }
 
 export function createJobRunner(options: { maxThreads?: number } = {}): JobRunner {
-  const pool = new Piscina({
-    maxThreads: options.maxThreads ?? Math.max(1, os.availableParallelism() - 1),
-    idleTimeout: 30_000,
-    ...(RUNNING_FROM_SOURCE
-      ? {
-          execArgv: ['--require', require.resolve('ts-node/register/transpile-only')],
-          // A worker gets its inputs from the task, never from the environment.
-          env: { TS_NODE_PROJECT: path.resolve(__dirname, '../../tsconfig.server.json') },
-        }
-      : {}),
-  });
+  // Made with the first job, so a server that runs none starts no threads. (Piscina's minThreads: 0
+  // would do the same, but then tasks never start under jest.)
+  let pool: Piscina | undefined;
+  const poolForJobs = () =>
+    (pool ??= new Piscina({
+      minThreads: 1,
+      maxThreads: options.maxThreads ?? Math.max(1, os.availableParallelism() - 1),
+      idleTimeout: 30_000,
+      ...(RUNNING_FROM_SOURCE
+        ? {
+            execArgv: ['--require', require.resolve('ts-node/register/transpile-only')],
+            // A worker gets its inputs from the task, never from the environment.
+            env: { TS_NODE_PROJECT: path.resolve(__dirname, '../../tsconfig.server.json') },
+          }
+        : {}),
+    }));
 
   return {
     async run<I, O>(workerPath: string, input: I, runOptions: JobRunOptions = {}): Promise<O> {
@@ -56,7 +61,7 @@ export function createJobRunner(options: { maxThreads?: number } = {}): JobRunne
       });
       try {
         const task: JobTask<I> = { input, progressPort: port2 };
-        const outcome = (await pool.run(task, { filename: workerPath, transferList: [port2], signal: runOptions.signal })) as JobOutcome<O>;
+        const outcome = (await poolForJobs().run(task, { filename: workerPath, transferList: [port2], signal: runOptions.signal })) as JobOutcome<O>;
         if (outcome?.kind !== 'result' && outcome?.kind !== 'domain-error') {
           throw new Error(`worker ${workerPath} must default-export defineJob(...)`);
         }
@@ -67,7 +72,9 @@ export function createJobRunner(options: { maxThreads?: number } = {}): JobRunne
         port1.close();
       }
     },
-    close: () => pool.close(),
+    close: async () => {
+      await pool?.close();
+    },
   };
 }
 
