@@ -5,9 +5,18 @@ import { formatNumber } from '../engine/trace';
 
 export { formatNumber };
 
-/** 1.124 → "112.4 %": one decimal, so 100.04 % is not printed as a pass-looking "100 %". */
+/**
+ * A ratio as a percentage with one decimal, rounded up: 1.0004 is 100.1 %, so a result just over capacity never
+ * prints as a pass-looking 100.0 % (rounding up is the cautious side; common practice, no source).
+ */
+export function percentRoundedUp(ratio: number): number {
+  // The small allowance keeps exact values (0.935 stored as 0.93500000000000005) from rounding up a step.
+  return Math.ceil(ratio * 1000 - 1e-6) / 10;
+}
+
+/** 1.1241 → "112.5 %"; see percentRoundedUp. */
 export function percentText(ratio: number): string {
-  return Number.isFinite(ratio) ? `${(ratio * 100).toFixed(1)} %` : '—';
+  return Number.isFinite(ratio) ? `${percentRoundedUp(ratio).toFixed(1)} %` : '—';
 }
 
 /** "2026-02-03 14:00 UTC": unambiguous in every locale. */

@@ -48,6 +48,10 @@ export interface BcfImportResult {
   project?: BcfProject;
   extensions?: ImportedExtensions;
   topics: ImportedTopic[];
+  /**
+   * Topic GUIDs not in `knownTopicGuids`; GlobalIds not in `knownGlobalIds` (without that list: those that are not
+   * 22-character GlobalIds at all); TopicStatus values that are not ours.
+   */
   unknown: { topicGuids: string[]; globalIds: string[]; statuses: string[] };
   /** Things that did not stop the import but that the person importing should see. */
   warnings: string[];

@@ -7,6 +7,7 @@ import {
   FINDING_KIND_LABELS,
   FINDING_PRIORITY_LABELS,
   FINDING_STATUS_LABELS,
+  type FindingComment,
   type FindingExport,
 } from '../export/finding-export';
 import type { BcfVersion } from './bcf-version';
@@ -113,13 +114,7 @@ export function buildMarkup(
   return buildXmlDocument('Markup', markup);
 }
 
-export interface ImportedComment {
-  guid: string;
-  author: string;
-  date: string;
-  text: string;
-  modifiedDate?: string;
-  modifiedAuthor?: string;
+export interface ImportedComment extends FindingComment {
   viewpointGuid?: string;
 }
 

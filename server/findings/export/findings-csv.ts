@@ -4,6 +4,7 @@
  */
 import { stringify } from 'csv-stringify/sync';
 import { REPORT_CAUTIONS_TEXT } from '../../reports/report-cautions';
+import { percentRoundedUp } from '../../reports/report-format';
 import {
   FINDING_KIND_LABELS,
   FINDING_PRIORITY_LABELS,
@@ -66,7 +67,7 @@ function findingRow(finding: FindingExport): (string | number)[] {
     distinctValues(finding.labels).join('; '),
     finding.memberLabel ?? '',
     finding.memberGlobalIds.join(' '),
-    finding.utilisation === undefined ? '' : Number((finding.utilisation * 100).toFixed(1)),
+    finding.utilisation === undefined ? '' : percentRoundedUp(finding.utilisation),
     spreadsheetDateTime(finding.createdAt),
     finding.createdBy,
     spreadsheetDateTime(finding.modifiedAt),
