@@ -1,6 +1,8 @@
 import {
   ChangeDetectionStrategy,
   Component,
+  ElementRef,
+  ErrorHandler,
   computed,
   effect,
   inject,
@@ -16,7 +18,6 @@ import { BlobDownload } from './blob-download';
 import type { Projection } from './camera-rig';
 import type { ColourMode } from './member-colouring';
 import { type MemberFilters, NO_MEMBER_FILTERS } from './member-filters';
-import type { SectionAxis } from './section-plane';
 import { ViewerCanvas } from './viewer-canvas';
 import type { GlbSource, ModelSummary, ViewerEngine, ViewerHit } from './viewer-engine';
 import { ViewerLegend } from './viewer-legend';
@@ -26,7 +27,7 @@ import { type ViewerCommand, ViewerToolbar } from './viewer-toolbar';
 import { ViewerTooltip } from './viewer-tooltip';
 import type { ViewerViewpoint } from './viewpoint';
 
-/** Past this distance from the right or bottom edge the tooltip opens towards the other side. */
+/** Closer than this to the right or bottom edge, the tooltip opens towards the other side. */
 const TOOLTIP_ROOM_PX = { x: 240, y: 140 };
 
 /**
@@ -42,23 +43,25 @@ const TOOLTIP_ROOM_PX = { x: 240, y: 140 };
 })
 export class ViewerWorkspace {
   private readonly download = inject(BlobDownload);
+  private readonly errorHandler = inject(ErrorHandler);
 
   readonly glb = input<GlbSource | null>(null);
   readonly members = input<readonly ViewerMember[]>([]);
   /** A member to select and fly to, e.g. from the results table. */
   readonly focusGlobalId = input<string | null>(null);
-  /** Used in the snapshot's file name. */
+  /** The snapshot's file name, without extension. */
   readonly snapshotName = input('taulens-3d-view');
 
   readonly selected = output<readonly string[]>();
   readonly snapshot = output<Blob>();
 
   protected readonly canvas = viewChild.required(ViewerCanvas);
+  private readonly canvasElement = viewChild.required(ViewerCanvas, { read: ElementRef<HTMLElement> });
   protected readonly colourMode = signal<ColourMode>('utilisation');
   protected readonly filters = signal<MemberFilters>(NO_MEMBER_FILTERS);
   protected readonly selection = signal<readonly string[]>([]);
   protected readonly hover = signal<ViewerHit | null>(null);
-  protected readonly sectionAxis = signal<SectionAxis | null>(null);
+  protected readonly section = signal<ReturnType<ViewerEngine['sectionState']>>(null);
   protected readonly projection = signal<Projection>('perspective');
   protected readonly summary = signal<ModelSummary | null>(null);
   protected readonly devMode = isDevMode();
@@ -84,26 +87,25 @@ export class ViewerWorkspace {
     return this.canvas().engine()?.getViewpoint() ?? null;
   }
 
-  /** Restores a finding's view; throws a ViewpointError, leaving the view as it was, when the viewpoint is bad. */
+  /** Restores a finding's view; a bad viewpoint throws a ViewpointError and leaves the view as it was. */
   applyViewpoint(viewpoint: ViewerViewpoint): void {
     const engine = this.canvas().engine();
     if (engine === null) return;
     engine.setViewpoint(viewpoint);
     // The viewpoint says what is visible, so the filter controls go back to showing everything.
     this.filters.set(NO_MEMBER_FILTERS);
-    this.sectionAxis.set(viewpoint.clippingPlanes.length > 0 ? (this.sectionAxis() ?? 'z') : null);
-    this.projection.set(viewpoint.camera.kind);
+    this.section.set(engine.sectionState());
+    this.projection.set(engine.projection());
     this.changeSelection(engine.selection());
   }
 
-  protected tooltipLeft(hit: ViewerHit): number {
-    const width = this.canvasWidth();
-    return hit.x_px > width - TOOLTIP_ROOM_PX.x ? hit.x_px - TOOLTIP_ROOM_PX.x : hit.x_px;
-  }
-
-  protected tooltipTop(hit: ViewerHit): number {
-    const height = this.canvasHeight();
-    return hit.y_px > height - TOOLTIP_ROOM_PX.y ? hit.y_px - TOOLTIP_ROOM_PX.y : hit.y_px;
+  /** Tooltip position, flipped to the other side of the pointer near the canvas's right and bottom edges. */
+  protected tooltipPosition(hit: ViewerHit): { x_px: number; y_px: number } {
+    const { clientWidth, clientHeight } = this.canvasElement().nativeElement;
+    return {
+      x_px: hit.x_px > clientWidth - TOOLTIP_ROOM_PX.x ? hit.x_px - TOOLTIP_ROOM_PX.x : hit.x_px,
+      y_px: hit.y_px > clientHeight - TOOLTIP_ROOM_PX.y ? hit.y_px - TOOLTIP_ROOM_PX.y : hit.y_px,
+    };
   }
 
   protected changeSelection(globalIds: readonly string[]): void {
@@ -126,7 +128,7 @@ export class ViewerWorkspace {
         return this.projection.set(command.projection);
       case 'section':
         engine.setSection(command.axis);
-        return this.sectionAxis.set(command.axis);
+        return this.section.set(engine.sectionState());
       case 'flip-section':
         return engine.flipSection();
       case 'hide-selection':
@@ -155,19 +157,7 @@ export class ViewerWorkspace {
         this.download.save(png, `${this.snapshotName()}.png`);
         this.snapshot.emit(png);
       })
-      // An encoding failure is rare and not the user's doing; the app's error handler reports it.
-      .catch((error: unknown) => queueMicrotask(() => { throw error; }));
-  }
-
-  private canvasWidth(): number {
-    return this.canvas().engine() === null ? 0 : (this.canvasElement()?.clientWidth ?? 0);
-  }
-
-  private canvasHeight(): number {
-    return this.canvasElement()?.clientHeight ?? 0;
-  }
-
-  private canvasElement(): HTMLElement | null {
-    return document.querySelector('tl-viewer-canvas');
+      // Encoding fails only when the browser is out of memory or similar; report it like any unexpected error.
+      .catch((error: unknown) => this.errorHandler.handleError(error));
   }
 }
