@@ -1,4 +1,5 @@
 import { findSection, toSectionInput } from '../catalogue/catalogue';
+import type { GradeId } from '../engine/grades';
 import { sectionProperties } from '../engine/section-properties';
 import { shearStressProfile } from '../engine/shear-stress';
 import { fromNewtons, toNewtons } from '../engine/units';
@@ -13,7 +14,7 @@ function profileOf(name: string, source: MemberProfile['source'] = 'ifc'): Membe
   return { name: section.name, source, ifcType: 'IfcIShapeProfileDef', ...toSectionInput(section) };
 }
 
-const material = (grade: string, fy_MPa: number): MemberMaterial => ({ name: `Steel ${grade}`, grade, fy_MPa, assumed: false });
+const material = (grade: GradeId, fy_MPa: number): MemberMaterial => ({ name: `Steel ${grade}`, grade, fy_MPa, assumed: false });
 
 function member(globalId: string, profile: MemberProfile | null, mat: MemberMaterial | null = material('A992', 345)): CheckableMember {
   return { globalId, status: 'ok', profile, material: mat, flags: [] };
@@ -126,13 +127,6 @@ describe('computeCheckRun: statuses and flags', () => {
       // A36: Fy = 36 ksi (AISC Manual Table 2-4).
       expect(fromNewtons(check.fy_MPa! * 1e6 * 0.0254 ** 2, 'kip')).toBeCloseTo(36, 9);
     }
-  });
-
-  it('uses the yield strength of a grade the engine does not tabulate', () => {
-    const [check] = run([member('A', profileOf('W24X62'), { name: 'Special', grade: 'X-50', fy_MPa: 300, assumed: false })], { A: [shear('ULS', kips(100))] }, parameters).members;
-    expect(check.grade).toBeNull();
-    expect(check.fy_MPa).toBe(300);
-    expect(check.flags).toContain('yield-strength-given');
   });
 
   it('flags catalogue sections and members fed by several analysis members', () => {

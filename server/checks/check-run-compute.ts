@@ -15,7 +15,7 @@ import {
   type PreparedCapacity,
   utilisationOf,
 } from '../engine/check';
-import { type GradeId, isGradeId } from '../engine/grades';
+import type { GradeId } from '../engine/grades';
 import { EngineInputError } from '../engine/input-error';
 import type { Fabrication, ISectionInput } from '../engine/section';
 import { shearStressProfile } from '../engine/shear-stress';
@@ -178,7 +178,7 @@ function checkOneMember(
     globalId: member.globalId,
     status: result.status,
     warning: result.warning,
-    grade: material.grade ?? null,
+    grade: material.grade,
     fy_MPa: result.fy_MPa,
     fabrication,
     governing: {
@@ -194,18 +194,14 @@ function checkOneMember(
 }
 
 interface MaterialChoice {
-  grade?: GradeId;
-  fy_MPa?: number;
+  grade: GradeId;
   assumed: boolean;
 }
 
-/** The member's grade; its yield strength when the grade is not one the engine tabulates; else the run's default grade. */
+/** The member's grade, or the run's default grade when the model's material named none. */
 function materialOf(member: CheckableMember, parameters: CheckParameters): MaterialChoice {
   const material = member.material;
-  if (material && !material.assumed) {
-    if (isGradeId(material.grade)) return { grade: material.grade, assumed: false };
-    if (Number.isFinite(material.fy_MPa) && material.fy_MPa > 0) return { fy_MPa: material.fy_MPa, assumed: false };
-  }
+  if (material && !material.assumed) return { grade: material.grade, assumed: false };
   return { grade: parameters.defaultGrade, assumed: true };
 }
 
@@ -241,7 +237,7 @@ class RunCapacities {
   get(section: ISectionInput, material: MaterialChoice): PreparedMember | EngineInputError {
     let base: PreparedCapacity;
     try {
-      base = this.engine.get(section, { grade: material.grade, fy_MPa: material.fy_MPa }, this.parameters.standard, this.engineParams);
+      base = this.engine.get(section, { grade: material.grade }, this.parameters.standard, this.engineParams);
     } catch (error) {
       if (error instanceof EngineInputError) return error;
       throw error;

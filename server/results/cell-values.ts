@@ -18,18 +18,33 @@ const DECIMAL_COMMA_NUMBER = /^[+-]?(?:\d+,?\d*|,\d+)(?:[eE][+-]?\d+)?$/;
 
 export function cellText(cell: Cell): string {
   if (cell === null) return '';
-  return typeof cell === 'number' ? String(cell) : cell.trim();
+  return typeof cell === 'number' ? String(cell) : trimmed(cell);
 }
 
 export function isBlankCell(cell: Cell): boolean {
-  return cell === null || (typeof cell === 'string' && cell.trim() === '');
+  if (cell === null) return true;
+  if (typeof cell === 'number') return false;
+  return cell.length === 0 || (mayHaveSpaceAt(cell, 0) && cell.trim() === '');
 }
 
 /** The number in a cell, or NaN when the cell holds anything else (blank cells included: test isBlankCell first). */
 export function cellNumber(cell: Cell, decimalSeparator: DecimalSeparator): number {
   if (typeof cell === 'number') return Number.isFinite(cell) ? cell : Number.NaN;
   if (cell === null) return Number.NaN;
-  return parseDecimal(cell.trim(), decimalSeparator);
+  return parseDecimal(trimmed(cell), decimalSeparator);
+}
+
+/**
+ * Text without surrounding white space. Almost every cell has none, and this runs for millions of cells, so trim()
+ * (which allocates) is called only when an end character is a control, space or non-ASCII character.
+ */
+function trimmed(text: string): string {
+  return text.length > 0 && (mayHaveSpaceAt(text, 0) || mayHaveSpaceAt(text, text.length - 1)) ? text.trim() : text;
+}
+
+function mayHaveSpaceAt(text: string, index: number): boolean {
+  const code = text.charCodeAt(index);
+  return code <= 32 || code >= 127;
 }
 
 export function parseDecimal(text: string, decimalSeparator: DecimalSeparator): number {

@@ -20,6 +20,14 @@ describe('sniffDelimiter', () => {
     expect(sniffDelimiter(text)).toBe(',');
   });
 
+  it('still finds the format when an unclosed quote breaks the sample', () => {
+    expect(sniffCsvFormat('member;combination;shear\nB1;"ULS;1,5\nB2;ULS;2,5\n', true)).toEqual({
+      delimiter: ';',
+      decimalSeparator: ',',
+      hasHeaderRow: true,
+    });
+  });
+
   it('falls back to a comma for a single column', () => {
     expect(sniffDelimiter('member\nB1\nB2\n')).toBe(',');
   });

@@ -75,20 +75,30 @@ export function sniffDelimiter(text: string): Delimiter {
   return best?.delimiter ?? ',';
 }
 
-/** Non-blank records of the sample; a sample that does not parse as CSV with this delimiter yields none. */
+/**
+ * Non-blank records of the sample. A sample that does not parse as a whole (an unclosed quote swallows the rest) is
+ * parsed line by line, dropping the lines that fail, so the format is still found and the reader can then report the
+ * broken line itself.
+ */
 function sampleRecords(text: string, delimiter: Delimiter): string[][] {
+  const parseSample = (sample: string): string[][] =>
+    parse(sample, { delimiter, relax_column_count: true, relax_quotes: true, skip_empty_lines: true, to: SAMPLE_RECORDS });
+  let records: string[][];
   try {
-    const records: string[][] = parse(text, {
-      delimiter,
-      relax_column_count: true,
-      relax_quotes: true,
-      skip_empty_lines: true,
-      to: SAMPLE_RECORDS,
-    });
-    return records.filter((record) => record.some((cell) => cell.trim() !== ''));
+    records = parseSample(text);
   } catch {
-    return [];
+    records = text
+      .split(/\r?\n/)
+      .slice(0, SAMPLE_RECORDS)
+      .flatMap((line) => {
+        try {
+          return parseSample(line);
+        } catch {
+          return [];
+        }
+      });
   }
+  return records.filter((record) => record.some((cell) => cell.trim() !== ''));
 }
 
 function modeOf(values: number[]): number {

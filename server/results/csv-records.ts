@@ -12,23 +12,37 @@ export function csvParseOptions(format: CsvFormat): Options {
   return { delimiter: format.delimiter, bom: true, relax_column_count: true, relax_quotes: true };
 }
 
-/** Streams the records of a CSV file in chunks; only one chunk is held at a time. */
+/**
+ * Streams the records of a CSV file in chunks; only one chunk is held at a time. Records are taken off the parser with
+ * read() as they become readable (one await per buffer fill, not one per record as for-await over the stream would).
+ */
 export async function* csvRecordChunks(path: string, format: CsvFormat, chunkSize: number): AsyncGenerator<RawRecord[]> {
   // UTF-16 text is decoded by the file stream; csv-parse re-encodes strings as UTF-8 and drops the BOM itself.
   const input = fs.createReadStream(path, format.encoding === 'utf16le' ? { encoding: 'utf16le' } : {});
   const parser = input.pipe(parse(csvParseOptions(format)));
+  const state: { failure?: unknown; ended: boolean; wake?: () => void } = { ended: false };
+  const wake = () => state.wake?.();
   input.on('error', (error) => parser.destroy(error));
+  parser.on('readable', wake);
+  parser.on('end', () => {
+    state.ended = true;
+    wake();
+  });
+  parser.on('error', (error) => {
+    state.failure = error;
+    wake();
+  });
   let row = 0;
-  let chunk: RawRecord[] = [];
   try {
-    for await (const cells of parser as AsyncIterable<string[]>) {
-      chunk.push({ row: ++row, cells });
-      if (chunk.length >= chunkSize) {
-        yield chunk;
-        chunk = [];
-      }
+    for (;;) {
+      const chunk: RawRecord[] = [];
+      let cells: string[] | null;
+      while (chunk.length < chunkSize && (cells = parser.read() as string[] | null) !== null) chunk.push({ row: ++row, cells });
+      if (state.failure !== undefined) throw state.failure;
+      if (chunk.length > 0) yield chunk;
+      else if (state.ended) return;
+      else await new Promise<void>((resolve) => (state.wake = resolve));
     }
-    if (chunk.length > 0) yield chunk;
   } catch (error) {
     throw unreadableCsv(error, row + 1);
   } finally {

@@ -18,20 +18,75 @@ export interface GoverningShear {
 
 type PerCombination = Map<string, GoverningShear>;
 
+/** One member key's governing values, indexed by combination id; holes where the key has no such combination. */
+interface KeyColumns {
+  shear_N: number[];
+  station_mm: number[];
+  row: number[];
+}
+
 export class GoverningShearCollector {
-  private readonly byKey = new Map<string, PerCombination>();
+  // Columns, not an object per (key, combination): a million governing values stay a few arrays per key.
+  private readonly byKey = new Map<string, KeyColumns>();
+  private readonly combinationIds = new Map<string, number>();
+  private readonly combinations: string[] = [];
+  /** Rows of one member usually come together: its columns are kept at hand. */
+  private lastKey: string | undefined;
+  private last: KeyColumns | undefined;
 
   /** A results sink: pass it to readResults (bound, so `collector.add` can be handed over as is). */
   readonly add = (batch: readonly ResultRow[]): void => {
     for (const row of batch) {
-      const { memberKey, combination, shear_N, station_mm } = row;
-      keepLarger(entryOf(this.byKey, memberKey), { combination, shear_N, station_mm, row: row.row, memberKey });
+      if (row.memberKey !== this.lastKey || !this.last) {
+        this.lastKey = row.memberKey;
+        this.last = this.columnsOf(row.memberKey);
+      }
+      const id = this.combinationId(row.combination);
+      if (isLarger(row.shear_N, this.last.shear_N[id])) {
+        this.last.shear_N[id] = row.shear_N;
+        this.last.station_mm[id] = row.station_mm ?? Number.NaN;
+        this.last.row[id] = row.row;
+      }
     }
   };
 
-  /** Governing values per member key, combinations in file order. */
+  /** Governing values per member key, combinations in order of first appearance in the file. */
   perKey(): Map<string, GoverningShear[]> {
-    return listed(this.byKey);
+    const perKey = new Map<string, GoverningShear[]>();
+    for (const [memberKey, columns] of this.byKey) {
+      const shears: GoverningShear[] = [];
+      columns.shear_N.forEach((shear_N, id) => {
+        const station_mm = columns.station_mm[id];
+        shears.push({
+          combination: this.combinations[id],
+          shear_N,
+          station_mm: Number.isNaN(station_mm) ? undefined : station_mm,
+          row: columns.row[id],
+          memberKey,
+        });
+      });
+      perKey.set(memberKey, shears);
+    }
+    return perKey;
+  }
+
+  private columnsOf(memberKey: string): KeyColumns {
+    let columns = this.byKey.get(memberKey);
+    if (!columns) {
+      columns = { shear_N: [], station_mm: [], row: [] };
+      this.byKey.set(memberKey, columns);
+    }
+    return columns;
+  }
+
+  private combinationId(combination: string): number {
+    let id = this.combinationIds.get(combination);
+    if (id === undefined) {
+      id = this.combinations.length;
+      this.combinationIds.set(combination, id);
+      this.combinations.push(combination);
+    }
+    return id;
   }
 }
 
@@ -45,26 +100,19 @@ export function governingShearsByMember(
 ): Map<string, GoverningShear[]> {
   const byMember = new Map<string, PerCombination>();
   for (const match of matches) {
-    for (const shear of perKey.get(match.memberKey) ?? []) keepLarger(entryOf(byMember, match.globalId), shear);
+    let perCombination = byMember.get(match.globalId);
+    if (!perCombination) {
+      perCombination = new Map();
+      byMember.set(match.globalId, perCombination);
+    }
+    for (const shear of perKey.get(match.memberKey) ?? []) {
+      if (isLarger(shear.shear_N, perCombination.get(shear.combination)?.shear_N)) perCombination.set(shear.combination, shear);
+    }
   }
-  return listed(byMember);
+  return new Map([...byMember].map(([globalId, perCombination]) => [globalId, [...perCombination.values()]]));
 }
 
-function entryOf(outer: Map<string, PerCombination>, key: string): PerCombination {
-  let perCombination = outer.get(key);
-  if (!perCombination) {
-    perCombination = new Map();
-    outer.set(key, perCombination);
-  }
-  return perCombination;
-}
-
-/** Keeps the first of equal magnitudes, so the result does not depend on the sign convention. */
-function keepLarger(perCombination: PerCombination, shear: GoverningShear): void {
-  const current = perCombination.get(shear.combination);
-  if (!current || Math.abs(shear.shear_N) > Math.abs(current.shear_N)) perCombination.set(shear.combination, shear);
-}
-
-function listed(outer: Map<string, PerCombination>): Map<string, GoverningShear[]> {
-  return new Map([...outer].map(([key, perCombination]) => [key, [...perCombination.values()]]));
+/** Equal magnitudes keep the first, so the result does not depend on the sign convention. */
+function isLarger(shear_N: number, current_N: number | undefined): boolean {
+  return current_N === undefined || Math.abs(shear_N) > Math.abs(current_N);
 }

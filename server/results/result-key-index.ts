@@ -26,6 +26,9 @@ export class ResultKeyIndex {
   private readonly combinationIds = new Map<string, number>();
   /** seen[member][combination]: the first row, or with a station column the first row per station (NaN = blank). */
   private readonly seen: SeenRows[][] = [];
+  /** Rows of one member usually come together: its id is kept at hand. */
+  private lastKey: string | undefined;
+  private lastId = -1;
 
   constructor(private readonly hasStations: boolean) {}
 
@@ -67,6 +70,7 @@ export class ResultKeyIndex {
   }
 
   private memberId(row: ResultRow): number {
+    if (row.memberKey === this.lastKey) return this.lastId;
     let id = this.memberIds.get(row.memberKey);
     if (id === undefined) {
       id = this.keys.length;
@@ -74,6 +78,8 @@ export class ResultKeyIndex {
       this.keys.push({ memberKey: row.memberKey, rows: 0, firstRow: row.row });
       this.seen.push([]);
     }
+    this.lastKey = row.memberKey;
+    this.lastId = id;
     return id;
   }
 

@@ -35,24 +35,24 @@ export function createRowReader(
 
   return (record) => {
     const { row, cells } = record;
-    const issues: RowIssue[] = [];
+    let issues: RowIssue[] | undefined;
     const memberKey = cellText(cells[columns.member] ?? null);
-    if (memberKey === '') issues.push(issue(row, headers[columns.member], 'member_missing', 'the member key is empty'));
+    if (memberKey === '') issues = withIssue(issues, issue(row, headers[columns.member], 'member_missing', 'the member key is empty'));
     const combination = cellText(cells[columns.combination] ?? null);
     if (combination === '') {
-      issues.push(issue(row, headers[columns.combination], 'combination_missing', 'the load combination is empty'));
+      issues = withIssue(issues, issue(row, headers[columns.combination], 'combination_missing', 'the load combination is empty'));
     }
     const shearCell = cells[columns.shear] ?? null;
     const shear = cellNumber(shearCell, decimalSeparator);
-    if (isBlankCell(shearCell)) issues.push(issue(row, headers[columns.shear], 'shear_missing', 'the shear force is empty'));
-    else if (Number.isNaN(shear)) issues.push(notNumeric(row, headers[columns.shear], shearCell, `a shear force in ${forceUnit}`));
+    if (isBlankCell(shearCell)) issues = withIssue(issues, issue(row, headers[columns.shear], 'shear_missing', 'the shear force is empty'));
+    else if (Number.isNaN(shear)) issues = withIssue(issues, notNumeric(row, headers[columns.shear], shearCell, `a shear force in ${forceUnit}`));
 
     let station_mm: number | undefined;
     if (columns.station !== undefined) {
       const cell = cells[columns.station] ?? null;
       const station = cellNumber(cell, decimalSeparator);
       if (!Number.isNaN(station)) station_mm = station * millimetresPerUnit;
-      else if (!isBlankCell(cell)) issues.push(notNumeric(row, headers[columns.station], cell, 'a station'));
+      else if (!isBlankCell(cell)) issues = withIssue(issues, notNumeric(row, headers[columns.station], cell, 'a station'));
     }
 
     let ends: Point3_mm[] | undefined;
@@ -61,18 +61,25 @@ export function createRowReader(
       const endCells = endColumns.map((column) => cells[column] ?? null);
       const blanks = endCells.filter(isBlankCell).length;
       if (blanks > 0 && blanks < endCells.length) {
-        issues.push(issue(row, undefined, 'coordinates_incomplete', 'give all six end coordinates or none'));
+        issues = withIssue(issues, issue(row, undefined, 'coordinates_incomplete', 'give all six end coordinates or none'));
       } else if (blanks === 0) {
         const values = endCells.map((cell) => cellNumber(cell, decimalSeparator) * millimetresPerUnit);
         const bad = values.findIndex(Number.isNaN);
-        if (bad >= 0) issues.push(notNumeric(row, headers[endColumns[bad]], endCells[bad], 'an end coordinate'));
+        if (bad >= 0) issues = withIssue(issues, notNumeric(row, headers[endColumns[bad]], endCells[bad], 'an end coordinate'));
         else ends = [[values[0], values[1], values[2]], [values[3], values[4], values[5]]];
       }
     }
 
-    if (issues.length > 0) return issues;
+    if (issues) return issues;
     return { row, memberKey, combination, station_mm, shear_N: shear * newtonsPerUnit, end1_mm: ends?.[0], end2_mm: ends?.[1] };
   };
+}
+
+/** Rows are mostly good: the list is made only for a bad one. */
+function withIssue(issues: RowIssue[] | undefined, issue: RowIssue): RowIssue[] {
+  const list = issues ?? [];
+  list.push(issue);
+  return list;
 }
 
 function issue(row: number, column: string | undefined, code: RowIssue['code'], what: string): RowIssue {

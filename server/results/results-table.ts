@@ -123,7 +123,8 @@ async function* prepend(first: RawRecord[], rest: AsyncGenerator<RawRecord[]>): 
 }
 
 export function isBlankRecord(cells: readonly Cell[]): boolean {
-  return cells.every(isBlankCell);
+  for (let i = 0; i < cells.length; i++) if (!isBlankCell(cells[i])) return false;
+  return true;
 }
 
 async function readHead(path: string): Promise<{ head: Buffer; complete: boolean }> {
