@@ -8,8 +8,9 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { errorMessage } from '../../core/api-error';
-import { PROJECT_ROLES, ProjectRole, ROLE_LABELS } from '../../core/permissions';
+import { ProjectRole } from '../../core/permissions';
 import { Project } from '../../projects/project';
+import { RoleField } from '../../projects/role-field/role-field';
 import { InvitationRequest } from '../admin-user';
 import { UsersApi } from '../users-api';
 
@@ -24,6 +25,7 @@ import { UsersApi } from '../users-api';
     MatFormFieldModule,
     MatInputModule,
     MatSelectModule,
+    RoleField,
   ],
   templateUrl: './invite-user-dialog.html',
   styleUrl: './invite-user-dialog.scss',
@@ -33,8 +35,6 @@ export class InviteUserDialog {
   private readonly api = inject(UsersApi);
   private readonly dialogRef = inject<MatDialogRef<InviteUserDialog, string>>(MatDialogRef);
 
-  protected readonly roles = PROJECT_ROLES;
-  protected readonly roleLabels = ROLE_LABELS;
   protected readonly projects = httpResource<{ projects: Project[] }>(() => ({
     url: '/api/projects',
     params: { archived: 'false' },

@@ -15,6 +15,7 @@ import { Session } from '../../core/session';
 import { Member } from '../project';
 import { ProjectContext } from '../project-context';
 import { MemberAddition, membersUrl, ProjectMembersApi } from '../project-members-api';
+import { RoleField } from '../role-field/role-field';
 
 /** Who is in the project and in which role; coordinators add, re-role and remove members. */
 @Component({
@@ -26,6 +27,7 @@ import { MemberAddition, membersUrl, ProjectMembersApi } from '../project-member
     MatIconModule,
     MatInputModule,
     MatSelectModule,
+    RoleField,
   ],
   templateUrl: './project-members.html',
   styleUrl: './project-members.scss',
