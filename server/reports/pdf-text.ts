@@ -5,7 +5,8 @@
  * empty boxes.
  */
 import path from 'node:path';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
+import { woffToSfnt } from './woff-to-sfnt';
 
 export type FontRole = 'body' | 'bold' | 'mono';
 
@@ -29,15 +30,25 @@ function fontDirectory(from: string = __dirname): string {
 
 export type Pdf = PDFKit.PDFDocument;
 
-export function registerReportFonts(doc: Pdf): void {
+/** Unpacked once per process: font name → sfnt bytes. */
+let fontBytes: Map<string, Buffer> | undefined;
+
+function loadFonts(): Map<string, Buffer> {
   const directory = fontDirectory();
+  const fonts = new Map<string, Buffer>();
   for (const [role, files] of Object.entries(FONT_FILES)) {
     for (const [script, file] of Object.entries(files)) {
       const full = path.join(directory, file);
       if (!existsSync(full)) throw new Error(`Report font ${file} is missing from ${directory}.`);
-      doc.registerFont(`${role}-${script}`, full);
+      fonts.set(`${role}-${script}`, woffToSfnt(readFileSync(full)));
     }
   }
+  return fonts;
+}
+
+export function registerReportFonts(doc: Pdf): void {
+  fontBytes ??= loadFonts();
+  for (const [name, bytes] of fontBytes) doc.registerFont(name, bytes);
 }
 
 /** Code points of @fontsource's greek subset (its unicode-range: U+0370–03FF less a few unassigned ones). */
