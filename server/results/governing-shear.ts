@@ -5,6 +5,7 @@
  */
 import type { MemberMatch } from './member-matching';
 import type { ResultRow } from './result-row';
+import { StringIds } from './string-ids';
 
 export interface GoverningShear {
   combination: string;
@@ -28,8 +29,7 @@ interface KeyColumns {
 export class GoverningShearCollector {
   // Columns, not an object per (key, combination): a million governing values stay a few arrays per key.
   private readonly byKey = new Map<string, KeyColumns>();
-  private readonly combinationIds = new Map<string, number>();
-  private readonly combinations: string[] = [];
+  private readonly combinations = new StringIds();
   /** Rows of one member usually come together: its columns are kept at hand. */
   private lastKey: string | undefined;
   private last: KeyColumns | undefined;
@@ -41,7 +41,7 @@ export class GoverningShearCollector {
         this.lastKey = row.memberKey;
         this.last = this.columnsOf(row.memberKey);
       }
-      const id = this.combinationId(row.combination);
+      const id = this.combinations.idOf(row.combination);
       if (isLarger(row.shear_N, this.last.shear_N[id])) {
         this.last.shear_N[id] = row.shear_N;
         this.last.station_mm[id] = row.station_mm ?? Number.NaN;
@@ -58,7 +58,7 @@ export class GoverningShearCollector {
       columns.shear_N.forEach((shear_N, id) => {
         const station_mm = columns.station_mm[id];
         shears.push({
-          combination: this.combinations[id],
+          combination: this.combinations.values[id],
           shear_N,
           station_mm: Number.isNaN(station_mm) ? undefined : station_mm,
           row: columns.row[id],
@@ -77,16 +77,6 @@ export class GoverningShearCollector {
       this.byKey.set(memberKey, columns);
     }
     return columns;
-  }
-
-  private combinationId(combination: string): number {
-    let id = this.combinationIds.get(combination);
-    if (id === undefined) {
-      id = this.combinations.length;
-      this.combinationIds.set(combination, id);
-      this.combinations.push(combination);
-    }
-    return id;
   }
 }
 

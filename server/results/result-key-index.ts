@@ -6,6 +6,7 @@
 import type { Point3_mm } from '../ifc/model-read-result';
 import type { RowIssue } from './results-file-error';
 import type { ResultRow } from './result-row';
+import { StringIds } from './string-ids';
 
 export interface ResultKeySummary {
   memberKey: string;
@@ -23,7 +24,7 @@ type SeenRows = number | Map<number, number>;
 export class ResultKeyIndex {
   private readonly memberIds = new Map<string, number>();
   private readonly keys: ResultKeySummary[] = [];
-  private readonly combinationIds = new Map<string, number>();
+  private readonly combinationIds = new StringIds();
   /** seen[member][combination]: the first row, or with a station column the first row per station (NaN = blank). */
   private readonly seen: SeenRows[][] = [];
   /** Rows of one member usually come together: its id is kept at hand. */
@@ -35,7 +36,7 @@ export class ResultKeyIndex {
   /** Records a valid row; returns the problem when it repeats an earlier row or moves the member's end points. */
   register(row: ResultRow): RowIssue | undefined {
     const memberId = this.memberId(row);
-    const combinationId = this.combinationId(row.combination);
+    const combinationId = this.combinationIds.idOf(row.combination);
     const key = this.keys[memberId];
     const repeated = this.repeatedRow(memberId, combinationId, row);
     if (repeated !== undefined) {
@@ -66,7 +67,7 @@ export class ResultKeyIndex {
   }
 
   combinations(): string[] {
-    return [...this.combinationIds.keys()];
+    return [...this.combinationIds.values];
   }
 
   private memberId(row: ResultRow): number {
@@ -80,15 +81,6 @@ export class ResultKeyIndex {
     }
     this.lastKey = row.memberKey;
     this.lastId = id;
-    return id;
-  }
-
-  private combinationId(combination: string): number {
-    let id = this.combinationIds.get(combination);
-    if (id === undefined) {
-      id = this.combinationIds.size;
-      this.combinationIds.set(combination, id);
-    }
     return id;
   }
 

@@ -5,8 +5,7 @@
  * All or nothing: once a row is bad no further batch reaches the sink, reading goes on to collect up to `maxIssues`
  * problems, and the call throws `rows_invalid` with them, so the caller rolls back whatever it wrote.
  */
-import type { ColumnMapping } from './column-mapping';
-import { resolveColumns } from './column-mapping';
+import { type ColumnMapping, resolveColumns } from './column-mapping';
 import { isBlankRecord, openResultsTable, type ResultsTable, type ResultsTableOptions } from './results-table';
 import { ResultsFileError, type RowIssue } from './results-file-error';
 import { type ResultKeySummary, ResultKeyIndex } from './result-key-index';
