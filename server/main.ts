@@ -13,6 +13,7 @@ import { type Config, ConfigError, loadConfig } from './config';
 import { createDataSource } from './data-source';
 import { type DemoSeedResult, seedDemo } from './demo/seed';
 import type { AppContext } from './http/app-context';
+import { createDomainEvents } from './http/domain-events';
 import { createJobRunner } from './jobs/job-runner';
 import { createMailer } from './mail/mailer';
 import { startFakeSmtpServer } from './outbox/fake-smtp-server';
@@ -69,7 +70,16 @@ export async function startServer(overrides: Partial<Config> = {}): Promise<Runn
     closers.push(() => jobs.close());
     const storage = new LocalFileStorage(path.join(config.dataDir, 'files'));
 
-    const context: AppContext = { config, dataSource, logger, mailer, storage, jobs, sessionStore: sessions.store };
+    const context: AppContext = {
+      config,
+      dataSource,
+      logger,
+      mailer,
+      storage,
+      jobs,
+      sessionStore: sessions.store,
+      events: createDomainEvents(),
+    };
     const demo = config.seedDemo ? await seedDemo({ dataSource, storage, jobs, logger }) : undefined;
     const app = createApp(context);
     const server = await listen(app, config.port, config.host);

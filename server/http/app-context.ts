@@ -6,6 +6,7 @@ import type { Config } from '../config';
 import type { JobRunner } from '../jobs/job-runner';
 import type { Mailer } from '../mail/mailer';
 import type { FileStorage } from '../storage/file-storage';
+import type { DomainEvents } from './domain-events';
 
 /** The long-lived pieces every router and service is built from; main.ts creates them once. */
 export interface AppContext {
@@ -17,6 +18,8 @@ export interface AppContext {
   storage: FileStorage;
   jobs: JobRunner;
   sessionStore: Store;
+  /** Raised by one feature, handled by another (e.g. a finished check run updates findings). */
+  events: DomainEvents;
 }
 
 /** The context of the app serving this request (set by createApp). */
