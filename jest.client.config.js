@@ -8,5 +8,5 @@ module.exports = {
   }),
   roots: ['<rootDir>/src'],
   setupFilesAfterEnv: ['<rootDir>/src/test-setup.ts'],
-  transformIgnorePatterns: ['node_modules/(?!(.*\\.mjs$|three/|@angular/common/locales/.*\\.js$))'],
+  transformIgnorePatterns: ['node_modules/(?!(.*\\.mjs$|three/|three-mesh-bvh/|d3-[a-z-]+/|internmap/|@angular/common/locales/.*\\.js$))'],
 };
