@@ -18,7 +18,12 @@ export const FLOATS_PER_VERTEX = 6;
 
 interface Piece {
   vertices: Float32Array;
-  indices: Uint32Array;
+  indices: Uint16Array | Uint32Array;
+}
+
+/** 16-bit indices while the vertex count allows (the glb is a third smaller then). */
+function indexArray(vertexCount: number, length: number): Uint16Array | Uint32Array {
+  return vertexCount <= 0xffff ? new Uint16Array(length) : new Uint32Array(length);
 }
 
 /** Accumulates the pieces of one element at a time. */
@@ -59,7 +64,8 @@ export class ElementMeshBuilder {
       out[v + 4] = ny / length;
       out[v + 5] = nz / length;
     }
-    const indices = Uint32Array.from(sourceIndices);
+    const indices = indexArray(count, sourceIndices.length);
+    indices.set(sourceIndices);
     // A mirroring transform turns faces inside out; swap two corners of each triangle to turn them back.
     if (determinant3(m as Mat4) < 0) {
       for (let i = 0; i + 2 < indices.length; i += 3) {
@@ -83,14 +89,17 @@ export class ElementMeshBuilder {
       this.pieces = [];
       return undefined;
     }
-    const vertices = this.pieces.length === 1 ? this.pieces[0].vertices : new Float32Array(this.vertexCount * FLOATS_PER_VERTEX);
-    const indices = this.vertexCount <= 0xffff ? new Uint16Array(this.indexCount) : new Uint32Array(this.indexCount);
-    let vertexBase = 0;
-    let indexAt = 0;
-    for (const piece of this.pieces) {
-      if (vertices !== piece.vertices) vertices.set(piece.vertices, vertexBase * FLOATS_PER_VERTEX);
-      for (let i = 0; i < piece.indices.length; i++) indices[indexAt++] = piece.indices[i] + vertexBase;
-      vertexBase += piece.vertices.length / FLOATS_PER_VERTEX;
+    const single = this.pieces.length === 1 ? this.pieces[0] : undefined;
+    const vertices = single ? single.vertices : new Float32Array(this.vertexCount * FLOATS_PER_VERTEX);
+    const indices = single ? single.indices : indexArray(this.vertexCount, this.indexCount);
+    if (!single) {
+      let vertexBase = 0;
+      let indexAt = 0;
+      for (const piece of this.pieces) {
+        vertices.set(piece.vertices, vertexBase * FLOATS_PER_VERTEX);
+        for (let i = 0; i < piece.indices.length; i++) indices[indexAt++] = piece.indices[i] + vertexBase;
+        vertexBase += piece.vertices.length / FLOATS_PER_VERTEX;
+      }
     }
     const min: [number, number, number] = [Infinity, Infinity, Infinity];
     const max: [number, number, number] = [-Infinity, -Infinity, -Infinity];

@@ -156,10 +156,25 @@ export function glbBytes(input: GlbInput): Uint8Array {
   return out;
 }
 
-/** Writes the .glb to a file without holding it in memory a second time. */
+/**
+ * Writes the .glb to a file without holding it in memory a second time. It is written beside the target and renamed
+ * at the end, so a failure leaves no half-written file.
+ */
 export function writeGlbFile(input: GlbInput, path: string): number {
+  const partial = `${path}.partial`;
+  try {
+    const total = writeBuffered(input, partial);
+    fs.renameSync(partial, path);
+    return total;
+  } catch (error) {
+    fs.rmSync(partial, { force: true });
+    throw error;
+  }
+}
+
+/** Gathers the many small pieces (two per element) into 1 MB writes. */
+function writeBuffered(input: GlbInput, path: string): number {
   const fd = fs.openSync(path, 'w');
-  // Gathers the many small pieces (two per element) into 1 MB writes.
   const buffer = Buffer.alloc(1 << 20);
   let used = 0;
   const flush = (): void => {

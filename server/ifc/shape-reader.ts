@@ -57,10 +57,26 @@ const NOT_BODY = new Set(['AXIS', 'BOX', 'FOOTPRINT', 'ANNOTATION', 'REFERENCE',
 const MAX_DEPTH = 12;
 
 export class ShapeReader {
+  /** Representation maps are shared by every occurrence of a type: read each once. */
+  private readonly maps = new Map<number, { origin: Mat4; items: number[] }>();
+  private readonly mappedSolids = new Map<number, StepValue[]>();
+
   constructor(
     private readonly lines: StepLines,
     private readonly radiansPerAngleUnit: number,
   ) {}
+
+  private representationMap(mapId: number | undefined): { origin: Mat4; items: number[] } | undefined {
+    if (mapId === undefined) return undefined;
+    let map = this.maps.get(mapId);
+    if (!map) {
+      const line = this.lines.line(mapId);
+      const representation = this.lines.line(refOf(line?.args[1]));
+      map = { origin: readAxisPlacement(this.lines, refOf(line?.args[0])), items: refsOf(representation?.args[3]) };
+      this.maps.set(mapId, map);
+    }
+    return map;
+  }
 
   read(productShapeId: number | undefined): ElementShape {
     const shape: ElementShape = { hasRepresentation: false, axisItemId: undefined, solids: [], otherBodyTypes: [] };
@@ -79,11 +95,20 @@ export class ShapeReader {
     return shape;
   }
 
+  private mappedSolidArgs(itemId: number): StepValue[] {
+    let args = this.mappedSolids.get(itemId);
+    if (!args) {
+      args = this.lines.line(itemId)?.args ?? [];
+      this.mappedSolids.set(itemId, args);
+    }
+    return args;
+  }
+
   private collect(itemId: number, transform: Mat4 | undefined, clipped: boolean, shape: ElementShape, depth: number): void {
     const type = this.lines.typeOf(itemId);
     if (depth > MAX_DEPTH || type === 0) return;
     if (SWEPT.has(type)) {
-      const args = this.lines.line(itemId)?.args ?? [];
+      const args = transform ? this.mappedSolidArgs(itemId) : (this.lines.line(itemId)?.args ?? []);
       shape.solids.push({ solidType: type, profileId: refOf(args[0]), args, transform, clipped, tapered: TAPERED.has(type) });
       return;
     }
@@ -99,12 +124,12 @@ export class ShapeReader {
     }
     if (type === IFCMAPPEDITEM) {
       const mapped = this.lines.line(itemId);
-      const map = this.lines.line(refOf(mapped?.args[0]));
-      const representation = this.lines.line(refOf(map?.args[1]));
+      const map = this.representationMap(refOf(mapped?.args[0]));
+      if (!map) return;
       // As web-ifc places mapped geometry: the mapping target applied after the map's origin.
-      const local = multiply(readTransformationOperator(this.lines, refOf(mapped?.args[1])), readAxisPlacement(this.lines, refOf(map?.args[0])));
+      const local = multiply(readTransformationOperator(this.lines, refOf(mapped?.args[1])), map.origin);
       const combined = transform ? multiply(transform, local) : local;
-      for (const item of refsOf(representation?.args[3])) this.collect(item, combined, clipped, shape, depth + 1);
+      for (const item of map.items) this.collect(item, combined, clipped, shape, depth + 1);
       return;
     }
     shape.otherBodyTypes.push(this.lines.typeName(type));
