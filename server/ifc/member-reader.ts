@@ -94,7 +94,8 @@ export class MemberReader {
     if (!shape.hasRepresentation) {
       flags.push('no-representation');
       status = 'flagged';
-      reason = 'The member has no shape representation, so it has no axis, length or geometry.' + (reason ? ` ${reason}` : '');
+      const missing = shape.danglingReference === undefined ? 'has no shape representation' : `refers to representation #${shape.danglingReference}, which is not in the file`;
+      reason = `The member ${missing}, so it has no axis, length or geometry.` + (reason ? ` ${reason}` : '');
     }
     const grade = this.material(material, outcome, flags);
     if (grade.error && status === 'ok') {

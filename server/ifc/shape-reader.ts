@@ -34,6 +34,8 @@ export interface SweptSolid {
 
 export interface ElementShape {
   hasRepresentation: boolean;
+  /** The element's Representation refers to a line the file does not have. */
+  danglingReference?: number;
   axisItemId: number | undefined;
   solids: SweptSolid[];
   /** Body items that carry no profile (breps, tessellated sets, swept disks), by IFC type. */
@@ -81,7 +83,7 @@ export class ShapeReader {
   read(productShapeId: number | undefined): ElementShape {
     const shape: ElementShape = { hasRepresentation: false, axisItemId: undefined, solids: [], otherBodyTypes: [] };
     const productShape = this.lines.line(productShapeId);
-    if (!productShape) return shape;
+    if (!productShape) return productShapeId === undefined ? shape : { ...shape, danglingReference: productShapeId };
     const representations = refsOf(productShape.args[2]).map((id) => this.lines.line(id)).filter((r) => r !== undefined);
     shape.hasRepresentation = representations.length > 0;
     const bodies = representations.filter((r) => textOf(r.args[1])?.toUpperCase().startsWith('BODY'));
