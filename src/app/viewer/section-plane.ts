@@ -42,6 +42,12 @@ const _centre = /*@__PURE__*/ new Vector3();
 const _point = /*@__PURE__*/ new Vector3();
 const _w = /*@__PURE__*/ new Vector3();
 const _corner = /*@__PURE__*/ new Vector3();
+const _origin = /*@__PURE__*/ new Vector3();
+const _u = /*@__PURE__*/ new Vector3();
+const _v = /*@__PURE__*/ new Vector3();
+
+/** The sheet is this much larger than the model's outline, so its edge reads as the cut's edge. */
+const SHEET_ROOM = 1.1;
 
 export class SectionPlane {
   /** Empty while the cut is off; holds `plane` while it is on. Shared with the materials, never replaced. */
@@ -173,6 +179,31 @@ export class SectionPlane {
 
   /** The range of n·p over the model's box corners, a little widened so the cut can clear the model. */
   private extentAlongNormal(): [number, number] {
+    const [lowest, highest] = this.extentAlong(this.plane.normal, _origin.set(0, 0, 0));
+    const margin = (highest - lowest) * 0.01;
+    return [lowest - margin, highest + margin];
+  }
+
+  private updateHelper(): void {
+    if (this.bounds.isEmpty()) return;
+    this.plane.projectPoint(this.bounds.getCenter(_centre), _point);
+    this.helper.position.copy(_point);
+    // The sheet and handle are modelled facing +Z; turn +Z onto the plane normal.
+    this.helper.quaternion.setFromUnitVectors(_w.set(0, 0, 1), this.plane.normal);
+    // The sheet covers the model's box as seen along the normal, with a little room around it.
+    _u.set(1, 0, 0).applyQuaternion(this.helper.quaternion);
+    _v.set(0, 1, 0).applyQuaternion(this.helper.quaternion);
+    const [uMin, uMax] = this.extentAlong(_u, _point);
+    const [vMin, vMax] = this.extentAlong(_v, _point);
+    for (const part of [this.sheet, this.outline]) {
+      part.position.set((uMin + uMax) / 2, (vMin + vMax) / 2, 0);
+      part.scale.set((uMax - uMin) * SHEET_ROOM, (vMax - vMin) * SHEET_ROOM, 1);
+    }
+    this.handle.scale.setScalar(this.bounds.getSize(_w).length() * 0.02);
+  }
+
+  /** Range of (corner − origin) · axis over the model's box corners. */
+  private extentAlong(axis: Vector3, origin: Vector3): [number, number] {
     let lowest = Infinity;
     let highest = -Infinity;
     for (let corner = 0; corner < 8; corner++) {
@@ -181,23 +212,10 @@ export class SectionPlane {
         corner & 2 ? this.bounds.max.y : this.bounds.min.y,
         corner & 4 ? this.bounds.max.z : this.bounds.min.z,
       );
-      const along = this.plane.normal.dot(_corner);
+      const along = _corner.sub(origin).dot(axis);
       lowest = Math.min(lowest, along);
       highest = Math.max(highest, along);
     }
-    const margin = (highest - lowest) * 0.01;
-    return [lowest - margin, highest + margin];
-  }
-
-  private updateHelper(): void {
-    if (this.bounds.isEmpty()) return;
-    const size = this.bounds.getSize(_w).length();
-    this.plane.projectPoint(this.bounds.getCenter(_centre), _point);
-    this.helper.position.copy(_point);
-    // The sheet and handle are modelled facing +Z; turn +Z onto the plane normal.
-    this.helper.quaternion.setFromUnitVectors(_w.set(0, 0, 1), this.plane.normal);
-    this.sheet.scale.setScalar(size);
-    this.outline.scale.setScalar(size);
-    this.handle.scale.setScalar(size * 0.025);
+    return [lowest, highest];
   }
 }

@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, computed, input, model, output, signal } from '@angular/core';
-import { MatAutocompleteModule } from '@angular/material/autocomplete';
+import { ChangeDetectionStrategy, Component, computed, input, model, output, signal, viewChild } from '@angular/core';
+import { MatAutocompleteModule, MatAutocompleteTrigger } from '@angular/material/autocomplete';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDividerModule } from '@angular/material/divider';
@@ -77,6 +77,7 @@ export class ViewerToolbar {
   protected readonly query = signal('');
   protected readonly matches = computed(() => searchMembers(this.members(), this.query(), SEARCH_SUGGESTIONS));
   protected readonly noMatch = computed(() => this.query().trim() !== '' && this.matches().length === 0);
+  private readonly suggestions = viewChild.required(MatAutocompleteTrigger);
 
   protected emit(command: ViewerCommand): void {
     this.command.emit(command);
@@ -100,7 +101,9 @@ export class ViewerToolbar {
 
   protected findFirstMatch(): void {
     const first = this.matches()[0];
-    if (first) this.findMember(first.globalId);
+    if (first === undefined) return;
+    this.suggestions().closePanel();
+    this.findMember(first.globalId);
   }
 
   protected findMember(globalId: string): void {
