@@ -84,7 +84,13 @@ const PAGE_HTML = `<!doctype html><html><head><meta charset="utf-8"><title>viewe
 <style>html,body{margin:0}canvas{display:block;width:${VIEWPORT.width}px;height:${VIEWPORT.height}px}</style>
 </head><body><canvas id="view"></canvas><script src="/bench.js"></script></body></html>`;
 
-function serve(files: Map<string, { path?: string; body?: string; type: string }>): Promise<{ url: string; close(): void }> {
+interface ServedFile {
+  path?: string;
+  body?: string;
+  type: string;
+}
+
+function serve(files: ReadonlyMap<string, ServedFile>): Promise<{ url: string; close(): void }> {
   const server = createServer((request, response) => {
     const file = files.get(request.url ?? '');
     if (!file) {
@@ -131,7 +137,7 @@ function medianResult(results: RunResult[]): RunResult {
 async function main(): Promise<void> {
   const modelFolder = join(tmpdir(), 'taulens-viewer-bench');
   mkdirSync(modelFolder, { recursive: true });
-  const files = new Map<string, { path?: string; body?: string; type: string }>([
+  const files = new Map<string, ServedFile>([
     ['/', { body: PAGE_HTML, type: 'text/html' }],
     ['/bench.js', { body: await bundlePage(), type: 'text/javascript' }],
   ]);

@@ -26,7 +26,8 @@ export class ElementIndex {
     globalIds.forEach((globalId, element) => {
       if (elementByGlobalId.has(globalId)) throw new Error(`ElementIndex: GlobalId ${globalId} names two elements.`);
       if (!(instanceCounts[element] >= 1)) {
-        throw new Error(`ElementIndex: element ${globalId} needs at least one instance, got ${instanceCounts[element]}.`);
+        const count = instanceCounts[element];
+        throw new Error(`ElementIndex: element ${globalId} needs at least one instance, got ${count}.`);
       }
       elementByGlobalId.set(globalId, element);
       firstInstances[element + 1] = firstInstances[element] + instanceCounts[element];

@@ -46,7 +46,9 @@ export function length(v: Vec3): number {
 
 export function normalise(v: Vec3): Vec3 {
   const l = length(v);
-  if (!(l > 0) || !Number.isFinite(l)) throw new Error(`A direction needs a finite, non-zero length, got [${v.join(', ')}].`);
+  if (!(l > 0) || !Number.isFinite(l)) {
+    throw new Error(`A direction needs a finite, non-zero length, got [${v.join(', ')}].`);
+  }
   return [v[0] / l, v[1] / l, v[2] / l];
 }
 

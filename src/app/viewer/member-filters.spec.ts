@@ -18,7 +18,12 @@ const members: ViewerMember[] = [
   member('0aaaaaaaaaaaaaaaaaaaaa', { tag: 'B-101', utilisationRatio: 0.62 }),
   member('0bbbbbbbbbbbbbbbbbbbbb', { tag: 'B-102', utilisationRatio: 1.12, status: 'fail' }),
   member('0ccccccccccccccccccccc', { tag: 'C-12', storey: 'Level 10', utilisationRatio: 1, status: 'warning' }),
-  member('0ddddddddddddddddddddd', { tag: 'GB-1020', storey: 'Level 2', utilisationRatio: null, status: 'not-checked' }),
+  member('0ddddddddddddddddddddd', {
+    tag: 'GB-1020',
+    storey: 'Level 2',
+    utilisationRatio: null,
+    status: 'not-checked',
+  }),
 ];
 
 describe('member filters', () => {
@@ -32,7 +37,8 @@ describe('member filters', () => {
   });
 
   it('combines the storey filter with "only failing"', () => {
-    expect(filteredGlobalIds(members, { onlyFailing: false, storey: 'Level 2' })).toEqual(new Set(['0ddddddddddddddddddddd']));
+    const level2 = new Set(['0ddddddddddddddddddddd']);
+    expect(filteredGlobalIds(members, { onlyFailing: false, storey: 'Level 2' })).toEqual(level2);
     expect(filteredGlobalIds(members, { onlyFailing: true, storey: 'Level 2' })).toEqual(new Set());
   });
 

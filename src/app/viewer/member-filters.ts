@@ -10,7 +10,10 @@ export interface MemberFilters {
 export const NO_MEMBER_FILTERS: MemberFilters = { onlyFailing: false, storey: null };
 
 /** GlobalIds of the members the filters let through, or null when no filter is on (everything shows). */
-export function filteredGlobalIds(members: readonly ViewerMember[], filters: MemberFilters): ReadonlySet<string> | null {
+export function filteredGlobalIds(
+  members: readonly ViewerMember[],
+  filters: MemberFilters,
+): ReadonlySet<string> | null {
   if (!filters.onlyFailing && filters.storey === null) return null;
   const kept = new Set<string>();
   for (const member of members) {

@@ -39,8 +39,9 @@ interface ElementMeshes {
 function owningElement(mesh: Object3D): { globalId: string; context: boolean } | null {
   for (let node: Object3D | null = mesh; node !== null; node = node.parent) {
     const data = node.userData as { globalId?: unknown; name?: unknown; context?: unknown };
-    const globalId = typeof data.globalId === 'string' ? data.globalId : typeof data.name === 'string' ? data.name : null;
-    if (globalId !== null && globalId !== '') return { globalId, context: data.context === true };
+    // The contract puts the GlobalId in the node's extras; the node name carries it too.
+    const globalId = [data.globalId, data.name].find((v): v is string => typeof v === 'string' && v !== '');
+    if (globalId !== undefined) return { globalId, context: data.context === true };
   }
   return null;
 }
@@ -101,7 +102,11 @@ function batchableGeometry(source: BufferGeometry): BufferGeometry {
   return geometry;
 }
 
-function buildBatch(elements: readonly ElementMeshes[], material: Material, resources: GpuResources): ModelBatch | null {
+function buildBatch(
+  elements: readonly ElementMeshes[],
+  material: Material,
+  resources: GpuResources,
+): ModelBatch | null {
   if (elements.length === 0) return null;
   const batchable = new Map<BufferGeometry, BufferGeometry>();
   let vertexCount = 0;
@@ -118,7 +123,9 @@ function buildBatch(elements: readonly ElementMeshes[], material: Material, reso
     }
   }
   if (instanceCount > MAX_PICKABLE_INSTANCES) {
-    throw new Error(`The model has ${instanceCount} element meshes; the 3D view draws at most ${MAX_PICKABLE_INSTANCES}.`);
+    throw new Error(
+      `The model has ${instanceCount} element meshes; the 3D view draws at most ${MAX_PICKABLE_INSTANCES}.`,
+    );
   }
   const mesh = resources.track(new BatchedMesh(instanceCount, vertexCount, indexCount, material));
   const geometryIds = new Map<BufferGeometry, number>();

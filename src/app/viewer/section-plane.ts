@@ -65,7 +65,13 @@ export class SectionPlane {
 
   constructor(resources: GpuResources) {
     const sheetMaterial = resources.track(
-      new MeshBasicMaterial({ color: SECTION_COLOUR, transparent: true, opacity: 0.08, side: DoubleSide, depthWrite: false }),
+      new MeshBasicMaterial({
+        color: SECTION_COLOUR,
+        transparent: true,
+        opacity: 0.08,
+        side: DoubleSide,
+        depthWrite: false,
+      }),
     );
     const lineMaterial = resources.track(new LineBasicMaterial({ color: SECTION_COLOUR }));
     const handleMaterial = resources.track(new MeshBasicMaterial({ color: SECTION_COLOUR }));

@@ -92,14 +92,16 @@ function deltaE(a: RgbHex, b: RgbHex, vision: Matrix3): number {
   return Math.hypot(l1 - l2, a1 - a2, b1 - b2);
 }
 
-/** Every pair (one from each list) that some vision type sees closer than `minimum`, described for the failure message. */
+/** Pairs (one from each list) that some vision type sees closer than `minimum`, described for the failure message. */
 function closePairs(colours: readonly RgbHex[], others: readonly RgbHex[], minimum: number): string[] {
   const close: string[] = [];
   for (const [name, vision] of Object.entries(VISION)) {
     for (const a of colours) {
       for (const b of others) {
         const difference = deltaE(a, b, vision);
-        if (a !== b && difference < minimum) close.push(`${name}: ${rgbHexToCss(a)} vs ${rgbHexToCss(b)}, ΔE ${difference.toFixed(1)}`);
+        if (a !== b && difference < minimum) {
+          close.push(`${name}: ${rgbHexToCss(a)} vs ${rgbHexToCss(b)}, ΔE ${difference.toFixed(1)}`);
+        }
       }
     }
   }

@@ -22,8 +22,6 @@ import type { ViewerMember } from './viewer-member';
 import {
   type ColourResult,
   type GlbSource,
-  type LoadProgress,
-  ModelLoadError,
   type ModelSummary,
   type Shading,
   ViewerEngine,
@@ -31,6 +29,7 @@ import {
   WebGlUnavailableError,
 } from './viewer-engine';
 import { installViewerTestHook } from './viewer-test-hook';
+import { type LoadProgress, ModelLoadError } from './glb-download';
 
 type CanvasState = 'starting' | 'loading' | 'ready' | 'unavailable' | 'failed';
 

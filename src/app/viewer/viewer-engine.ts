@@ -26,8 +26,9 @@ import { type GLTF, GLTFLoader } from 'three/addons/loaders/GLTFLoader.js';
 import { CameraRig, type Projection } from './camera-rig';
 import { selectionAfterClick } from './click-selection';
 import { STANDARD_VIEWS, type StandardView } from './camera-framing';
-import type { ElementIndex } from './element-index';
+import { ElementVisibility } from './element-visibility';
 import { GpuPicker } from './gpu-picker';
+import { type LoadProgress, ModelLoadError, downloadGlb } from './glb-download';
 import { GpuResources } from './gpu-resources';
 import { type Vec3, ZERO_OFFSET, ifcToThreeDirection, readModelOffset } from './ifc-axes';
 import { type ModelBatch, type ModelBatches, buildModelBatches, disposeLoadedScene } from './model-batches';
@@ -37,7 +38,6 @@ import { CONTEXT_COLOUR, CONTEXT_OPACITY, NOT_CHECKED_COLOUR, type RgbHex } from
 import {
   type ViewerViewpoint,
   ifcCameraToPose,
-  isVisibleIn,
   poseToIfcCamera,
   sectionPlaneFromIfc,
   sectionPlaneToIfc,
@@ -49,18 +49,7 @@ export class WebGlUnavailableError extends Error {
   override readonly name = 'WebGlUnavailableError';
 }
 
-/** The model file could not be fetched or read; the message says which, in words for the user. */
-export class ModelLoadError extends Error {
-  override readonly name = 'ModelLoadError';
-}
-
 export type GlbSource = ArrayBuffer | string;
-
-export interface LoadProgress {
-  phase: 'download' | 'build';
-  /** 0–1, or null when the size is not known. */
-  fraction: number | null;
-}
 
 export interface ModelSummary {
   members: number;
@@ -179,10 +168,7 @@ export class ViewerEngine {
   private readonly boundingSphere = new Sphere();
   private loadToken = 0;
 
-  private memberFilter: ReadonlySet<string> | null = null;
-  private readonly hidden = new Set<string>();
-  private isolated: ReadonlySet<string> | null = null;
-  private contextShown = true;
+  private readonly visibility = new ElementVisibility();
   private selected: string[] = [];
   private hoveredId: string | null = null;
 
@@ -274,7 +260,7 @@ export class ViewerEngine {
    */
   async loadGlb(source: GlbSource, onProgress?: (progress: LoadProgress) => void): Promise<ModelSummary | null> {
     const token = ++this.loadToken;
-    const bytes = typeof source === 'string' ? await this.download(source, onProgress) : source;
+    const bytes = typeof source === 'string' ? await downloadGlb(source, onProgress) : source;
     onProgress?.({ phase: 'build', fraction: null });
     let gltf: GLTF;
     try {
@@ -369,34 +355,33 @@ export class ViewerEngine {
 
   /** Shows only these members (a filter such as "only failing"); null shows all. Context elements stay. */
   setVisible(globalIds: Iterable<string> | null): void {
-    this.memberFilter = globalIds === null ? null : new Set(globalIds);
+    this.visibility.filterMembers(globalIds);
     this.applyVisibility();
   }
 
   /** Shows only these elements, members or context, until `showAll()`. */
   isolate(globalIds: Iterable<string>): void {
-    this.isolated = new Set(globalIds);
+    this.visibility.isolate(globalIds);
     this.applyVisibility();
   }
 
   hide(globalIds: Iterable<string>): void {
-    for (const globalId of globalIds) this.hidden.add(globalId);
+    this.visibility.hide(globalIds);
     this.applyVisibility();
   }
 
   /** Undoes hide and isolate; the member filter stays, as its own control shows. */
   showAll(): void {
-    this.hidden.clear();
-    this.isolated = null;
+    this.visibility.showAll();
     this.applyVisibility();
   }
 
   contextVisible(): boolean {
-    return this.contextShown;
+    return this.visibility.contextVisible;
   }
 
   setContextVisible(visible: boolean): void {
-    this.contextShown = visible;
+    this.visibility.contextVisible = visible;
     this.applyVisibility();
   }
 
@@ -501,15 +486,7 @@ export class ViewerEngine {
     const ahead = _point.copy(this.boundingSphere.center).sub(new Vector3(...pose.position)).dot(direction);
     rig.setPose(pose, Math.max(ahead, this.boundingSphere.radius * 0.05));
 
-    this.memberFilter = null;
-    this.hidden.clear();
-    const exceptions = viewpoint.visibility.exceptionGlobalIds;
-    if (viewpoint.visibility.defaultVisible) {
-      this.isolated = null;
-      for (const globalId of exceptions) this.hidden.add(globalId);
-    } else {
-      this.isolated = new Set(exceptions);
-    }
+    this.visibility.restore(viewpoint.visibility.defaultVisible, viewpoint.visibility.exceptionGlobalIds);
     // BCF allows several planes; the view keeps one, the first.
     if (planes.length === 0) this.section.disable();
     else this.section.setPlane(new Vector3(...planes[0].normal), planes[0].constant);
@@ -634,9 +611,7 @@ export class ViewerEngine {
     for (const batch of this.batches()) this.scene.remove(batch.mesh);
     this.model = null;
     this.modelResources.disposeAll();
-    this.memberFilter = null;
-    this.hidden.clear();
-    this.isolated = null;
+    this.visibility.reset();
     this.selected = [];
     this.hoveredId = null;
     this.selectedOutline.clear();
@@ -657,9 +632,7 @@ export class ViewerEngine {
   }
 
   private isShown(globalId: string, context: boolean): boolean {
-    if (this.hidden.has(globalId)) return false;
-    if (this.isolated !== null) return this.isolated.has(globalId);
-    return context ? this.contextShown : this.memberFilter === null || this.memberFilter.has(globalId);
+    return this.visibility.isShown(globalId, context);
   }
 
   private applyVisibility(): void {
@@ -719,31 +692,6 @@ export class ViewerEngine {
   private standardViewVectors(view: StandardView): [Vector3, Vector3] {
     const { direction, up } = STANDARD_VIEWS[view];
     return [new Vector3(...ifcToThreeDirection(direction)), new Vector3(...ifcToThreeDirection(up))];
-  }
-
-  private async download(url: string, onProgress?: (progress: LoadProgress) => void): Promise<ArrayBuffer> {
-    let response: Response;
-    try {
-      response = await fetch(url, { credentials: 'same-origin' });
-    } catch {
-      throw new ModelLoadError('The model file could not be fetched: the server did not answer.');
-    }
-    if (!response.ok) throw new ModelLoadError(`The model file could not be fetched (HTTP ${response.status}).`);
-    const total = Number(response.headers.get('content-length')) || 0;
-    if (response.body === null || total === 0) {
-      onProgress?.({ phase: 'download', fraction: null });
-      return response.arrayBuffer();
-    }
-    const bytes = new Uint8Array(total);
-    const reader = response.body.getReader();
-    let received = 0;
-    for (let chunk = await reader.read(); !chunk.done; chunk = await reader.read()) {
-      if (received + chunk.value.length > total) throw new ModelLoadError('The model file was longer than the server said.');
-      bytes.set(chunk.value, received);
-      received += chunk.value.length;
-      onProgress?.({ phase: 'download', fraction: received / total });
-    }
-    return bytes.buffer;
   }
 
   // pointer and keyboard

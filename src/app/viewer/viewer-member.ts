@@ -20,5 +20,6 @@ export const FAILING_UTILISATION_RATIO = 1;
 
 /** True when the member's governing utilisation exceeds 100 % or its check failed. */
 export function isFailing(member: ViewerMember): boolean {
-  return member.status === 'fail' || (member.utilisationRatio !== null && member.utilisationRatio > FAILING_UTILISATION_RATIO);
+  if (member.status === 'fail') return true;
+  return member.utilisationRatio !== null && member.utilisationRatio > FAILING_UTILISATION_RATIO;
 }

@@ -10,7 +10,8 @@ const REFRESH_MS = 1000;
     @if (stats(); as figures) {
       <span>{{ figures.drawCalls }} draw calls</span>
       <span>{{ figures.triangles.toLocaleString('en') }} triangles</span>
-      <span>{{ figures.geometries }} geometries · {{ figures.textures }} textures · {{ figures.programs }} programs</span>
+      <span>{{ figures.geometries }} geometries · {{ figures.textures }} textures</span>
+      <span>{{ figures.programs }} shader programs</span>
     }
   `,
   styles: `

@@ -4,9 +4,17 @@ import type { ViewerMember } from './viewer-member';
 import { type ViewerCommand, ViewerToolbar } from './viewer-toolbar';
 
 // Invented members.
-const members: ViewerMember[] = [
-  { globalId: '2O2Fr$t4X7Zf8NOew3FLOH', tag: 'B-101', section: 'IPE 300', storey: 'Level 1', utilisationRatio: 0.4, status: 'pass' },
-  { globalId: '1kTvXnbbzCWw8lcMd1dR4o', tag: 'B-102', section: 'IPE 300', storey: 'Level 2', utilisationRatio: 1.2, status: 'fail' },
+const member = (globalId: string, tag: string, storey: string, utilisationRatio: number): ViewerMember => ({
+  globalId,
+  tag,
+  section: 'IPE 300',
+  storey,
+  utilisationRatio,
+  status: utilisationRatio > 1 ? 'fail' : 'pass',
+});
+const members = [
+  member('2O2Fr$t4X7Zf8NOew3FLOH', 'B-101', 'Level 1', 0.4),
+  member('1kTvXnbbzCWw8lcMd1dR4o', 'B-102', 'Level 2', 1.2),
 ];
 
 function setUp(hasSelection = false) {

@@ -1,9 +1,9 @@
 import { type Vec3, ifcToThreeDirection, readModelOffset, threeToIfcDirection } from './ifc-axes';
+import { ElementVisibility } from './element-visibility';
 import {
   type CameraPose,
   ViewpointError,
   ifcCameraToPose,
-  isVisibleIn,
   poseToIfcCamera,
   sectionPlaneFromIfc,
   sectionPlaneToIfc,
@@ -75,7 +75,14 @@ describe('cameras', () => {
 
   it('normalises directions that arrive with another length', () => {
     const pose = ifcCameraToPose(
-      { kind: 'orthogonal', viewPoint_m: OFFSET, direction: [0, 0, -3], up: [0, 2, 0], viewToWorldScale_m: 30, aspectRatio: 1 },
+      {
+        kind: 'orthogonal',
+        viewPoint_m: OFFSET,
+        direction: [0, 0, -3],
+        up: [0, 2, 0],
+        viewToWorldScale_m: 30,
+        aspectRatio: 1,
+      },
       OFFSET,
     );
     expectVec3(pose.direction, [0, -1, 0]);
@@ -88,7 +95,8 @@ describe('cameras', () => {
     expect(() => ifcCameraToPose({ ...base, direction: [0, 0, 0] }, OFFSET)).toThrow('direction has zero length');
     expect(() => ifcCameraToPose({ ...base, viewPoint_m: [Number.NaN, 0, 0] }, OFFSET)).toThrow('finite');
     // visinfo.xsd (BCF 3.0): FieldOfView is an exclusive range (0, 180).
-    expect(() => ifcCameraToPose({ ...base, kind: 'perspective', fieldOfView_deg: 180 }, OFFSET)).toThrow('0° and 180°');
+    const straightAngle = { ...base, kind: 'perspective' as const, fieldOfView_deg: 180 };
+    expect(() => ifcCameraToPose(straightAngle, OFFSET)).toThrow('0° and 180°');
     expect(() => ifcCameraToPose({ ...base, aspectRatio: 0 }, OFFSET)).toThrow('aspect ratio');
   });
 });
@@ -105,7 +113,8 @@ describe('section planes', () => {
 
   it('round-trips a plane and keeps the same side', () => {
     const plane = sectionPlaneFromIfc({ location_m: [OFFSET[0], OFFSET[1], 3.5], direction: [0, 0, 1] }, OFFSET);
-    const keeps = (p: Vec3) => plane.normal[0] * p[0] + plane.normal[1] * p[1] + plane.normal[2] * p[2] + plane.constant >= 0;
+    const [nx, ny, nz] = plane.normal;
+    const keeps = (p: Vec3) => nx * p[0] + ny * p[1] + nz * p[2] + plane.constant >= 0;
     expect(keeps([0, 3.5 - OFFSET[2] - 1, 0])).toBe(true);
     expect(keeps([0, 3.5 - OFFSET[2] + 1, 0])).toBe(false);
   });
@@ -119,11 +128,12 @@ describe('visibility', () => {
     expect(visibilityOf(ids, (id) => id === 'a')).toEqual({ defaultVisible: false, exceptionGlobalIds: ['a'] });
   });
 
-  it('reads both forms back', () => {
+  it('restores the same elements from both forms', () => {
     for (const visible of [(id: string) => id !== 'c', (id: string) => id === 'a' || id === 'b']) {
-      const visibility = visibilityOf(ids, visible);
-      const exceptions = new Set(visibility.exceptionGlobalIds);
-      expect(ids.filter((id) => isVisibleIn(visibility.defaultVisible, exceptions, id))).toEqual(ids.filter(visible));
+      const { defaultVisible, exceptionGlobalIds } = visibilityOf(ids, visible);
+      const restored = new ElementVisibility();
+      restored.restore(defaultVisible, exceptionGlobalIds);
+      expect(ids.filter((id) => restored.isShown(id, false))).toEqual(ids.filter(visible));
     }
   });
 });

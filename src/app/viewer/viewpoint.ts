@@ -85,7 +85,8 @@ function checkedLens(lens: CameraLens): CameraLens {
     return { kind: 'perspective', fieldOfView_deg: lens.fieldOfView_deg };
   }
   if (!(lens.viewToWorldScale_m > 0 && Number.isFinite(lens.viewToWorldScale_m))) {
-    throw new ViewpointError(`The visible height of an orthogonal view must be positive, got ${lens.viewToWorldScale_m}.`);
+    const height = lens.viewToWorldScale_m;
+    throw new ViewpointError(`The visible height of an orthogonal view must be positive, got ${height}.`);
   }
   return { kind: 'orthogonal', viewToWorldScale_m: lens.viewToWorldScale_m };
 }
@@ -148,9 +149,4 @@ export function visibilityOf(globalIds: readonly string[], isVisible: (globalId:
   return hidden.length <= visible.length
     ? { defaultVisible: true, exceptionGlobalIds: hidden }
     : { defaultVisible: false, exceptionGlobalIds: visible };
-}
-
-/** Whether a viewpoint shows an element; `exceptions` holds the viewpoint's exception GlobalIds. */
-export function isVisibleIn(defaultVisible: boolean, exceptions: ReadonlySet<string>, globalId: string): boolean {
-  return exceptions.has(globalId) !== defaultVisible;
 }

@@ -32,7 +32,8 @@ function median(values: number[]): number {
 
 /** Colour maps prepared before timing, a different one per repetition so no recolour is a no-op. */
 function colourMaps(globalIds: readonly string[], count: number): Map<string, number>[] {
-  return Array.from({ length: count }, (_, rep) => new Map(globalIds.map((id, i) => [id, ((i * 2654435761 + rep * 40503) >>> 8) & 0xffffff])));
+  const colour = (i: number, rep: number) => ((i * 2654435761 + rep * 40503) >>> 8) & 0xffffff;
+  return Array.from({ length: count }, (_, rep) => new Map(globalIds.map((id, i) => [id, colour(i, rep)])));
 }
 
 async function fetchOk(url: string): Promise<Response> {

@@ -2,7 +2,19 @@
  * The benchmark's baseline: the same .glb shown the plain way, one three.js mesh (and one material, for its own
  * colour) per element, each drawn with its own draw call. Same renderer settings and lights as the engine.
  */
-import { AmbientLight, Box3, Color, DirectionalLight, Mesh, MeshLambertMaterial, PerspectiveCamera, Scene, Sphere, Vector3, WebGLRenderer } from 'three';
+import {
+  AmbientLight,
+  Box3,
+  Color,
+  DirectionalLight,
+  Mesh,
+  MeshLambertMaterial,
+  PerspectiveCamera,
+  Scene,
+  Sphere,
+  Vector3,
+  WebGLRenderer,
+} from 'three';
 import { GLTFLoader } from 'three/addons/loaders/GLTFLoader.js';
 import { rendersInSoftware } from '../../../src/app/viewer/viewer-engine';
 

@@ -58,7 +58,16 @@ function profile({ depth, width, web, flange }: Section): [number, number][] {
 const CAP_TRIANGLES = [0, 1, 2, 0, 2, 3, 0, 3, 10, 0, 10, 11, 10, 3, 4, 10, 4, 9, 9, 4, 5, 9, 5, 6, 9, 6, 7, 9, 7, 8];
 
 /** An I-section extruded along local +Z from 0 to `length_m`, flat-shaded: 72 vertices, 44 triangles. */
-export function iBeamGeometry(section: Section, length_m: number): { positions: Float32Array; normals: Float32Array; indices: Uint16Array } {
+interface MeshArrays {
+  positions: Float32Array;
+  normals: Float32Array;
+  indices: Uint16Array;
+}
+
+type Quaternion = [number, number, number, number];
+type Triple = [number, number, number];
+
+export function iBeamGeometry(section: Section, length_m: number): MeshArrays {
   const corners = profile(section);
   const positions: number[] = [];
   const normals: number[] = [];
@@ -87,20 +96,24 @@ export function iBeamGeometry(section: Section, length_m: number): { positions: 
       indices.push(base + a, ...(nz > 0 ? [base + b, base + c] : [base + c, base + b]));
     }
   }
-  return { positions: new Float32Array(positions), normals: new Float32Array(normals), indices: new Uint16Array(indices) };
+  return {
+    positions: new Float32Array(positions),
+    normals: new Float32Array(normals),
+    indices: new Uint16Array(indices),
+  };
 }
 
 /** Rotations taking local +Z (the member axis) to glTF +X, glTF −Z (IFC +Y) and glTF +Y (up). */
-const ALONG_X: [number, number, number, number] = [0, Math.SQRT1_2, 0, Math.SQRT1_2];
-const ALONG_MINUS_Z: [number, number, number, number] = [0, 1, 0, 0];
-const UPRIGHT: [number, number, number, number] = [-Math.SQRT1_2, 0, 0, Math.SQRT1_2];
+const ALONG_X: Quaternion = [0, Math.SQRT1_2, 0, Math.SQRT1_2];
+const ALONG_MINUS_Z: Quaternion = [0, 1, 0, 0];
+const UPRIGHT: Quaternion = [-Math.SQRT1_2, 0, 0, Math.SQRT1_2];
 
 interface MemberPlacement {
   ifcClass: 'IfcBeam' | 'IfcColumn';
   section: Section;
   length_m: number;
-  translation: [number, number, number];
-  rotation: [number, number, number, number];
+  translation: Triple;
+  rotation: Quaternion;
 }
 
 /** Beams both ways and columns on a square grid, storey by storey, until `count` members. */
@@ -112,16 +125,20 @@ function* framePlacements(count: number): Generator<MemberPlacement> {
     for (let i = 0; i <= bays && made < count; i++) {
       for (let j = 0; j <= bays && made < count; j++) {
         const [x, z] = [i * BAY_M, -j * BAY_M];
+        const beam = (section: Section, rotation: Quaternion): MemberPlacement => {
+          made++;
+          return { ifcClass: 'IfcBeam', section, length_m: BAY_M, translation: [x, level, z], rotation };
+        };
         made++;
-        yield { ifcClass: 'IfcColumn', section: SECTIONS_M[2], length_m: STOREY_M, translation: [x, level - STOREY_M, z], rotation: UPRIGHT };
-        if (i < bays && made < count) {
-          made++;
-          yield { ifcClass: 'IfcBeam', section: SECTIONS_M[1], length_m: BAY_M, translation: [x, level, z], rotation: ALONG_X };
-        }
-        if (j < bays && made < count) {
-          made++;
-          yield { ifcClass: 'IfcBeam', section: SECTIONS_M[0], length_m: BAY_M, translation: [x, level, z], rotation: ALONG_MINUS_Z };
-        }
+        yield {
+          ifcClass: 'IfcColumn',
+          section: SECTIONS_M[2],
+          length_m: STOREY_M,
+          translation: [x, level - STOREY_M, z],
+          rotation: UPRIGHT,
+        };
+        if (i < bays && made < count) yield beam(SECTIONS_M[1], ALONG_X);
+        if (j < bays && made < count) yield beam(SECTIONS_M[0], ALONG_MINUS_Z);
       }
     }
   }
@@ -145,8 +162,8 @@ export async function syntheticFrameGlb(memberCount: number): Promise<SyntheticM
     globalId: string,
     ifcClass: string,
     context: boolean,
-    geometry: ReturnType<typeof iBeamGeometry>,
-    place: { translation: [number, number, number]; rotation?: [number, number, number, number]; scale?: [number, number, number] },
+    geometry: MeshArrays,
+    place: { translation: Triple; rotation?: Quaternion; scale?: Triple },
   ) => {
     const accessor = (array: Float32Array | Uint16Array, type: 'VEC3' | 'SCALAR') =>
       document.createAccessor().setArray(array).setType(type).setBuffer(buffer);
