@@ -49,13 +49,8 @@ export const projectRoutes: Routes = [
     { label: 'Upload IFC revision', icon: 'upload', permission: 'model.upload' },
     { label: 'Compare revisions', icon: 'compare_arrows', permission: 'model.read' },
   ]),
-  placeholderRoute('shear-results', 'Shear forces imported from the analysis and matched to members.', [
-    { label: 'Import shear results', icon: 'upload_file', permission: 'results.upload' },
-    { label: 'Fix member matching', icon: 'link', permission: 'matching.edit' },
-  ]),
-  placeholderRoute('checks', 'Web shear checks by the elastic method and the chosen design code.', [
-    { label: 'Start a check', icon: 'play_arrow', permission: 'check.run' },
-  ]),
+  sectionRoute('shear-results', { loadChildren: () => import('../results/results-routes').then((m) => m.resultsRoutes) }),
+  sectionRoute('checks', { loadChildren: () => import('../checks/checks-routes').then((m) => m.checksRoutes) }),
   placeholderRoute('3d-view', 'The model coloured by utilisation, with a legend.', []),
   placeholderRoute('findings', 'Overstressed webs tracked from open to verified or accepted.', [
     { label: 'Create finding', icon: 'add_comment', permission: 'finding.create' },

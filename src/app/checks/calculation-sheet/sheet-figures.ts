@@ -1,0 +1,307 @@
+/**
+ * The two figures of a calculation sheet as plain data for SVG: the section to scale with its dimensions, and τ(y)
+ * over the depth beside it on the same vertical scale, so each stress sits level with the part of the section that
+ * carries it.
+ *
+ * Both figures draw in section millimetres with y pointing down the page (SVG) and the underside of the section at
+ * svgY = depth. Their width and height attributes are paper millimetres at a drawing-office scale 1:n, so a print is to
+ * scale; text and arrow sizes are paper sizes multiplied by n, so they print the same at every scale.
+ */
+import type { SectionProperties } from '../../../../server/engine/section-properties';
+import { formatNumber } from '../../../../server/engine/trace';
+import { drawingScale, niceTicks, PT_PER_MM, sectionOutline_mm } from '../../../../server/reports/section-outline';
+import type { StressSample } from '../checks-api';
+
+/** Paper room for the section on an A4 sheet beside the plot (mm). */
+export const SECTION_BOX_MM = { width: 70, height: 120 } as const;
+/** Paper width of the τ axis (mm). */
+export const PLOT_WIDTH_MM = 60;
+/** Paper sizes (mm) of text, arrowheads, and the margins that hold the dimensions and labels. */
+export const TEXT_MM = 2.6;
+const ARROW_MM = 1.6;
+const MARGIN_MM = { top: 12, bottom: 12, left: 16, right: 18 } as const;
+const PLOT_MARGIN_MM = { left: 8, right: 34 } as const;
+
+export interface FigureFrame {
+  /** The drawing scale 1:n. */
+  scale: number;
+  depth_mm: number;
+  /** Top of the viewBox (negative: room above the section) and its height, in section millimetres. */
+  viewTop: number;
+  viewHeight: number;
+  /** Paper height (mm) of both figures. */
+  heightPaper_mm: number;
+}
+
+export interface Segment {
+  x1: number;
+  y1: number;
+  x2: number;
+  y2: number;
+}
+
+export interface DimensionLine extends Segment {
+  key: 'd' | 'b-top' | 'b-bottom' | 'tf' | 'tw' | 'r';
+  label: string;
+  labelX: number;
+  labelY: number;
+  anchor: 'start' | 'middle' | 'end';
+  /** Extension lines from the section to the dimension line. */
+  extensions: Segment[];
+  /** Arrowheads at the ends of the line (a leader has one, at its start). */
+  arrows: 'both' | 'start';
+}
+
+export interface SectionFigure {
+  frame: FigureFrame;
+  viewBox: string;
+  widthPaper_mm: number;
+  outlinePath: string;
+  webAxis: Segment;
+  dimensions: DimensionLine[];
+  arrowSize: number;
+  textSize: number;
+}
+
+export interface StressFigure {
+  viewBox: string;
+  widthPaper_mm: number;
+  /** The curve alone, and the same closed against the axis for the fill. */
+  curvePath: string;
+  areaPath: string;
+  axes: Segment[];
+  ticks: { x: number; label: string }[];
+  tickY: number;
+  axisLabel: { x: number; y: number; text: string };
+  peak: { x: number; y: number; label: string };
+  neutralAxis: Segment;
+  /** Each web–flange jump: a horizontal step in the curve, labelled with both stresses. */
+  jumps: { segment: Segment; label: string; labelX: number; labelY: number }[];
+  /** V/(hw·tw) over the clear web: a rule of thumb, never the code check. */
+  webAverage: { segment: Segment; label: string; labelX: number; labelY: number } | null;
+  textSize: number;
+}
+
+const round = (value: number): number => Math.round(value * 1000) / 1000;
+const point = (x: number, y: number): string => `${round(x)},${round(y)}`;
+
+/** Section millimetres measured up from the underside → SVG y. */
+export function svgY(frame: FigureFrame, y_mm: number): number {
+  return frame.depth_mm - y_mm;
+}
+
+/** The scale and the vertical extent both figures share. */
+export function figureFrame(props: SectionProperties): FigureFrame {
+  const { input } = props;
+  const width_mm = Math.max(input.topFlange.width_mm, input.bottomFlange.width_mm);
+  const ptBox = (paper_mm: number): number => paper_mm * PT_PER_MM;
+  const scale = drawingScale(width_mm, input.depth_mm, ptBox(SECTION_BOX_MM.width), ptBox(SECTION_BOX_MM.height));
+  const viewTop = -MARGIN_MM.top * scale;
+  const viewHeight = input.depth_mm + (MARGIN_MM.top + MARGIN_MM.bottom) * scale;
+  return { scale, depth_mm: input.depth_mm, viewTop, viewHeight, heightPaper_mm: viewHeight / scale };
+}
+
+/** The section outline (fillets and tapers as the check saw them) with d, b, tf, tw and r dimensioned. */
+export function sectionFigure(props: SectionProperties, frame: FigureFrame = figureFrame(props)): SectionFigure {
+  const { input } = props;
+  const n = frame.scale;
+  const d = input.depth_mm;
+  const top = input.topFlange;
+  const bottom = input.bottomFlange;
+  const half = Math.max(top.width_mm, bottom.width_mm) / 2;
+  const left = -half - MARGIN_MM.left * n;
+  const width = 2 * half + (MARGIN_MM.left + MARGIN_MM.right) * n;
+  const y = (y_mm: number): number => svgY(frame, y_mm);
+  const gap = 1.5 * n;
+  const text = TEXT_MM * n;
+
+  const outline = sectionOutline_mm(props);
+  const outlinePath = `M${outline.map((p) => point(p.x_mm, y(p.y_mm))).join('L')}Z`;
+
+  const dimX = -half - 8 * n;
+  const depth: DimensionLine = {
+    key: 'd',
+    x1: dimX,
+    y1: y(0),
+    x2: dimX,
+    y2: y(d),
+    label: `d = ${formatNumber(d)}`,
+    labelX: dimX - gap,
+    labelY: y(d / 2),
+    anchor: 'end',
+    extensions: [
+      { x1: -bottom.width_mm / 2 - gap, y1: y(0), x2: dimX - gap, y2: y(0) },
+      { x1: -top.width_mm / 2 - gap, y1: y(d), x2: dimX - gap, y2: y(d) },
+    ],
+    arrows: 'both',
+  };
+  const widthLine = (key: 'b-top' | 'b-bottom', flangeWidth: number, atY: number, edgeY: number, labelBelow: boolean): DimensionLine => ({
+    key,
+    x1: -flangeWidth / 2,
+    y1: atY,
+    x2: flangeWidth / 2,
+    y2: atY,
+    label: `b = ${formatNumber(flangeWidth)}`,
+    labelX: 0,
+    labelY: labelBelow ? atY + gap + text : atY - gap,
+    anchor: 'middle',
+    extensions: [
+      { x1: -flangeWidth / 2, y1: edgeY, x2: -flangeWidth / 2, y2: atY },
+      { x1: flangeWidth / 2, y1: edgeY, x2: flangeWidth / 2, y2: atY },
+    ].map((segment) => ({ ...segment, y1: segment.y1 + Math.sign(atY - edgeY) * gap })),
+    arrows: 'both',
+  });
+  const tfX = top.width_mm / 2 + 4 * n;
+  const tf: DimensionLine = {
+    key: 'tf',
+    x1: tfX,
+    y1: y(d),
+    x2: tfX,
+    y2: y(d - top.thickness_mm),
+    label: `tf = ${formatNumber(top.thickness_mm)}`,
+    labelX: tfX + gap,
+    labelY: y(d - top.thickness_mm / 2) + text / 3,
+    anchor: 'start',
+    extensions: [{ x1: top.width_mm / 2 + gap, y1: y(d - top.thickness_mm), x2: tfX + gap, y2: y(d - top.thickness_mm) }],
+    arrows: 'both',
+  };
+  // Web thickness a little above mid-depth, clear of the neutral axis and the root fillet leader.
+  const twY = y(d * 0.62);
+  const tw: DimensionLine = {
+    key: 'tw',
+    x1: -input.webThickness_mm / 2,
+    y1: twY,
+    x2: input.webThickness_mm / 2,
+    y2: twY,
+    label: `tw = ${formatNumber(input.webThickness_mm)}`,
+    labelX: input.webThickness_mm / 2 + 6 * n + gap,
+    labelY: twY + text / 3,
+    anchor: 'start',
+    extensions: [{ x1: input.webThickness_mm / 2, y1: twY, x2: input.webThickness_mm / 2 + 6 * n, y2: twY }],
+    arrows: 'both',
+  };
+  const dimensions = [depth, widthLine('b-top', top.width_mm, y(d) - 6 * n, y(d), false), tf, tw];
+  if (bottom.width_mm !== top.width_mm || bottom.thickness_mm !== top.thickness_mm) {
+    dimensions.push(widthLine('b-bottom', bottom.width_mm, y(0) + 6 * n, y(0), true));
+  }
+  const fillet = filletLeader(props, frame);
+  if (fillet) dimensions.push(fillet);
+
+  return {
+    frame,
+    viewBox: [left, frame.viewTop, width, frame.viewHeight].map(round).join(' '),
+    widthPaper_mm: round(width / n),
+    outlinePath,
+    webAxis: { x1: 0, y1: y(d) - 3 * n, x2: 0, y2: y(0) + 3 * n },
+    dimensions,
+    arrowSize: ARROW_MM * n,
+    textSize: text,
+  };
+}
+
+/** A leader from the middle of the lower right root fillet to "r = …"; none for welded plates. */
+function filletLeader(props: SectionProperties, frame: FigureFrame): DimensionLine | null {
+  const { input } = props;
+  const r = input.bottomFlange.filletRadius_mm;
+  if (!(r > 0)) return null;
+  const n = frame.scale;
+  // Centre of the fillet arc: r out from the web face, r up from the inner face of the flange.
+  const centreX = input.webThickness_mm / 2 + r;
+  const centreY = input.bottomFlange.thickness_mm + r;
+  const onArcX = centreX - r / Math.SQRT2;
+  const onArcY = centreY - r / Math.SQRT2;
+  const labelX = Math.max(input.bottomFlange.width_mm / 2, centreX + r) * 0.7 + 4 * n;
+  const labelY = svgY(frame, centreY + r) - 8 * n;
+  return {
+    key: 'r',
+    x1: onArcX,
+    y1: svgY(frame, onArcY),
+    x2: labelX,
+    y2: labelY,
+    label: `r = ${formatNumber(r)}`,
+    labelX: labelX + 1.5 * n,
+    labelY: labelY + (TEXT_MM * n) / 3,
+    anchor: 'start',
+    extensions: [],
+    arrows: 'start',
+  };
+}
+
+/** Consecutive samples at one level with different stresses: the jump at a change of width. */
+export function stressJumps(samples: readonly StressSample[]): { y_mm: number; from_MPa: number; to_MPa: number }[] {
+  const jumps: { y_mm: number; from_MPa: number; to_MPa: number }[] = [];
+  for (let i = 1; i < samples.length; i++) {
+    const a = samples[i - 1];
+    const b = samples[i];
+    const sameLevel = Math.abs(a.y_mm - b.y_mm) < 1e-6;
+    const larger = Math.max(a.tau_MPa, b.tau_MPa);
+    if (sameLevel && larger > 0 && Math.abs(a.tau_MPa - b.tau_MPa) > 0.05 * larger) {
+      jumps.push({ y_mm: a.y_mm, from_MPa: Math.max(a.tau_MPa, b.tau_MPa), to_MPa: Math.min(a.tau_MPa, b.tau_MPa) });
+    }
+  }
+  return jumps;
+}
+
+export interface StressFigureInput {
+  samples: readonly StressSample[];
+  tauMax_MPa: number;
+  tauMaxAt_mm: number;
+  /** Levels bounding the clear web and the average stress over it, when known. */
+  webAverage?: { tau_MPa: number; from_mm: number; to_mm: number };
+}
+
+/** τ(y) beside the section: same frame, τ to the right in MPa on a round-numbered axis. */
+export function stressFigure(data: StressFigureInput, frame: FigureFrame): StressFigure {
+  const n = frame.scale;
+  const plotWidth = PLOT_WIDTH_MM * n;
+  const left = -PLOT_MARGIN_MM.left * n;
+  const width = (PLOT_MARGIN_MM.left + PLOT_WIDTH_MM + PLOT_MARGIN_MM.right) * n;
+  const largest = Math.max(data.tauMax_MPa, data.webAverage?.tau_MPa ?? 0, ...data.samples.map((sample) => sample.tau_MPa));
+  const ticks = niceTicks(largest * 1.05, 4);
+  const axisMax = ticks[ticks.length - 1] || 1;
+  const x = (tau_MPa: number): number => (tau_MPa / axisMax) * plotWidth;
+  const y = (y_mm: number): number => svgY(frame, y_mm);
+  const text = TEXT_MM * n;
+  const gap = 1.5 * n;
+  const d = frame.depth_mm;
+
+  const points = data.samples.map((sample) => point(x(sample.tau_MPa), y(sample.y_mm)));
+  const curvePath = points.length ? `M${points.join('L')}` : '';
+  const areaPath = points.length ? `M${point(0, y(data.samples[0].y_mm))}L${points.join('L')}L${point(0, y(data.samples[data.samples.length - 1].y_mm))}Z` : '';
+
+  const peakX = x(data.tauMax_MPa);
+  const peakY = y(data.tauMaxAt_mm);
+  const labelColumn = plotWidth + 3 * n;
+  const average = data.webAverage;
+
+  return {
+    viewBox: [left, frame.viewTop, width, frame.viewHeight].map(round).join(' '),
+    widthPaper_mm: round(width / n),
+    curvePath,
+    areaPath,
+    axes: [
+      { x1: 0, y1: y(d), x2: 0, y2: y(0) },
+      { x1: 0, y1: y(0), x2: plotWidth, y2: y(0) },
+    ],
+    ticks: ticks.map((tick) => ({ x: round(x(tick)), label: formatNumber(tick) })),
+    tickY: y(0) + gap + text,
+    axisLabel: { x: plotWidth, y: y(0) + 2 * (gap + text), text: 'τ(y) [MPa]' },
+    peak: { x: round(peakX), y: round(peakY), label: `τmax = ${formatNumber(data.tauMax_MPa)} MPa` },
+    neutralAxis: { x1: 0, y1: peakY, x2: labelColumn - gap, y2: peakY },
+    jumps: stressJumps(data.samples).map((jump) => ({
+      segment: { x1: x(jump.to_MPa), y1: y(jump.y_mm), x2: x(jump.from_MPa), y2: y(jump.y_mm) },
+      label: `${formatNumber(jump.from_MPa)} → ${formatNumber(jump.to_MPa)}`,
+      labelX: labelColumn,
+      labelY: y(jump.y_mm) + text / 3,
+    })),
+    webAverage: average
+      ? {
+          segment: { x1: x(average.tau_MPa), y1: y(average.to_mm), x2: x(average.tau_MPa), y2: y(average.from_mm) },
+          label: `V/(hw·tw) = ${formatNumber(average.tau_MPa)}`,
+          labelX: x(average.tau_MPa) - gap,
+          labelY: y((average.from_mm + average.to_mm) / 2) + 4 * text,
+        }
+      : null,
+    textSize: text,
+  };
+}

@@ -1,0 +1,33 @@
+import type { RunFlag } from '../../../server/checks/check-run-compute';
+
+/** Short words for the flags a run stores on a member, as the table's chips show them. */
+export const FLAG_LABELS: Readonly<Record<RunFlag, string>> = {
+  'web-buckling-governs': 'web buckling',
+  'web-proportion-limit': 'slender web',
+  'elastic-check-exceeded': 'elastic check exceeded',
+  'yield-strength-given': 'fy given',
+  'assumed-grade': 'grade assumed',
+  'catalogue-section': 'catalogue section',
+  'no-material': 'no material',
+  'no-representation': 'no geometry',
+  'no-axis': 'no axis',
+  'no-geometry': 'no geometry',
+  'geometry-built': 'geometry rebuilt',
+  'invalid-profile': 'invalid profile',
+  'profile-not-in-catalogue': 'profile unknown',
+  'no-profile': 'no profile',
+  'derived-profile': 'derived profile',
+  tapered: 'tapered',
+  'top-flange-assumed': 'top flange assumed',
+  curved: 'curved',
+  'several-profiles': 'several profiles',
+  'no-results': 'no results',
+  'fabrication-overridden': 'fabrication set by run',
+  'resistance-factor-overridden': 'factor overridden',
+  'several-result-keys': 'several result keys',
+};
+
+/** The label of a flag; a flag this client does not know yet is shown by its code. */
+export function flagLabel(flag: string): string {
+  return (FLAG_LABELS as Readonly<Record<string, string>>)[flag] ?? flag.replace(/-/g, ' ');
+}

@@ -1,0 +1,151 @@
+import { HttpClient } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { Observable } from 'rxjs';
+import type { ColumnMapping, MemberKeyKind } from '../../../server/results/column-mapping';
+import type { MatchMethod } from '../../../server/results/member-matching';
+
+export type { ColumnMapping, MemberKeyKind, MatchMethod };
+
+/** `POST …/results/uploads`: a stored file waiting for its mapping, with the head of the chosen sheet. */
+export interface ResultsUpload {
+  id: string;
+  fileName: string;
+  format: 'csv' | 'xlsx';
+  /** Sheet names of a workbook; null for CSV. */
+  sheets: string[] | null;
+  /** The sheet previewed; null when a workbook has several and the user must pick one. */
+  sheet: string | null;
+  delimiter: string | null;
+  headers: string[];
+  /** The first rows, as text. */
+  rows: string[][];
+  guessedMapping: Partial<ColumnMapping>;
+}
+
+export interface MatchingSummary {
+  matched: number;
+  ambiguous: number;
+  unmatchedResults: number;
+  membersWithoutResults: number;
+  /** Set when almost nothing matched (probably a file for another model). */
+  warning: string | null;
+}
+
+export interface ResultSet {
+  id: string;
+  name: string;
+  fileName: string;
+  sha256: string;
+  rowCount: number;
+  memberKeys: number;
+  combinations: string[];
+  forceUnit: string;
+  createdBy: { id: string; name: string };
+  createdAt: string;
+  modelRevisionId: string;
+  matching: MatchingSummary;
+}
+
+export type MatchingFilter = 'all' | 'matched' | 'ambiguous' | 'unmatched' | 'members-without-results';
+
+export interface MemberCandidate {
+  globalId: string;
+  tag: string | null;
+  name: string | null;
+}
+
+export interface MatchingItem {
+  resultKey: string;
+  globalId: string | null;
+  tag: string | null;
+  method: MatchMethod | null;
+  candidates: MemberCandidate[];
+}
+
+export interface MatchingPage {
+  summary: MatchingSummary;
+  total: number;
+  items: MatchingItem[];
+}
+
+export interface MappingTemplate {
+  id: string;
+  name: string;
+  mapping: ColumnMapping;
+}
+
+/** One refused row of an import (`422 invalid_rows`): the row number a spreadsheet shows, the file's column. */
+export interface RowError {
+  row: number;
+  column: string | null;
+  message: string;
+}
+
+export interface ResultsImportRequest {
+  uploadId: string;
+  sheet?: string;
+  mapping: ColumnMapping;
+  modelRevisionId: string;
+  name: string;
+  saveTemplateAs?: string;
+}
+
+/** A model revision as the import form offers it (`GET …/models`). */
+export interface RevisionChoice {
+  id: string;
+  number: number;
+  fileName: string;
+  status: 'queued' | 'ingesting' | 'ready' | 'failed';
+  uploadedAt: string;
+}
+
+/** Writes to `/api/projects/:projectId/results…`; pages read with httpResource. */
+@Injectable({ providedIn: 'root' })
+export class ResultsApi {
+  private readonly http = inject(HttpClient);
+
+  upload(projectId: string, file: File): Observable<{ upload: ResultsUpload }> {
+    const body = new FormData();
+    body.append('file', file, file.name);
+    return this.http.post<{ upload: ResultsUpload }>(`${resultsUrl(projectId)}/uploads`, body);
+  }
+
+  preview(projectId: string, uploadId: string, sheet: string): Observable<{ upload: ResultsUpload }> {
+    return this.http.get<{ upload: ResultsUpload }>(`${resultsUrl(projectId)}/uploads/${encodeURIComponent(uploadId)}/preview`, {
+      params: { sheet },
+    });
+  }
+
+  importResults(projectId: string, request: ResultsImportRequest): Observable<{ resultSet: ResultSet }> {
+    return this.http.post<{ resultSet: ResultSet }>(resultsUrl(projectId), request);
+  }
+
+  setMatch(projectId: string, resultSetId: string, resultKey: string, globalId: string | null): Observable<{ item: MatchingItem; summary: MatchingSummary }> {
+    return this.http.put<{ item: MatchingItem; summary: MatchingSummary }>(
+      `${resultSetUrl(projectId, resultSetId)}/matches/${encodeURIComponent(resultKey)}`,
+      { globalId },
+    );
+  }
+}
+
+export function resultsUrl(projectId: string): string {
+  return `/api/projects/${encodeURIComponent(projectId)}/results`;
+}
+
+export function resultSetUrl(projectId: string, resultSetId: string): string {
+  return `${resultsUrl(projectId)}/${encodeURIComponent(resultSetId)}`;
+}
+
+export function mappingTemplatesUrl(projectId: string): string {
+  return `/api/projects/${encodeURIComponent(projectId)}/result-mappings`;
+}
+
+export function revisionsUrl(projectId: string): string {
+  return `/api/projects/${encodeURIComponent(projectId)}/models`;
+}
+
+/** Row errors of a refused import, or [] when the failure is not about rows. */
+export function rowErrorsOf(details: unknown): RowError[] {
+  const errors = (details as { errors?: unknown } | null)?.errors;
+  return Array.isArray(errors) ? (errors as RowError[]) : [];
+}
