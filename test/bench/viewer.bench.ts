@@ -13,44 +13,17 @@ import { type AddressInfo } from 'node:net';
 import { createServer } from 'node:http';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium } from 'playwright-core';
+import { launchChromium } from '../e2e/chromium';
+import { type RunResult, median } from './viewer/bench-run';
 import { syntheticFrameGlb } from './viewer/synthetic-frame-glb';
 
 const SIZES = (process.env['VIEWER_BENCH_SIZES'] ?? '5000,20000,50000').split(',').map(Number);
 const RUNS = Number(process.env['VIEWER_BENCH_RUNS'] ?? 3);
 // Bump when the generator changes, so cached models are made again.
-const MODEL_VERSION = 1;
-const CHROMIUM_ARGS = [
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--use-gl=angle',
-  '--use-angle=swiftshader',
-  '--enable-unsafe-swiftshader',
-];
+const MODEL_VERSION = 2;
 const VIEWPORT = { width: 1280, height: 720 };
 
 type Kind = 'engine' | 'naive';
-
-interface RunResult {
-  load_ms: number;
-  drawCalls: number;
-  triangles: number;
-  frame_ms: number;
-  recolour_ms: number;
-  recolourAndFrame_ms: number;
-  programs: number;
-}
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const middle = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
-}
 
 /** Generated models are kept between runs in the temp folder; making the 50k one takes a while. */
 async function modelFiles(size: number, folder: string): Promise<{ glb: string; ids: string }> {
@@ -148,13 +121,7 @@ async function main(): Promise<void> {
   }
   const server = await serve(files);
   const profile = mkdtempSync(join(tmpdir(), 'taulens-viewer-bench-profile-'));
-  const context = await chromium.launchPersistentContext(profile, {
-    executablePath: '/usr/bin/chromium',
-    headless: true,
-    args: CHROMIUM_ARGS,
-    viewport: VIEWPORT,
-    deviceScaleFactor: 1,
-  });
+  const context = await launchChromium(profile, VIEWPORT);
   try {
     const probe = await context.newPage();
     await probe.goto(server.url);

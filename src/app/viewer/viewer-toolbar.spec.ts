@@ -25,9 +25,9 @@ function setUp(hasSelection = false) {
   fixture.componentInstance.command.subscribe((command) => commands.push(command));
   fixture.detectChanges();
   const element = fixture.nativeElement as HTMLElement;
-  const button = (tooltip: string) => {
-    const found = [...element.querySelectorAll('button')].find((b) => b.getAttribute('mattooltip') === tooltip);
-    if (!found) throw new Error(`no button "${tooltip}"`);
+  const button = (label: string) => {
+    const found = element.querySelector<HTMLButtonElement>(`button[aria-label="${label}"]`);
+    if (!found) throw new Error(`no button "${label}"`);
     return found;
   };
   return { fixture, element, commands, button };

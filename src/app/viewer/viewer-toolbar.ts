@@ -1,3 +1,4 @@
+import { NgTemplateOutlet } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input, model, output, signal, viewChild } from '@angular/core';
 import { MatAutocompleteModule, MatAutocompleteTrigger } from '@angular/material/autocomplete';
 import { MatButtonModule } from '@angular/material/button';
@@ -33,9 +34,39 @@ export type ViewerCommand =
 
 const SEARCH_SUGGESTIONS = 8;
 
+interface ToolbarAction {
+  command: ViewerCommand;
+  /** Material Symbols ligature. */
+  icon: string;
+  label: string;
+  needsSelection: boolean;
+}
+
+const FRAMING_ACTIONS: readonly ToolbarAction[] = [
+  { command: { kind: 'fit-all' }, icon: 'fit_screen', label: 'Frame the whole model (F)', needsSelection: false },
+  {
+    command: { kind: 'fit-selection' },
+    icon: 'center_focus_strong',
+    label: 'Frame the selection (F)',
+    needsSelection: true,
+  },
+];
+
+const VISIBILITY_ACTIONS: readonly ToolbarAction[] = [
+  { command: { kind: 'hide-selection' }, icon: 'visibility_off', label: 'Hide the selection', needsSelection: true },
+  {
+    command: { kind: 'isolate-selection' },
+    icon: 'filter_center_focus',
+    label: 'Show only the selection',
+    needsSelection: true,
+  },
+  { command: { kind: 'show-all' }, icon: 'visibility', label: 'Show everything hidden', needsSelection: false },
+];
+
 @Component({
   selector: 'tl-viewer-toolbar',
   imports: [
+    NgTemplateOutlet,
     MatAutocompleteModule,
     MatButtonModule,
     MatButtonToggleModule,
@@ -63,6 +94,8 @@ export class ViewerToolbar {
 
   readonly command = output<ViewerCommand>();
 
+  protected readonly framingActions = FRAMING_ACTIONS;
+  protected readonly visibilityActions = VISIBILITY_ACTIONS;
   protected readonly colourModes = Object.keys(COLOUR_MODE_LABELS) as ColourMode[];
   protected readonly colourModeLabels = COLOUR_MODE_LABELS;
   protected readonly standardViews = Object.entries(STANDARD_VIEWS).map(([view, definition]) => ({

@@ -4,30 +4,50 @@
  * GPU, so frame times include the drawing and not just the submission.
  */
 import { ViewerEngine } from '../../../src/app/viewer/viewer-engine';
+import { type RunRequest, type RunResult, median } from './bench-run';
 import { NaiveViewer } from './naive-viewer.mts';
 
-export interface RunRequest {
-  url: string;
-  /** JSON list of the model's member GlobalIds. */
-  idsUrl: string;
-  frames: number;
-  recolours: number;
+/** The two contenders, seen the same way. */
+interface Contender {
+  load(bytes: ArrayBuffer): Promise<void>;
+  orbit(angle_rad: number): void;
+  recolour(colours: ReadonlyMap<string, number>): void;
+  /** Renders and reads a pixel back. */
+  renderAndWait(): void;
+  figures(): { drawCalls: number; triangles: number; programs: number };
+  dispose(): void;
 }
 
-export interface RunResult {
-  load_ms: number;
-  drawCalls: number;
-  triangles: number;
-  frame_ms: number;
-  recolour_ms: number;
-  recolourAndFrame_ms: number;
-  programs: number;
+function canvas(): HTMLCanvasElement {
+  return document.getElementById('view') as HTMLCanvasElement;
 }
 
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const middle = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+function engineContender(): Contender {
+  const engine = new ViewerEngine();
+  engine.init(canvas());
+  return {
+    load: async (bytes) => void (await engine.loadGlb(bytes)),
+    orbit: (angle_rad) => engine.orbit(angle_rad, 0),
+    recolour: (colours) => void engine.setColours(colours),
+    renderAndWait: () => void engine.readPixel(0, 0),
+    figures: () => engine.stats(),
+    dispose: () => engine.dispose(),
+  };
+}
+
+function naiveContender(): Contender {
+  const viewer = new NaiveViewer(canvas());
+  return {
+    load: (bytes) => viewer.load(bytes),
+    orbit: (angle_rad) => viewer.orbit(angle_rad),
+    recolour: (colours) => viewer.recolour(colours),
+    renderAndWait: () => viewer.renderAndWait(),
+    figures: () => {
+      const { render, programs } = viewer.renderer.info;
+      return { drawCalls: render.calls, triangles: render.triangles, programs: programs?.length ?? 0 };
+    },
+    dispose: () => viewer.renderer.dispose(),
+  };
 }
 
 /** Colour maps prepared before timing, a different one per repetition so no recolour is a no-op. */
@@ -42,44 +62,41 @@ async function fetchOk(url: string): Promise<Response> {
   return response;
 }
 
-function canvas(): HTMLCanvasElement {
-  return document.getElementById('view') as HTMLCanvasElement;
+function timed(action: () => void): number {
+  const start = performance.now();
+  action();
+  return performance.now() - start;
 }
 
-async function runEngine({ url, idsUrl, frames, recolours }: RunRequest): Promise<RunResult> {
+async function measure(contender: Contender, { url, idsUrl, frames, recolours }: RunRequest): Promise<RunResult> {
   const bytes = await (await fetchOk(url)).arrayBuffer();
   const maps = colourMaps((await (await fetchOk(idsUrl)).json()) as string[], recolours * 2);
-  const engine = new ViewerEngine();
-  engine.init(canvas());
-  engine.resize(canvas().clientWidth, canvas().clientHeight);
 
   const start = performance.now();
-  await engine.loadGlb(bytes);
-  engine.readPixel(0, 0);
+  await contender.load(bytes);
+  contender.renderAndWait();
   const load_ms = performance.now() - start;
-  const { drawCalls, triangles } = engine.stats();
+  const { drawCalls, triangles } = contender.figures();
 
-  const frameTimes: number[] = [];
-  for (let i = 0; i < frames; i++) {
-    const t = performance.now();
-    engine.orbit(0.03, 0);
-    engine.readPixel(0, 0);
-    frameTimes.push(performance.now() - t);
-  }
-
+  const frameTimes = Array.from({ length: frames }, () =>
+    timed(() => {
+      contender.orbit(0.03);
+      contender.renderAndWait();
+    }),
+  );
   const recolourTimes: number[] = [];
   const recolourFrameTimes: number[] = [];
   for (let i = 0; i < recolours; i++) {
-    let t = performance.now();
-    engine.setColours(maps[2 * i]);
-    recolourTimes.push(performance.now() - t);
-    t = performance.now();
-    engine.setColours(maps[2 * i + 1]);
-    engine.readPixel(0, 0);
-    recolourFrameTimes.push(performance.now() - t);
+    recolourTimes.push(timed(() => contender.recolour(maps[2 * i])));
+    recolourFrameTimes.push(
+      timed(() => {
+        contender.recolour(maps[2 * i + 1]);
+        contender.renderAndWait();
+      }),
+    );
   }
-  const programs = engine.stats().programs;
-  engine.dispose();
+  const { programs } = contender.figures();
+  contender.dispose();
   return {
     load_ms,
     drawCalls,
@@ -91,50 +108,17 @@ async function runEngine({ url, idsUrl, frames, recolours }: RunRequest): Promis
   };
 }
 
-async function runNaive({ url, idsUrl, frames, recolours }: RunRequest): Promise<RunResult> {
-  const bytes = await (await fetchOk(url)).arrayBuffer();
-  const maps = colourMaps((await (await fetchOk(idsUrl)).json()) as string[], recolours * 2);
-  const viewer = new NaiveViewer(canvas());
-  const start = performance.now();
-  await viewer.load(bytes);
-  viewer.renderAndWait();
-  const load_ms = performance.now() - start;
-  const drawCalls = viewer.drawCalls;
-  const triangles = viewer.renderer.info.render.triangles;
-
-  const frameTimes: number[] = [];
-  for (let i = 0; i < frames; i++) {
-    const t = performance.now();
-    viewer.orbit(0.03);
-    viewer.renderAndWait();
-    frameTimes.push(performance.now() - t);
-  }
-
-  const recolourTimes: number[] = [];
-  const recolourFrameTimes: number[] = [];
-  for (let i = 0; i < recolours; i++) {
-    let t = performance.now();
-    viewer.recolour(maps[2 * i]);
-    recolourTimes.push(performance.now() - t);
-    t = performance.now();
-    viewer.recolour(maps[2 * i + 1]);
-    viewer.renderAndWait();
-    recolourFrameTimes.push(performance.now() - t);
-  }
-  return {
-    load_ms,
-    drawCalls,
-    triangles,
-    frame_ms: median(frameTimes),
-    recolour_ms: median(recolourTimes),
-    recolourAndFrame_ms: median(recolourFrameTimes),
-    programs: viewer.renderer.info.programs?.length ?? 0,
-  };
-}
-
 function webGlRenderer(): string {
   const gl = document.createElement('canvas').getContext('webgl2');
-  return gl ? String(gl.getParameter(gl.RENDERER)) : 'no WebGL 2';
+  if (gl === null) return 'no WebGL 2';
+  const info = gl.getExtension('WEBGL_debug_renderer_info');
+  return String(gl.getParameter(info ? info.UNMASKED_RENDERER_WEBGL : gl.RENDERER));
 }
 
-Object.assign(window, { viewerBench: { engine: runEngine, naive: runNaive, webGlRenderer } });
+Object.assign(window, {
+  viewerBench: {
+    engine: (request: RunRequest) => measure(engineContender(), request),
+    naive: (request: RunRequest) => measure(naiveContender(), request),
+    webGlRenderer,
+  },
+});

@@ -71,8 +71,4 @@ export class NaiveViewer {
     const gl = this.renderer.getContext();
     gl.readPixels(0, 0, 1, 1, gl.RGBA, gl.UNSIGNED_BYTE, this.pixel);
   }
-
-  get drawCalls(): number {
-    return this.renderer.info.render.calls;
-  }
 }

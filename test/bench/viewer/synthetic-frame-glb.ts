@@ -1,10 +1,12 @@
 /**
- * Synthetic steel frames for the viewer benchmark, written as the ingest writes a revision's .glb: one node per
- * element named by its GlobalId, extras {globalId, expressId, ifcClass, context}, POSITION + NORMAL + indices,
- * metres, Y up. Every member gets its own mesh, as tessellated IFC geometry does, which is the hard case for a
- * viewer. Invented data: grid, storeys and section sizes are made up for load, not taken from any project.
+ * Synthetic steel frames for the viewer benchmark, written as the ingest writes a revision's .glb (the contract at
+ * the top of server/ifc/glb-writer.ts): one node per element named by its GlobalId, extras {globalId, expressId,
+ * ifcClass, context}, interleaved POSITION + NORMAL, indices, materials 'member' and 'context', metres, Y up,
+ * vertices in scene coordinates under identity nodes, the model offset in the scene extras. Every member gets its
+ * own mesh, as tessellated IFC geometry does, which is the hard case for a viewer. Invented data: grid, storeys and
+ * section sizes are made up for load, not taken from any project.
  */
-import { Document, WebIO } from '@gltf-transform/core';
+import { Document, type Material, WebIO } from '@gltf-transform/core';
 
 interface Section {
   depth: number;
@@ -103,17 +105,51 @@ export function iBeamGeometry(section: Section, length_m: number): MeshArrays {
   };
 }
 
+interface Placement {
+  translation: Triple;
+  rotation: Quaternion;
+  scale?: Triple;
+}
+
+/** q · v · q⁻¹ for a unit quaternion [x, y, z, w]. */
+function rotate([qx, qy, qz, qw]: Quaternion, [vx, vy, vz]: Triple): Triple {
+  const [tx, ty, tz] = [2 * (qy * vz - qz * vy), 2 * (qz * vx - qx * vz), 2 * (qx * vy - qy * vx)];
+  return [
+    vx + qw * tx + (qy * tz - qz * ty),
+    vy + qw * ty + (qz * tx - qx * tz),
+    vz + qw * tz + (qx * ty - qy * tx),
+  ];
+}
+
+/** The mesh moved into scene coordinates, since the contract's nodes carry no transform. */
+function placed(mesh: MeshArrays, { translation, rotation, scale = [1, 1, 1] }: Placement): MeshArrays {
+  const positions = new Float32Array(mesh.positions.length);
+  const normals = new Float32Array(mesh.normals.length);
+  const at = (array: Float32Array, i: number, factor: (axis: number) => number): Triple => [
+    array[i] * factor(0),
+    array[i + 1] * factor(1),
+    array[i + 2] * factor(2),
+  ];
+  for (let i = 0; i < positions.length; i += 3) {
+    const p = rotate(rotation, at(mesh.positions, i, (axis) => scale[axis]));
+    positions.set([p[0] + translation[0], p[1] + translation[1], p[2] + translation[2]], i);
+    // Normals scale by the inverse: the faces here are square to the axes, so this stays exact.
+    const n = rotate(rotation, at(mesh.normals, i, (axis) => 1 / scale[axis]));
+    const length = Math.hypot(n[0], n[1], n[2]);
+    normals.set([n[0] / length, n[1] / length, n[2] / length], i);
+  }
+  return { positions, normals, indices: mesh.indices };
+}
+
 /** Rotations taking local +Z (the member axis) to glTF +X, glTF −Z (IFC +Y) and glTF +Y (up). */
 const ALONG_X: Quaternion = [0, Math.SQRT1_2, 0, Math.SQRT1_2];
 const ALONG_MINUS_Z: Quaternion = [0, 1, 0, 0];
 const UPRIGHT: Quaternion = [-Math.SQRT1_2, 0, 0, Math.SQRT1_2];
 
-interface MemberPlacement {
+interface MemberPlacement extends Placement {
   ifcClass: 'IfcBeam' | 'IfcColumn';
   section: Section;
   length_m: number;
-  translation: Triple;
-  rotation: Quaternion;
 }
 
 /** Beams both ways and columns on a square grid, storey by storey, until `count` members. */
@@ -158,27 +194,23 @@ export async function syntheticFrameGlb(memberCount: number): Promise<SyntheticM
   const memberGlobalIds: string[] = [];
   const contextGlobalIds: string[] = [];
   let expressId = 100;
-  const addElement = (
-    globalId: string,
-    ifcClass: string,
-    context: boolean,
-    geometry: MeshArrays,
-    place: { translation: Triple; rotation?: Quaternion; scale?: Triple },
-  ) => {
+  const materials: Record<'member' | 'context', Material> = {
+    member: document.createMaterial('member').setBaseColorFactor([0.6, 0.62, 0.64, 1]),
+    context: document.createMaterial('context').setBaseColorFactor([0.86, 0.87, 0.88, 0.3]).setAlphaMode('BLEND'),
+  };
+  const addElement = (globalId: string, ifcClass: string, context: boolean, mesh: MeshArrays) => {
     const accessor = (array: Float32Array | Uint16Array, type: 'VEC3' | 'SCALAR') =>
       document.createAccessor().setArray(array).setType(type).setBuffer(buffer);
     const primitive = document
       .createPrimitive()
-      .setAttribute('POSITION', accessor(geometry.positions, 'VEC3'))
-      .setAttribute('NORMAL', accessor(geometry.normals, 'VEC3'))
-      .setIndices(accessor(geometry.indices, 'SCALAR'));
+      .setAttribute('POSITION', accessor(mesh.positions, 'VEC3'))
+      .setAttribute('NORMAL', accessor(mesh.normals, 'VEC3'))
+      .setIndices(accessor(mesh.indices, 'SCALAR'))
+      .setMaterial(materials[context ? 'context' : 'member']);
     const node = document
       .createNode(globalId)
       .setMesh(document.createMesh().addPrimitive(primitive))
-      .setTranslation(place.translation)
       .setExtras({ globalId, expressId: expressId++, ifcClass, context });
-    if (place.rotation) node.setRotation(place.rotation);
-    if (place.scale) node.setScale(place.scale);
     scene.addChild(node);
   };
 
@@ -187,7 +219,7 @@ export async function syntheticFrameGlb(memberCount: number): Promise<SyntheticM
   for (const member of framePlacements(memberCount)) {
     const globalId = syntheticGlobalId(memberGlobalIds.length);
     memberGlobalIds.push(globalId);
-    addElement(globalId, member.ifcClass, false, iBeamGeometry(member.section, member.length_m), member);
+    addElement(globalId, member.ifcClass, false, placed(iBeamGeometry(member.section, member.length_m), member));
     storeys = Math.max(storeys, Math.round(member.translation[1] / STOREY_M) + 1);
     extent_m = Math.max(extent_m, member.translation[0]);
   }
@@ -196,11 +228,8 @@ export async function syntheticFrameGlb(memberCount: number): Promise<SyntheticM
   for (let storey = 1; storey <= storeys; storey++) {
     const globalId = syntheticGlobalId(1_000_000 + storey);
     contextGlobalIds.push(globalId);
-    addElement(globalId, 'IfcSlab', true, slab, {
-      translation: [extent_m / 2, storey * STOREY_M + 0.3, 0],
-      rotation: ALONG_MINUS_Z,
-      scale: [extent_m, 0.2, extent_m],
-    });
+    const plate = { translation: [extent_m / 2, storey * STOREY_M + 0.3, 0] as Triple, rotation: ALONG_MINUS_Z };
+    addElement(globalId, 'IfcSlab', true, placed(slab, { ...plate, scale: [extent_m, 0.2, extent_m] }));
   }
   const glb = await new WebIO().writeBinary(document);
   return { glb, memberGlobalIds, contextGlobalIds };
