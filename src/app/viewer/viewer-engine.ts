@@ -277,11 +277,18 @@ export class ViewerEngine {
     try {
       offset = readModelOffset(gltf.scene.userData);
     } catch (error) {
+      disposeLoadedScene(gltf.scene);
       throw new ModelLoadError((error as Error).message);
     }
     this.clearModel();
     const materials = { member: this.memberMaterial(), context: this.materials.context };
-    const model = buildModelBatches(gltf.scene, materials, this.modelResources);
+    let model: ModelBatches;
+    try {
+      model = buildModelBatches(gltf.scene, materials, this.modelResources);
+    } catch (error) {
+      this.modelResources.disposeAll();
+      throw new ModelLoadError(`The model file could not be drawn: ${(error as Error).message}`);
+    }
     this.model = model;
     this.modelOffset_m = offset;
     this.bounds.makeEmpty();

@@ -108,6 +108,14 @@ export class ViewerWorkspace {
     };
   }
 
+  /** A new model starts with nothing selected, no cut and all filters still as the toolbar shows them. */
+  protected showModel(summary: ModelSummary): void {
+    this.summary.set(summary);
+    this.hover.set(null);
+    this.section.set(null);
+    this.changeSelection([]);
+  }
+
   protected changeSelection(globalIds: readonly string[]): void {
     this.selection.set(globalIds);
     this.selected.emit(globalIds);
