@@ -20,13 +20,19 @@ export interface ResultsUpload {
   /** The first rows, as text. */
   rows: string[][];
   guessedMapping: Partial<ColumnMapping>;
+  /** Required mapping fields the header did not reveal. */
+  missingMapping: string[];
 }
 
 export interface MatchingSummary {
+  /** Distinct member keys in the results. */
+  keys: number;
   matched: number;
   ambiguous: number;
   unmatchedResults: number;
   membersWithoutResults: number;
+  byMethod: Record<MatchMethod, number>;
+  likelyOtherModel: boolean;
   /** Set when almost nothing matched (probably a file for another model). */
   warning: string | null;
 }
@@ -35,12 +41,15 @@ export interface ResultSet {
   id: string;
   name: string;
   fileName: string;
+  format: 'csv' | 'xlsx';
+  sheet: string | null;
   sha256: string;
   rowCount: number;
   memberKeys: number;
   combinations: string[];
   forceUnit: string;
-  createdBy: { id: string; name: string };
+  mapping: ColumnMapping;
+  createdBy: { id: string; name: string } | null;
   createdAt: string;
   modelRevisionId: string;
   matching: MatchingSummary;
@@ -55,9 +64,11 @@ export interface MemberCandidate {
 }
 
 export interface MatchingItem {
-  resultKey: string;
+  /** Null on a row of the members-without-results list. */
+  resultKey: string | null;
   globalId: string | null;
   tag: string | null;
+  name: string | null;
   method: MatchMethod | null;
   candidates: MemberCandidate[];
 }
@@ -88,6 +99,14 @@ export interface ResultsImportRequest {
   modelRevisionId: string;
   name: string;
   saveTemplateAs?: string;
+  /** Matching by end points: largest distance of an analysis end from the IFC member axis. */
+  geometry?: { tolerance_mm: number };
+}
+
+/** The details of `422 invalid_rows`: the rows listed, and whether the reader stopped before the end of the file. */
+export interface RowErrors {
+  errors: RowError[];
+  stoppedEarly: boolean;
 }
 
 /** A model revision as the import form offers it (`GET …/models`). */
@@ -144,8 +163,8 @@ export function revisionsUrl(projectId: string): string {
   return `/api/projects/${encodeURIComponent(projectId)}/models`;
 }
 
-/** Row errors of a refused import, or [] when the failure is not about rows. */
-export function rowErrorsOf(details: unknown): RowError[] {
-  const errors = (details as { errors?: unknown } | null)?.errors;
-  return Array.isArray(errors) ? (errors as RowError[]) : [];
+/** Row errors of a refused import (none when the failure is not about rows). */
+export function rowErrorsOf(details: unknown): RowErrors {
+  const found = details as Partial<RowErrors> | null | undefined;
+  return { errors: Array.isArray(found?.errors) ? found.errors : [], stoppedEarly: found?.stoppedEarly === true };
 }

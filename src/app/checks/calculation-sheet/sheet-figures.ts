@@ -13,7 +13,7 @@ import { drawingScale, niceTicks, PT_PER_MM, sectionOutline_mm } from '../../../
 import type { StressSample } from '../checks-api';
 
 /** Paper room for the section on an A4 sheet beside the plot (mm). */
-export const SECTION_BOX_MM = { width: 70, height: 120 } as const;
+export const SECTION_BOX_MM = { width: 70, height: 125 } as const;
 /** Paper width of the τ axis (mm). */
 export const PLOT_WIDTH_MM = 60;
 /** Paper sizes (mm) of text, arrowheads, and the margins that hold the dimensions and labels. */

@@ -86,8 +86,7 @@ export class MatchingReport {
   }
 
   protected memberOf(item: MatchingItem): string {
-    if (!item.globalId) return '';
-    return memberLabel({ globalId: item.globalId, tag: item.tag, name: null });
+    return item.globalId ? memberLabel({ globalId: item.globalId, tag: item.tag, name: item.name }) : '';
   }
 
   protected countOf(key: keyof MatchingSummary): number | null {
@@ -106,26 +105,31 @@ export class MatchingReport {
     this.pageSize.set(event.pageSize);
   }
 
-  protected startEditing(item: MatchingItem): void {
+  protected startEditing(resultKey: string): void {
     this.notice.set(null);
-    this.editing.set(item.resultKey);
+    this.editing.set(resultKey);
+  }
+
+  /** The item's result key while its member is being chosen, else null. */
+  protected editedKey(item: MatchingItem): string | null {
+    return item.resultKey !== null && this.editing() === item.resultKey ? item.resultKey : null;
   }
 
   protected stopEditing(): void {
     this.editing.set(null);
   }
 
-  protected assign(item: MatchingItem, member: MemberCandidate | null): void {
+  protected assign(resultKey: string, member: MemberCandidate | null): void {
     const set = this.set();
     if (!set) return;
     this.busy.set(true);
     this.notice.set(null);
-    this.api.setMatch(this.context.projectId(), set.id, item.resultKey, member?.globalId ?? null).subscribe({
+    this.api.setMatch(this.context.projectId(), set.id, resultKey, member?.globalId ?? null).subscribe({
       next: () => {
         this.busy.set(false);
         this.editing.set(null);
         this.notice.set({
-          text: member ? `${item.resultKey} now goes to ${memberLabel(member)}.` : `${item.resultKey} no longer goes to any member.`,
+          text: member ? `${resultKey} now goes to ${memberLabel(member)}.` : `${resultKey} no longer goes to any member.`,
           failed: false,
         });
         this.matching.reload();

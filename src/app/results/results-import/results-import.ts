@@ -33,7 +33,7 @@ import {
   ResultsUpload,
   RevisionChoice,
   revisionsUrl,
-  RowError,
+  RowErrors,
   rowErrorsOf,
 } from '../results-api';
 
@@ -97,9 +97,11 @@ export class ResultsImport {
   protected readonly upload = signal<ResultsUpload | null>(null);
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
-  protected readonly rowErrors = signal<RowError[]>([]);
+  protected readonly rowErrors = signal<RowErrors | null>(null);
 
   protected readonly mappingForm = createMappingForm();
+  /** Largest distance of an analysis end point from the IFC member axis; blank = the server's default. */
+  protected readonly tolerance = new FormControl<number | null>(null, { validators: [Validators.min(0.1), Validators.max(10_000)] });
   protected readonly templateForm = new FormGroup({
     save: new FormControl(false, { nonNullable: true }),
     name: new FormControl('', { nonNullable: true, validators: Validators.maxLength(120) }),
@@ -167,20 +169,23 @@ export class ResultsImport {
 
   protected importResults(): void {
     const upload = this.upload();
-    if (!upload || this.mappingForm.invalid || this.targetForm.invalid || this.templateForm.invalid) {
+    if (!upload || this.mappingForm.invalid || this.targetForm.invalid || this.templateForm.invalid || this.tolerance.invalid) {
       this.targetForm.markAllAsTouched();
       return;
     }
     const { save, name: templateName } = this.templateForm.getRawValue();
     const { modelRevisionId, name } = this.targetForm.getRawValue();
-    this.rowErrors.set([]);
+    const mapping = columnMappingOf(this.mappingForm.getRawValue());
+    const tolerance_mm = this.tolerance.value;
+    this.rowErrors.set(null);
     const request = {
       uploadId: upload.id,
       ...(upload.sheet !== null && { sheet: upload.sheet }),
-      mapping: columnMappingOf(this.mappingForm.getRawValue()),
+      mapping,
       modelRevisionId,
       name: name.trim(),
       ...(save && templateName.trim() && { saveTemplateAs: templateName.trim() }),
+      ...(mapping.endColumns && tolerance_mm !== null && { geometry: { tolerance_mm } }),
     };
     this.run(this.api.importResults(this.context.projectId(), request), ({ resultSet }) => {
       void this.router.navigate(['..', resultSet.id], { relativeTo: this.route });
@@ -196,7 +201,7 @@ export class ResultsImport {
 
   private showPreview(upload: ResultsUpload): void {
     this.upload.set(upload);
-    this.rowErrors.set([]);
+    this.rowErrors.set(null);
     this.mappingForm.reset(mappingFieldsFrom(upload.guessedMapping, upload.headers));
     if (!this.targetForm.controls.name.dirty) this.targetForm.controls.name.setValue(resultSetNameFor(upload.fileName));
   }

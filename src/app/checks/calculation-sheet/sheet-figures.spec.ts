@@ -1,0 +1,137 @@
+import { expectClose } from '../../../../server/engine/expect-close';
+import { sectionProperties } from '../../../../server/engine/section-properties';
+import { shearStressProfile } from '../../../../server/engine/shear-stress';
+import { iSection } from '../../../../server/engine/test-sections';
+import { figureFrame, sectionFigure, stressFigure, stressJumps } from './sheet-figures';
+
+// IPE 300: h 300, b 150, tw 7.1, tf 10.7, r 15 mm (EN 10365 dimensions).
+const IPE_300 = iSection(300, 7.1, [150, 10.7, 15]);
+// Three-rectangle I-beam of Gere, Mechanics of Materials, Problem 5.10-2: b = 180, t = 12, h = 420, h1 = 380 mm,
+// V = 125 kN → τmax = 28.43 MPa, τmin = 21.86 MPa, τaver = 27.41 MPa (solution manual).
+const GERE_BEAM = iSection(420, 12, [180, 20, 0]);
+const GERE_SHEAR_N = 125_000;
+
+function numbers(viewBox: string): number[] {
+  return viewBox.split(' ').map(Number);
+}
+
+function stressOf(input: typeof GERE_BEAM, shear_N: number) {
+  const props = sectionProperties(input);
+  const profile = shearStressProfile(props, shear_N);
+  const frame = figureFrame(props);
+  const figure = stressFigure(
+    {
+      samples: profile.points.map((p) => ({ y_mm: p.y_mm, tau_MPa: p.tau_MPa })),
+      tauMax_MPa: profile.tauMax_MPa,
+      tauMaxAt_mm: profile.tauMaxAt_mm,
+      webAverage: { tau_MPa: profile.webAverageClear_MPa, from_mm: props.bottomJunctionFromBottom_mm, to_mm: props.topJunctionFromBottom_mm },
+    },
+    frame,
+  );
+  return { props, profile, frame, figure };
+}
+
+describe('section figure', () => {
+  const props = sectionProperties(IPE_300);
+  const frame = figureFrame(props);
+  const figure = sectionFigure(props, frame);
+
+  it('picks the largest drawing-office scale at which the section fits its paper box', () => {
+    // 150 × 300 mm in a 70 × 125 mm box: at 1:2 it would be 150 mm tall; at 1:2.5 it is 60 × 120 mm.
+    expect(frame.scale).toBe(2.5);
+    expect(figure.widthPaper_mm).toBeCloseTo((150 + (16 + 18) * 2.5) / 2.5, 6);
+    expect(frame.heightPaper_mm).toBeCloseTo(300 / 2.5 + 24, 6);
+  });
+
+  it('draws the outline in section millimetres: closed, as wide as the flanges and as deep as the section', () => {
+    expect(figure.outlinePath.startsWith('M')).toBe(true);
+    expect(figure.outlinePath.endsWith('Z')).toBe(true);
+    const points = figure.outlinePath
+      .slice(1, -1)
+      .split('L')
+      .map((pair) => pair.split(',').map(Number));
+    expect(Math.max(...points.map(([x]) => x))).toBeCloseTo(75, 6);
+    expect(Math.min(...points.map(([x]) => x))).toBeCloseTo(-75, 6);
+    expect(Math.min(...points.map(([, y]) => y))).toBeCloseTo(0, 6);
+    expect(Math.max(...points.map(([, y]) => y))).toBeCloseTo(300, 6);
+    // The web is 7.1 mm wide between the fillets (at mid-depth).
+    const atMid = points.filter(([, y]) => Math.abs(y - 150) < 20).map(([x]) => Math.abs(x));
+    expect(Math.min(...atMid)).toBeCloseTo(3.55, 6);
+  });
+
+  it('dimensions d, b, tf, tw and r, with d spanning the whole depth to scale', () => {
+    expect(figure.dimensions.map((dimension) => dimension.label)).toEqual(['d = 300', 'b = 150', 'tf = 10.7', 'tw = 7.1', 'r = 15']);
+    const depth = figure.dimensions.find((dimension) => dimension.key === 'd')!;
+    expect(Math.abs(depth.y1 - depth.y2)).toBeCloseTo(300, 6);
+    const tw = figure.dimensions.find((dimension) => dimension.key === 'tw')!;
+    expect(tw.x2 - tw.x1).toBeCloseTo(7.1, 6);
+    // Text prints 2.6 mm high whatever the scale.
+    expect(figure.textSize / frame.scale).toBeCloseTo(2.6, 6);
+  });
+
+  it('dimensions the bottom flange too when the flanges differ, and leaves out r for welded plates', () => {
+    const mono = sectionFigure(sectionProperties(iSection(600, 10, [250, 15, 0], [350, 25, 0])));
+    expect(mono.dimensions.map((dimension) => dimension.key)).toEqual(['d', 'b-top', 'tf', 'tw', 'b-bottom']);
+    expect(mono.dimensions.find((dimension) => dimension.key === 'b-bottom')!.label).toBe('b = 350');
+  });
+});
+
+describe('stress figure', () => {
+  it('shares the section figure’s vertical frame, so both print at the same height and scale', () => {
+    const { props, frame, figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
+    const section = sectionFigure(props, frame);
+    const [, sectionTop, , sectionHeight] = numbers(section.viewBox);
+    const [, plotTop, , plotHeight] = numbers(figure.viewBox);
+    expect([plotTop, plotHeight]).toEqual([sectionTop, sectionHeight]);
+    // 180 × 420 mm needs 1:5 in the 70 × 125 mm box (1:2.5 would be 168 mm tall).
+    expect(frame.scale).toBe(5);
+  });
+
+  it('marks τmax at the neutral axis with the textbook value', () => {
+    const { profile, figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
+    expectClose(profile.tauMax_MPa, 28.43, 5e-4, 'τmax');
+    expect(figure.peak.label).toBe('τmax = 28.43 MPa');
+    // Mid-depth of a doubly symmetric section: svg y = 420 − 210.
+    expect(figure.peak.y).toBeCloseTo(210, 6);
+    // Axis 0–30 MPa (round ticks) over 60 mm of paper at 1:5.
+    expect(figure.ticks.map((tick) => tick.label)).toEqual(['0', '10', '20', '30']);
+    expect(figure.peak.x).toBeCloseTo((profile.tauMax_MPa / 30) * 60 * 5, 3);
+  });
+
+  it('shows the jump at each web–flange junction: τmin in the web to b/t times less in the flange', () => {
+    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
+    expect(figure.jumps.map((jump) => jump.label)).toEqual(['21.86 → 1.457', '21.86 → 1.457']);
+    expect(figure.jumps.map((jump) => jump.segment.y1).sort((a, b) => a - b)).toEqual([20, 400]);
+    for (const { segment } of figure.jumps) {
+      expect(segment.y1).toBe(segment.y2);
+      expect(segment.x2).toBeGreaterThan(segment.x1);
+    }
+  });
+
+  it('draws the web average V/(hw·tw) over the clear web as a separate mark', () => {
+    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
+    expect(figure.webAverage?.label).toBe('V/(hw·tw) = 27.41');
+    expect(figure.webAverage?.segment.y1).toBeCloseTo(20, 6);
+    expect(figure.webAverage?.segment.y2).toBeCloseTo(400, 6);
+  });
+
+  it('closes the filled area against the τ = 0 axis', () => {
+    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
+    expect(figure.areaPath.startsWith('M0,420L')).toBe(true);
+    expect(figure.areaPath.endsWith('L0,0Z')).toBe(true);
+  });
+});
+
+describe('stressJumps', () => {
+  it('finds steps only where one level carries two different stresses', () => {
+    const samples = [
+      { y_mm: 0, tau_MPa: 0 },
+      { y_mm: 10, tau_MPa: 1 },
+      { y_mm: 10, tau_MPa: 12 },
+      { y_mm: 50, tau_MPa: 15 },
+      { y_mm: 50, tau_MPa: 15.1 },
+    ];
+    expect(stressJumps(samples)).toEqual([{ y_mm: 10, from_MPa: 12, to_MPa: 1 }]);
+    expect(stressJumps([])).toEqual([]);
+  });
+});
