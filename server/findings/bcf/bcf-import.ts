@@ -210,7 +210,8 @@ function unknownOf(topics: readonly ImportedTopic[], options: BcfImportOptions):
   };
 }
 
-function rejectUnknown(unknown: BcfImportResult['unknown']): void {
+/** Refuses the file when it refers to unknown topics or elements, listing them; callers may pass only the lists they enforce. */
+export function rejectUnknown(unknown: Pick<BcfImportResult['unknown'], 'topicGuids' | 'globalIds'>): void {
   const parts: string[] = [];
   const list = (ids: string[]): string =>
     ids.slice(0, LISTED_IN_MESSAGE).join(', ') + (ids.length > LISTED_IN_MESSAGE ? ` and ${ids.length - LISTED_IN_MESSAGE} more` : '');

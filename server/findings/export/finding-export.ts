@@ -16,23 +16,28 @@ export const FINDING_STATUS_LABELS: Readonly<Record<FindingStatus, string>> = {
   accepted: 'Accepted',
 };
 
-export const FINDING_PRIORITIES = ['high', 'normal', 'low'] as const;
+export const FINDING_PRIORITIES = ['critical', 'high', 'normal', 'low'] as const;
 export type FindingPriority = (typeof FINDING_PRIORITIES)[number];
 
 export const FINDING_PRIORITY_LABELS: Readonly<Record<FindingPriority, string>> = {
+  critical: 'Critical',
   high: 'High',
   normal: 'Normal',
   low: 'Low',
 };
 
-/** Why the finding exists: a failing web, a warning flag raised by the check, or a reviewer's own note. */
-export const FINDING_KINDS = ['failure', 'warning', 'manual'] as const;
+/**
+ * Why the finding exists: a failing web, a web close to capacity, check flags that need an engineer's look, or a
+ * reviewer's own note.
+ */
+export const FINDING_KINDS = ['failure', 'warning', 'flag', 'manual'] as const;
 export type FindingKind = (typeof FINDING_KINDS)[number];
 
 /** Written to BCF as TopicType. */
 export const FINDING_KIND_LABELS: Readonly<Record<FindingKind, string>> = {
   failure: 'Web shear failure',
   warning: 'Check warning',
+  flag: 'Check flags to review',
   manual: 'Manual finding',
 };
 

@@ -1,0 +1,103 @@
+import { MEMBER_IDS } from '../../test/fixtures/bcf/sample-findings';
+import type { FindingStatus } from './finding-fields';
+import { type RunMemberResult, type SyncedFinding, planRunSync } from './finding-sync-plan';
+
+// The rules under test are the product's own (issue 7: one finding per member and kind, carried across runs, Ready to
+// verify when a newer revision passes); member rows are invented.
+const B12 = MEMBER_IDS.beamB12;
+const B14 = MEMBER_IDS.beamB14;
+
+function row(globalId: string, status: RunMemberResult['status'], utilisation: number | null, flags: string[] = []): RunMemberResult {
+  return {
+    globalId,
+    tag: 'B-12',
+    name: 'Beam',
+    storey: 'Level 2',
+    profileName: 'IPE 300',
+    status,
+    utilisation,
+    VEd_kN: utilisation === null ? null : 150 * utilisation,
+    VRd_kN: 150,
+    governingCombination: 'ULS-3',
+    flags,
+  };
+}
+
+function finding(status: FindingStatus, revisionNumber: number, kind: SyncedFinding['kind'] = 'web-shear-fail'): SyncedFinding {
+  return { id: 'f1', memberKey: B12, kind, status, revisionNumber, utilisation: 1.12 };
+}
+
+const run = (revisionNumber: number) => ({ runId: `run-${revisionNumber}`, revisionNumber });
+
+describe('planRunSync', () => {
+  it('raises one finding per member and kind the run shows', () => {
+    const plan = planRunSync(run(1), [row(B12, 'fail', 1.124, ['assumed-grade']), row(B14, 'warning', 0.93), row(MEMBER_IDS.columnC3, 'pass', 0.4)], []);
+    expect(plan.update).toEqual([]);
+    expect(plan.create.map((draft) => [draft.globalId, draft.kind, draft.priority])).toEqual([
+      [B12, 'web-shear-fail', 'high'],
+      [B12, 'flag', 'normal'],
+      [B14, 'web-shear-warning', 'normal'],
+    ]);
+    expect(plan.create[0]).toMatchObject({
+      title: 'Web shear over capacity: B-12',
+      description: '112.4 % utilisation under ULS-3 (VEd 168.6 kN, VRd 150 kN) in the check of model revision 1.',
+      memberLabel: 'B-12 · IPE 300 · Level 2',
+      utilisation: 1.124,
+    });
+    expect(plan.create[1].description).toBe('The check of model revision 1 flagged: assumed-grade.');
+  });
+
+  it('raises nothing for members that were not checked, whatever their flags', () => {
+    expect(planRunSync(run(1), [row(B12, 'not-checked', null, ['assumed-grade']), row(B14, 'not-applicable', null)], [])).toEqual({ create: [], update: [] });
+  });
+
+  it('updates a finding that still fails rather than raising a second one', () => {
+    const plan = planRunSync(run(1), [row(B12, 'fail', 1.2)], [finding('in-progress', 1)]);
+    expect(plan.create).toEqual([]);
+    expect(plan.update).toEqual([{ id: 'f1', utilisation: 1.2, revisionNumber: 1, memberTag: 'B-12', memberLabel: 'B-12 · IPE 300 · Level 2' }]);
+  });
+
+  it.each<[FindingStatus, number, FindingStatus]>([
+    ['open', 2, 'ready-to-verify'],
+    ['in-progress', 2, 'ready-to-verify'],
+    ['resolved', 2, 'ready-to-verify'],
+    ['verified', 2, 'verified'],
+    ['accepted', 2, 'accepted'],
+    ['resolved', 1, 'resolved'],
+  ])('a %s finding whose member passes in revision %i becomes %s', (status, revision, expected) => {
+    const [update] = planRunSync(run(revision), [row(B12, 'pass', 0.7)], [finding(status, 1)]).update;
+    expect(update.status?.to ?? status).toBe(expected);
+    // The revision it was last seen failing in stays, so a later failure still counts as newer.
+    expect(update.revisionNumber).toBe(1);
+  });
+
+  it.each<[FindingStatus, number, FindingStatus]>([
+    ['verified', 1, 'open'],
+    ['ready-to-verify', 2, 'open'],
+    ['resolved', 2, 'open'],
+    ['resolved', 1, 'resolved'],
+    ['accepted', 2, 'accepted'],
+    ['in-progress', 2, 'in-progress'],
+  ])('a %s finding whose member fails again in revision %i becomes %s', (status, revision, expected) => {
+    const [update] = planRunSync(run(revision), [row(B12, 'fail', 1.3)], [finding(status, 1)]).update;
+    expect(update.status?.to ?? status).toBe(expected);
+    expect(update.revisionNumber).toBe(revision);
+  });
+
+  it('does not clear a warning finding when the member now fails', () => {
+    const plan = planRunSync(run(2), [row(B12, 'fail', 1.05)], [finding('open', 1, 'web-shear-warning')]);
+    expect(plan.update).toEqual([]);
+    expect(plan.create.map((draft) => draft.kind)).toEqual(['web-shear-fail']);
+  });
+
+  it('leaves findings alone for runs of older revisions and for members the run did not check', () => {
+    expect(planRunSync(run(1), [row(B12, 'pass', 0.5)], [finding('open', 2)]).update).toEqual([]);
+    expect(planRunSync(run(3), [row(B12, 'not-checked', null)], [finding('open', 2)]).update).toEqual([]);
+    expect(planRunSync(run(3), [], [finding('open', 2)]).update).toEqual([]);
+  });
+
+  it('clears a flag finding once the flags to review are gone', () => {
+    const [update] = planRunSync(run(2), [row(B12, 'pass', 0.5, ['catalogue-section'])], [finding('open', 1, 'flag')]).update;
+    expect(update.status).toEqual({ from: 'open', to: 'ready-to-verify' });
+  });
+});

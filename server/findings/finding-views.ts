@@ -1,0 +1,137 @@
+/** What the findings API answers: plain JSON, never entities. */
+import type { FindingCamera, FindingViewpoint } from './export/finding-export';
+import type { FindingChange, ChangeSource } from './finding-change.entity';
+import type { FindingComment } from './finding-comment.entity';
+import type { FindingKind, FindingPriority, FindingStatus } from './finding-fields';
+import type { Finding } from './finding.entity';
+import type { SavedViewpoint } from './saved-viewpoint.entity';
+
+export interface PersonRef {
+  id: string | null;
+  name: string;
+}
+
+export interface FindingView {
+  id: string;
+  guid: string;
+  number: number;
+  kind: FindingKind;
+  title: string;
+  description: string;
+  status: FindingStatus;
+  priority: FindingPriority;
+  assignee: { id: string; name: string; email: string } | null;
+  dueDate: string | null;
+  labels: string[];
+  memberGlobalIds: string[];
+  memberTag: string | null;
+  runId: string | null;
+  utilisation: number | null;
+  justification: string | null;
+  viewpoint: FindingViewpoint | null;
+  hasSnapshot: boolean;
+  /** Null when a check run raised it. */
+  createdBy: PersonRef | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface CommentView {
+  id: string;
+  guid: string;
+  author: PersonRef;
+  text: string;
+  createdAt: string;
+}
+
+export interface ChangeView {
+  id: string;
+  /** `{id: null, name: 'System'}` for changes a check run made. */
+  actor: PersonRef;
+  source: ChangeSource;
+  field: string;
+  from: string | null;
+  to: string | null;
+  at: string;
+}
+
+export interface FindingDetailView {
+  finding: FindingView;
+  comments: CommentView[];
+  history: ChangeView[];
+  /** The statuses the caller may move this finding to now. */
+  allowedTransitions: FindingStatus[];
+}
+
+export const SYSTEM_ACTOR: PersonRef = { id: null, name: 'System' };
+
+/** Expects `assignee` and `createdBy` loaded. */
+export function toFindingView(finding: Finding): FindingView {
+  const { assignee, createdBy } = finding;
+  return {
+    id: finding.id,
+    guid: finding.guid,
+    number: finding.number,
+    kind: finding.kind,
+    title: finding.title,
+    description: finding.description,
+    status: finding.status,
+    priority: finding.priority,
+    assignee: assignee ? { id: assignee.id, name: assignee.name, email: assignee.email } : null,
+    dueDate: finding.dueDate,
+    labels: finding.labels,
+    memberGlobalIds: finding.memberGlobalIds,
+    memberTag: finding.memberTag,
+    runId: finding.runId,
+    utilisation: finding.utilisation,
+    justification: finding.justification,
+    viewpoint: finding.viewpoint,
+    hasSnapshot: finding.snapshotKey !== null,
+    createdBy: createdBy ? { id: createdBy.id, name: createdBy.name } : null,
+    createdAt: finding.createdAt.toISOString(),
+    updatedAt: finding.updatedAt.toISOString(),
+  };
+}
+
+/** Expects `author` loaded; imported comments by people without an account show their address. */
+export function toCommentView(comment: FindingComment): CommentView {
+  const author = comment.author ? { id: comment.author.id, name: comment.author.name } : { id: null, name: comment.authorEmail };
+  return { id: comment.id, guid: comment.guid, author, text: comment.text, createdAt: comment.createdAt.toISOString() };
+}
+
+/** Expects `actor` loaded. */
+export function toChangeView(change: FindingChange): ChangeView {
+  return {
+    id: change.id,
+    actor: change.actor ? { id: change.actor.id, name: change.actor.name } : SYSTEM_ACTOR,
+    source: change.source,
+    field: change.field,
+    from: change.fromValue,
+    to: change.toValue,
+    at: change.at.toISOString(),
+  };
+}
+
+export interface SavedViewpointView {
+  id: string;
+  name: string;
+  camera: FindingCamera;
+  visibleGlobalIds: string[] | null;
+  selectedGlobalIds: string[];
+  sectionPlane: SavedViewpoint['sectionPlane'];
+  createdById: string | null;
+  createdAt: string;
+}
+
+export function toSavedViewpointView(viewpoint: SavedViewpoint): SavedViewpointView {
+  return {
+    id: viewpoint.id,
+    name: viewpoint.name,
+    camera: viewpoint.camera,
+    visibleGlobalIds: viewpoint.visibleGlobalIds,
+    selectedGlobalIds: viewpoint.selectedGlobalIds,
+    sectionPlane: viewpoint.sectionPlane,
+    createdById: viewpoint.createdById,
+    createdAt: viewpoint.createdAt.toISOString(),
+  };
+}
