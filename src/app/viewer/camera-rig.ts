@@ -112,14 +112,15 @@ export class CameraRig {
     this.controls.update();
   }
 
-  /** Frames a sphere, looking along `direction` (three.js axes; default: the current direction). */
+  /** Frames a sphere, looking along `direction` with `up` at the top (three.js axes; default: as now). */
   frame(sphere: Sphere, animate: boolean, direction?: Vector3, up?: Vector3): void {
     const look = direction ? _direction.copy(direction).normalize() : this.active.getWorldDirection(_direction);
     const radius = Math.max(sphere.radius, 0.05) * FRAMING_MARGIN;
     const distance = fitDistance_m(radius, this.perspective.fov, this.aspectRatio);
     const toTarget = sphere.center.clone();
     const toPosition = toTarget.clone().addScaledVector(look, -distance);
-    this.nudgeOffVertical(toPosition, look, up ?? _up.set(0, 0, -1), distance);
+    // Without a requested up, the screen keeps its current up (a turned plan stays turned).
+    this.nudgeOffVertical(toPosition, look, up ?? _up.set(0, 1, 0).applyQuaternion(this.active.quaternion), distance);
     const toHeight = fitHeight_m(radius, this.aspectRatio);
     this.moveTo(toPosition, toTarget, toHeight, animate);
   }
