@@ -485,13 +485,18 @@ export class ViewerEngine {
    * ViewpointError and leaves the view as it was. Clears the member filter: the viewpoint says what is visible.
    */
   setViewpoint(viewpoint: ViewerViewpoint): void {
-    const pose = ifcCameraToPose(viewpoint.camera, this.modelOffset_m);
+    const pose = viewpoint.camera ? ifcCameraToPose(viewpoint.camera, this.modelOffset_m) : null;
     const planes = viewpoint.clippingPlanes.map((plane) => sectionPlaneFromIfc(plane, this.modelOffset_m));
     const rig = this.requireRig();
 
-    const direction = new Vector3(...pose.direction);
-    const ahead = _point.copy(this.boundingSphere.center).sub(new Vector3(...pose.position)).dot(direction);
-    rig.setPose(pose, Math.max(ahead, this.boundingSphere.radius * 0.05));
+    if (pose !== null) {
+      const direction = new Vector3(...pose.direction);
+      const ahead = _point.copy(this.boundingSphere.center).sub(new Vector3(...pose.position)).dot(direction);
+      rig.setPose(pose, Math.max(ahead, this.boundingSphere.radius * 0.05));
+    } else if (viewpoint.selectedGlobalIds.length > 0) {
+      // Without a camera, the selected members are what the viewpoint is about.
+      this.fitTo(viewpoint.selectedGlobalIds, false);
+    }
 
     this.visibility.restore(viewpoint.visibility.defaultVisible, viewpoint.visibility.exceptionGlobalIds);
     // BCF allows several planes; the view keeps one, the first.

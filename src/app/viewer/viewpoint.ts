@@ -44,8 +44,9 @@ export interface ViewerVisibility {
   exceptionGlobalIds: string[];
 }
 
+/** The same fields as the findings API's viewpoint; a viewpoint raised by a check run may come without camera. */
 export interface ViewerViewpoint {
-  camera: ViewerCamera;
+  camera?: ViewerCamera;
   selectedGlobalIds: string[];
   visibility: ViewerVisibility;
   clippingPlanes: ViewerClippingPlane[];
