@@ -13,6 +13,7 @@ import { requestLogger } from './http/request-logger';
 import { securityHeaders } from './http/security-headers';
 import { webClientRouter } from './http/web-client';
 import { outboxRouter } from './outbox/outbox.router';
+import { modelFeatureRouter } from './models/model-feature.router';
 import { membersRouter } from './projects/members.router';
 import { projectsRouter } from './projects/projects.router';
 import { usersRouter } from './users/users.router';
@@ -32,6 +33,7 @@ function featureRouters(ctx: AppContext, deps: ApiDeps): [path: string, router: 
     ['/users', usersRouter(ctx)],
     ['/projects', projectsRouter(ctx)],
     ['/projects/:projectId/members', membersRouter(ctx)],
+    ['/projects/:projectId', modelFeatureRouter(ctx)],
     ...(ctx.config.fakeSmtp ? ([['/dev', outboxRouter(ctx.dataSource)]] as [string, Router][]) : []),
   ];
 }

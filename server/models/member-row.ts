@@ -1,0 +1,84 @@
+/**
+ * The flat row of a member that the members table shows, sorts and filters: what the ingest stores as columns beside
+ * the whole MemberRecord. Lengths in millimetres, fy in MPa, as in the record.
+ */
+import type { Fabrication } from '../engine/section';
+import type { MemberFlag, MemberProfile, MemberRecord, MemberStatus } from '../ifc/model-read-result';
+
+export const MEMBER_STATUSES: readonly MemberStatus[] = ['ok', 'not-applicable', 'flagged'];
+
+export interface MemberRow {
+  globalId: string;
+  expressId: number;
+  ifcClass: string;
+  name: string | null;
+  tag: string | null;
+  storey: string | null;
+  status: MemberStatus;
+  reason: string | null;
+  profileName: string | null;
+  profileSource: MemberProfile['source'] | null;
+  profileType: string | null;
+  fabrication: Fabrication | null;
+  depth_mm: number | null;
+  webThickness_mm: number | null;
+  flangeWidth_mm: number | null;
+  flangeThickness_mm: number | null;
+  grade: string | null;
+  fy_MPa: number | null;
+  gradeAssumed: boolean | null;
+  length_mm: number | null;
+  flags: MemberFlag[];
+}
+
+/** Column order of MemberRow, shared by the worker's INSERT and the list query's SELECT. */
+export const MEMBER_ROW_COLUMNS = [
+  'globalId',
+  'expressId',
+  'ifcClass',
+  'name',
+  'tag',
+  'storey',
+  'status',
+  'reason',
+  'profileName',
+  'profileSource',
+  'profileType',
+  'fabrication',
+  'depth_mm',
+  'webThickness_mm',
+  'flangeWidth_mm',
+  'flangeThickness_mm',
+  'grade',
+  'fy_MPa',
+  'gradeAssumed',
+  'length_mm',
+  'flags',
+] as const satisfies readonly (keyof MemberRow)[];
+
+export function memberRowOf(record: MemberRecord): MemberRow {
+  const profile = record.profile;
+  return {
+    globalId: record.globalId,
+    expressId: record.expressId,
+    ifcClass: record.ifcClass,
+    name: record.name,
+    tag: record.tag,
+    storey: record.storey,
+    status: record.status,
+    reason: record.reason ?? null,
+    profileName: profile?.name || null,
+    profileSource: profile?.source ?? null,
+    profileType: profile?.ifcType ?? null,
+    fabrication: profile?.fabrication ?? null,
+    depth_mm: profile?.depth_mm ?? null,
+    webThickness_mm: profile?.webThickness_mm ?? null,
+    flangeWidth_mm: profile?.topFlange.width_mm ?? null,
+    flangeThickness_mm: profile?.topFlange.thickness_mm ?? null,
+    grade: record.material?.grade ?? null,
+    fy_MPa: record.material?.fy_MPa ?? null,
+    gradeAssumed: record.material ? record.material.assumed : null,
+    length_mm: record.length_mm,
+    flags: record.flags,
+  };
+}

@@ -1,0 +1,124 @@
+import type { DataSource, SelectQueryBuilder } from 'typeorm';
+import { NotFoundError, ValidationError } from '../http/errors';
+import type { MemberRecord } from '../ifc/model-read-result';
+import type { MemberListQuery } from './member-list-query';
+import { MEMBER_ROW_COLUMNS, type MemberRow } from './member-row';
+import { ModelMember } from './model-member.entity';
+import { ModelMemberRecord } from './model-member-record.entity';
+import { loadMemberRecords } from './model-queries';
+import { ModelRevision } from './model-revision.entity';
+import { type RevisionComparison, compareRevisions } from './revision-compare';
+import { revisionNotFound, revisionNotReady } from './revision-errors';
+import { type RevisionView, toRevisionView } from './revision-view';
+
+export interface MemberPage {
+  total: number;
+  members: MemberRow[];
+}
+
+export interface MemberFacets {
+  storeys: string[];
+  profiles: string[];
+}
+
+export interface ComparisonView extends RevisionComparison {
+  from: RevisionView;
+  to: RevisionView;
+}
+
+const naturalOrder = new Intl.Collator('en', { numeric: true, sensitivity: 'base' }).compare;
+
+/** `%`, `_` and the escape character itself match literally in a LIKE search. */
+function likePattern(text: string): string {
+  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+function toRow(member: ModelMember): MemberRow {
+  return Object.fromEntries(MEMBER_ROW_COLUMNS.map((column) => [column, member[column]])) as unknown as MemberRow;
+}
+
+/** The members of ready revisions: the sortable, filterable table, facets, one member's record, and comparisons. */
+export class ModelMembersService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async list(projectId: string, revisionId: string, query: MemberListQuery): Promise<MemberPage> {
+    await this.readyRevision(projectId, revisionId);
+    const filtered = this.filtered(revisionId, query);
+    const [total, members] = await Promise.all([
+      filtered.getCount(),
+      filtered
+        .clone()
+        .select(['m.revisionId', ...MEMBER_ROW_COLUMNS.map((column) => `m.${column}`)])
+        // With a text search few rows match: `+` keeps SQLite from walking the whole sort index to find them.
+        .orderBy(`${query.q === undefined ? '' : '+'}m.${query.sort}`, query.dir === 'asc' ? 'ASC' : 'DESC')
+        // Ties (same profile, same storey…) keep file order, so pages never overlap.
+        .addOrderBy('m.expressId', 'ASC')
+        .offset(query.page * query.pageSize)
+        .limit(query.pageSize)
+        .getMany(),
+    ]);
+    return { total, members: members.map(toRow) };
+  }
+
+  async facets(projectId: string, revisionId: string): Promise<MemberFacets> {
+    await this.readyRevision(projectId, revisionId);
+    const distinct = async (column: 'storey' | 'profileName'): Promise<string[]> => {
+      const rows = await this.members()
+        .createQueryBuilder('m')
+        .select(`DISTINCT m.${column}`, 'value')
+        .where('m.revisionId = :revisionId', { revisionId })
+        .andWhere(`m.${column} IS NOT NULL`)
+        .getRawMany<{ value: string }>();
+      return rows.map((r) => r.value).sort(naturalOrder);
+    };
+    const [storeys, profiles] = await Promise.all([distinct('storey'), distinct('profileName')]);
+    return { storeys, profiles };
+  }
+
+  /** The whole record; a GlobalId written twice in one file gives its first member. */
+  async detail(projectId: string, revisionId: string, globalId: string): Promise<MemberRecord> {
+    await this.readyRevision(projectId, revisionId);
+    const member = await this.dataSource
+      .getRepository(ModelMemberRecord)
+      .createQueryBuilder('r')
+      .select('r.record', 'record')
+      .innerJoin(ModelMember, 'm', 'm.revisionId = r.revisionId AND m.expressId = r.expressId')
+      .where('m.revisionId = :revisionId AND m.globalId = :globalId', { revisionId, globalId })
+      .orderBy('m.expressId', 'ASC')
+      .getRawOne<{ record: string }>();
+    if (!member) throw new NotFoundError(`No member with GlobalId ${globalId} in this revision.`, { code: 'member_not_found' });
+    return JSON.parse(member.record) as MemberRecord;
+  }
+
+  async compare(projectId: string, fromId: string, toId: string): Promise<ComparisonView> {
+    if (fromId === toId) throw new ValidationError('Choose two different revisions to compare.', { code: 'same_revision' });
+    const [from, to] = [await this.readyRevision(projectId, fromId), await this.readyRevision(projectId, toId)];
+    const [before, after] = [await loadMemberRecords(this.dataSource, fromId), await loadMemberRecords(this.dataSource, toId)];
+    return { from: toRevisionView(from), to: toRevisionView(to), ...compareRevisions(before, after) };
+  }
+
+  private filtered(revisionId: string, query: MemberListQuery): SelectQueryBuilder<ModelMember> {
+    const builder = this.members().createQueryBuilder('m').where('m.revisionId = :revisionId', { revisionId });
+    if (query.status?.length) builder.andWhere('m.status IN (:...status)', { status: query.status });
+    if (query.storey !== undefined) builder.andWhere('m.storey = :storey', { storey: query.storey });
+    if (query.profile !== undefined) builder.andWhere('m.profileName = :profile', { profile: query.profile });
+    if (query.q !== undefined) {
+      builder.andWhere(
+        "(m.name LIKE :q ESCAPE '\\' OR m.tag LIKE :q ESCAPE '\\' OR m.globalId LIKE :q ESCAPE '\\' OR m.profileName LIKE :q ESCAPE '\\')",
+        { q: likePattern(query.q) },
+      );
+    }
+    return builder;
+  }
+
+  private async readyRevision(projectId: string, revisionId: string): Promise<ModelRevision> {
+    const revision = await this.dataSource.getRepository(ModelRevision).findOne({ where: { id: revisionId, projectId }, relations: { uploadedBy: true } });
+    if (!revision) throw revisionNotFound();
+    if (revision.status !== 'ready') throw revisionNotReady(revision);
+    return revision;
+  }
+
+  private members() {
+    return this.dataSource.getRepository(ModelMember);
+  }
+}
