@@ -2,39 +2,35 @@ import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
 import type { ColumnMapping, MemberKeyKind } from '../../../server/results/column-mapping';
+import type { MatchingSummary } from '../../../server/results/matching-summary';
 import type { MatchMethod } from '../../../server/results/member-matching';
 
-export type { ColumnMapping, MemberKeyKind, MatchMethod };
+export type { ColumnMapping, MatchingSummary, MatchMethod, MemberKeyKind };
+
+// Client mirrors of the results API's views (server/results/result-views.ts, result-matching.service.ts,
+// mapping-template.service.ts, server/models/revision-view.ts): those files reach entity classes, which the client
+// build must not compile.
 
 /** `POST …/results/uploads`: a stored file waiting for its mapping, with the head of the chosen sheet. */
 export interface ResultsUpload {
   id: string;
   fileName: string;
   format: 'csv' | 'xlsx';
+  sizeBytes: number;
+  sha256: string;
   /** Sheet names of a workbook; null for CSV. */
   sheets: string[] | null;
   /** The sheet previewed; null when a workbook has several and the user must pick one. */
   sheet: string | null;
   delimiter: string | null;
+  decimalSeparator: '.' | ',';
+  headerRow: number | null;
   headers: string[];
   /** The first rows, as text. */
   rows: string[][];
   guessedMapping: Partial<ColumnMapping>;
   /** Required mapping fields the header did not reveal. */
   missingMapping: string[];
-}
-
-export interface MatchingSummary {
-  /** Distinct member keys in the results. */
-  keys: number;
-  matched: number;
-  ambiguous: number;
-  unmatchedResults: number;
-  membersWithoutResults: number;
-  byMethod: Record<MatchMethod, number>;
-  likelyOtherModel: boolean;
-  /** Set when almost nothing matched (probably a file for another model). */
-  warning: string | null;
 }
 
 export interface ResultSet {
@@ -45,6 +41,7 @@ export interface ResultSet {
   sheet: string | null;
   sha256: string;
   rowCount: number;
+  /** Distinct member keys. */
   memberKeys: number;
   combinations: string[];
   forceUnit: string;
@@ -83,6 +80,16 @@ export interface MappingTemplate {
   id: string;
   name: string;
   mapping: ColumnMapping;
+  createdAt: string;
+}
+
+/** What the import form and the check dialog read of a model revision (`GET …/models`). */
+export interface RevisionChoice {
+  id: string;
+  number: number;
+  fileName: string;
+  status: 'queued' | 'ingesting' | 'ready' | 'failed';
+  uploadedAt: string;
 }
 
 /** One refused row of an import (`422 invalid_rows`): the row number a spreadsheet shows, the file's column. */
@@ -109,14 +116,7 @@ export interface RowErrors {
   stoppedEarly: boolean;
 }
 
-/** A model revision as the import form offers it (`GET …/models`). */
-export interface RevisionChoice {
-  id: string;
-  number: number;
-  fileName: string;
-  status: 'queued' | 'ingesting' | 'ready' | 'failed';
-  uploadedAt: string;
-}
+
 
 /** Writes to `/api/projects/:projectId/results…`; pages read with httpResource. */
 @Injectable({ providedIn: 'root' })

@@ -4,7 +4,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { type SectionProperties, sectionProperties } from '../../../../server/engine/section-properties';
-import { shearStressProfile } from '../../../../server/engine/shear-stress';
 import { formatNumber } from '../../../../server/engine/trace';
 import { percentText, STANDARD_LABELS } from '../../../../server/reports/report-format';
 import { errorMessage } from '../../core/api-error';
@@ -56,11 +55,12 @@ export class CalculationSheet {
     return sheet ? STANDARD_LABELS[sheet.standard] : '';
   });
 
+  // The outline is traced from the engine's width function, which JSON cannot carry: rebuilt here from the input.
   private readonly properties = computed((): SectionProperties | string | null => {
-    const sheet = this.sheet();
-    if (!sheet) return null;
+    const section = this.sheet()?.section;
+    if (!section) return null;
     try {
-      return sectionProperties(sheet.section.input);
+      return sectionProperties(section.input);
     } catch (error) {
       return error instanceof Error ? error.message : 'The section cannot be drawn.';
     }
@@ -71,26 +71,20 @@ export class CalculationSheet {
   });
 
   protected readonly figures = computed((): Figures | null => {
-    const sheet = this.sheet();
+    const stress = this.sheet()?.stress;
     const props = this.properties();
-    if (!sheet || props === null || typeof props === 'string') return null;
+    if (!stress || props === null || typeof props === 'string') return null;
     const frame = figureFrame(props);
-    const shear_N = (sheet.governing?.VEd_kN ?? 0) * 1000;
     return {
       section: sectionFigure(props, frame),
       stress: stressFigure(
         {
-          samples: sheet.stress.samples,
-          tauMax_MPa: sheet.stress.tauMax_MPa,
-          tauMaxAt_mm: sheet.stress.at_mm,
-          webAverage:
-            shear_N !== 0
-              ? {
-                  tau_MPa: shearStressProfile(props, shear_N).webAverageClear_MPa,
-                  from_mm: props.bottomJunctionFromBottom_mm,
-                  to_mm: props.topJunctionFromBottom_mm,
-                }
-              : undefined,
+          samples: stress.samples,
+          tauMax_MPa: stress.tauMax_MPa,
+          tauMaxAt_mm: stress.at_mm,
+          junctions: [stress.junctions.top, stress.junctions.bottom],
+          webAverage: { tau_MPa: stress.webAverageClear_MPa, from_mm: props.bottomJunctionFromBottom_mm, to_mm: props.topJunctionFromBottom_mm },
+          elasticLimit_MPa: stress.elasticLimit_MPa,
         },
         frame,
       ),

@@ -2,7 +2,7 @@ import { expectClose } from '../../../../server/engine/expect-close';
 import { sectionProperties } from '../../../../server/engine/section-properties';
 import { shearStressProfile } from '../../../../server/engine/shear-stress';
 import { iSection } from '../../../../server/engine/test-sections';
-import { figureFrame, sectionFigure, stressFigure, stressJumps } from './sheet-figures';
+import { figureFrame, sectionFigure, stressFigure } from './sheet-figures';
 
 // IPE 300: h 300, b 150, tw 7.1, tf 10.7, r 15 mm (EN 10365 dimensions).
 const IPE_300 = iSection(300, 7.1, [150, 10.7, 15]);
@@ -15,7 +15,7 @@ function numbers(viewBox: string): number[] {
   return viewBox.split(' ').map(Number);
 }
 
-function stressOf(input: typeof GERE_BEAM, shear_N: number) {
+function stressOf(input: typeof GERE_BEAM, shear_N: number, elasticLimit_MPa?: number) {
   const props = sectionProperties(input);
   const profile = shearStressProfile(props, shear_N);
   const frame = figureFrame(props);
@@ -24,7 +24,9 @@ function stressOf(input: typeof GERE_BEAM, shear_N: number) {
       samples: profile.points.map((p) => ({ y_mm: p.y_mm, tau_MPa: p.tau_MPa })),
       tauMax_MPa: profile.tauMax_MPa,
       tauMaxAt_mm: profile.tauMaxAt_mm,
+      junctions: [profile.topJunction, profile.bottomJunction],
       webAverage: { tau_MPa: profile.webAverageClear_MPa, from_mm: props.bottomJunctionFromBottom_mm, to_mm: props.topJunctionFromBottom_mm },
+      elasticLimit_MPa,
     },
     frame,
   );
@@ -110,28 +112,23 @@ describe('stress figure', () => {
 
   it('draws the web average V/(hw·tw) over the clear web as a separate mark', () => {
     const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
-    expect(figure.webAverage?.label).toBe('V/(hw·tw) = 27.41');
-    expect(figure.webAverage?.segment.y1).toBeCloseTo(20, 6);
-    expect(figure.webAverage?.segment.y2).toBeCloseTo(400, 6);
+    expect(figure.marks.map((mark) => mark.label)).toEqual(['V/(hw·tw) = 27.41']);
+    expect(figure.marks[0].segment.y1).toBeCloseTo(20, 6);
+    expect(figure.marks[0].segment.y2).toBeCloseTo(400, 6);
+  });
+
+  it('adds the limit of the elastic check over the whole depth when the standard has one, and widens the axis for it', () => {
+    // S235 with γM0 = 1.00: 235/√3 = 135.7 MPa (EN 1993-1-1 (6.19)).
+    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N, 235 / Math.sqrt(3));
+    const limit = figure.marks.find((mark) => mark.key === 'elastic-limit')!;
+    expect(limit.label).toBe('fy/(√3·γM0) = 135.7');
+    expect([limit.segment.y1, limit.segment.y2]).toEqual([0, 420]);
+    expect(figure.ticks.map((tick) => tick.label)).toEqual(['0', '50', '100', '150']);
   });
 
   it('closes the filled area against the τ = 0 axis', () => {
     const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
     expect(figure.areaPath.startsWith('M0,420L')).toBe(true);
     expect(figure.areaPath.endsWith('L0,0Z')).toBe(true);
-  });
-});
-
-describe('stressJumps', () => {
-  it('finds steps only where one level carries two different stresses', () => {
-    const samples = [
-      { y_mm: 0, tau_MPa: 0 },
-      { y_mm: 10, tau_MPa: 1 },
-      { y_mm: 10, tau_MPa: 12 },
-      { y_mm: 50, tau_MPa: 15 },
-      { y_mm: 50, tau_MPa: 15.1 },
-    ];
-    expect(stressJumps(samples)).toEqual([{ y_mm: 10, from_MPa: 12, to_MPa: 1 }]);
-    expect(stressJumps([])).toEqual([]);
   });
 });

@@ -10,7 +10,6 @@
 import type { SectionProperties } from '../../../../server/engine/section-properties';
 import { formatNumber } from '../../../../server/engine/trace';
 import { drawingScale, niceTicks, PT_PER_MM, sectionOutline_mm } from '../../../../server/reports/section-outline';
-import type { StressSample } from '../checks-api';
 
 /** Paper room for the section on an A4 sheet beside the plot (mm). */
 export const SECTION_BOX_MM = { width: 70, height: 125 } as const;
@@ -77,9 +76,17 @@ export interface StressFigure {
   neutralAxis: Segment;
   /** Each web–flange jump: a horizontal step in the curve, labelled with both stresses. */
   jumps: { segment: Segment; label: string; labelX: number; labelY: number }[];
-  /** V/(hw·tw) over the clear web: a rule of thumb, never the code check. */
-  webAverage: { segment: Segment; label: string; labelX: number; labelY: number } | null;
+  /** Vertical marks: V/(hw·tw) over the clear web (a rule of thumb, never the code check) and the elastic limit. */
+  marks: StressMark[];
   textSize: number;
+}
+
+export interface StressMark {
+  key: 'web-average' | 'elastic-limit';
+  segment: Segment;
+  label: string;
+  labelX: number;
+  labelY: number;
 }
 
 const round = (value: number): number => Math.round(value * 1000) / 1000;
@@ -227,27 +234,27 @@ function filletLeader(props: SectionProperties, frame: FigureFrame): DimensionLi
   };
 }
 
-/** Consecutive samples at one level with different stresses: the jump at a change of width. */
-export function stressJumps(samples: readonly StressSample[]): { y_mm: number; from_MPa: number; to_MPa: number }[] {
-  const jumps: { y_mm: number; from_MPa: number; to_MPa: number }[] = [];
-  for (let i = 1; i < samples.length; i++) {
-    const a = samples[i - 1];
-    const b = samples[i];
-    const sameLevel = Math.abs(a.y_mm - b.y_mm) < 1e-6;
-    const larger = Math.max(a.tau_MPa, b.tau_MPa);
-    if (sameLevel && larger > 0 && Math.abs(a.tau_MPa - b.tau_MPa) > 0.05 * larger) {
-      jumps.push({ y_mm: a.y_mm, from_MPa: Math.max(a.tau_MPa, b.tau_MPa), to_MPa: Math.min(a.tau_MPa, b.tau_MPa) });
-    }
-  }
-  return jumps;
+export interface StressSample {
+  y_mm: number;
+  tau_MPa: number;
+}
+
+/** The stress just inside the web and just inside the flange at one web–flange junction. */
+export interface JunctionJump {
+  level_mm: number;
+  webSide_MPa: number;
+  flangeSide_MPa: number;
 }
 
 export interface StressFigureInput {
   samples: readonly StressSample[];
   tauMax_MPa: number;
   tauMaxAt_mm: number;
-  /** Levels bounding the clear web and the average stress over it, when known. */
-  webAverage?: { tau_MPa: number; from_mm: number; to_mm: number };
+  junctions: readonly JunctionJump[];
+  /** V/(hw·tw) and the levels bounding the clear web. */
+  webAverage: { tau_MPa: number; from_mm: number; to_mm: number };
+  /** EN 1993-1-1 (6.19): fy/(√3·γM0); absent for AISC. */
+  elasticLimit_MPa?: number;
 }
 
 /** τ(y) beside the section: same frame, τ to the right in MPa on a round-numbered axis. */
@@ -256,7 +263,7 @@ export function stressFigure(data: StressFigureInput, frame: FigureFrame): Stres
   const plotWidth = PLOT_WIDTH_MM * n;
   const left = -PLOT_MARGIN_MM.left * n;
   const width = (PLOT_MARGIN_MM.left + PLOT_WIDTH_MM + PLOT_MARGIN_MM.right) * n;
-  const largest = Math.max(data.tauMax_MPa, data.webAverage?.tau_MPa ?? 0, ...data.samples.map((sample) => sample.tau_MPa));
+  const largest = Math.max(data.tauMax_MPa, data.elasticLimit_MPa ?? 0, ...data.samples.map((sample) => sample.tau_MPa));
   const ticks = niceTicks(largest * 1.05, 4);
   const axisMax = ticks[ticks.length - 1] || 1;
   const x = (tau_MPa: number): number => (tau_MPa / axisMax) * plotWidth;
@@ -265,14 +272,34 @@ export function stressFigure(data: StressFigureInput, frame: FigureFrame): Stres
   const gap = 1.5 * n;
   const d = frame.depth_mm;
 
+  // The samples hold both sides of each junction at one level, so the curve steps there.
   const points = data.samples.map((sample) => point(x(sample.tau_MPa), y(sample.y_mm)));
   const curvePath = points.length ? `M${points.join('L')}` : '';
-  const areaPath = points.length ? `M${point(0, y(data.samples[0].y_mm))}L${points.join('L')}L${point(0, y(data.samples[data.samples.length - 1].y_mm))}Z` : '';
+  const first = data.samples[0];
+  const last = data.samples[data.samples.length - 1];
+  const areaPath = points.length ? `M${point(0, y(first.y_mm))}L${points.join('L')}L${point(0, y(last.y_mm))}Z` : '';
 
-  const peakX = x(data.tauMax_MPa);
   const peakY = y(data.tauMaxAt_mm);
   const labelColumn = plotWidth + 3 * n;
-  const average = data.webAverage;
+  const { webAverage } = data;
+  const marks: StressMark[] = [
+    {
+      key: 'web-average',
+      segment: { x1: x(webAverage.tau_MPa), y1: y(webAverage.to_mm), x2: x(webAverage.tau_MPa), y2: y(webAverage.from_mm) },
+      label: `V/(hw·tw) = ${formatNumber(webAverage.tau_MPa)}`,
+      labelX: labelColumn,
+      labelY: peakY + 2.5 * text,
+    },
+  ];
+  if (data.elasticLimit_MPa !== undefined) {
+    marks.push({
+      key: 'elastic-limit',
+      segment: { x1: x(data.elasticLimit_MPa), y1: y(d), x2: x(data.elasticLimit_MPa), y2: y(0) },
+      label: `fy/(√3·γM0) = ${formatNumber(data.elasticLimit_MPa)}`,
+      labelX: labelColumn,
+      labelY: peakY + 4 * text,
+    });
+  }
 
   return {
     viewBox: [left, frame.viewTop, width, frame.viewHeight].map(round).join(' '),
@@ -286,22 +313,15 @@ export function stressFigure(data: StressFigureInput, frame: FigureFrame): Stres
     ticks: ticks.map((tick) => ({ x: round(x(tick)), label: formatNumber(tick) })),
     tickY: y(0) + gap + text,
     axisLabel: { x: plotWidth, y: y(0) + 2 * (gap + text), text: 'τ(y) [MPa]' },
-    peak: { x: round(peakX), y: round(peakY), label: `τmax = ${formatNumber(data.tauMax_MPa)} MPa` },
+    peak: { x: round(x(data.tauMax_MPa)), y: round(peakY), label: `τmax = ${formatNumber(data.tauMax_MPa)} MPa` },
     neutralAxis: { x1: 0, y1: peakY, x2: labelColumn - gap, y2: peakY },
-    jumps: stressJumps(data.samples).map((jump) => ({
-      segment: { x1: x(jump.to_MPa), y1: y(jump.y_mm), x2: x(jump.from_MPa), y2: y(jump.y_mm) },
-      label: `${formatNumber(jump.from_MPa)} → ${formatNumber(jump.to_MPa)}`,
+    jumps: data.junctions.map((junction) => ({
+      segment: { x1: x(junction.flangeSide_MPa), y1: y(junction.level_mm), x2: x(junction.webSide_MPa), y2: y(junction.level_mm) },
+      label: `${formatNumber(junction.webSide_MPa)} → ${formatNumber(junction.flangeSide_MPa)}`,
       labelX: labelColumn,
-      labelY: y(jump.y_mm) + text / 3,
+      labelY: y(junction.level_mm) + text / 3,
     })),
-    webAverage: average
-      ? {
-          segment: { x1: x(average.tau_MPa), y1: y(average.to_mm), x2: x(average.tau_MPa), y2: y(average.from_mm) },
-          label: `V/(hw·tw) = ${formatNumber(average.tau_MPa)}`,
-          labelX: x(average.tau_MPa) - gap,
-          labelY: y((average.from_mm + average.to_mm) / 2) + 4 * text,
-        }
-      : null,
+    marks,
     textSize: text,
   };
 }

@@ -123,6 +123,7 @@ export class RunResults {
       count('not-applicable', 'Not applicable', summary.notApplicable, 'not-applicable'),
       { key: 'max', label: 'Highest utilisation', value: summary.maxUtilisation === null ? '—' : percentText(summary.maxUtilisation) },
       count('unmatched', 'Result keys without a member', summary.unmatchedResults),
+      ...(summary.ambiguousResults > 0 ? [count('ambiguous', 'Result keys with several members', summary.ambiguousResults)] : []),
     ];
   });
 

@@ -21,9 +21,13 @@ const csvUpload: ResultsUpload = {
   id: 'up-1',
   fileName: 'canopy-shears.csv',
   format: 'csv',
+  sizeBytes: 2048,
+  sha256: 'c'.repeat(64),
   sheets: null,
   sheet: null,
   delimiter: ';',
+  decimalSeparator: '.',
+  headerRow: 1,
   headers: ['Bar', 'Combo', 'Station [m]', 'V [kN]'],
   rows: [
     ['G-101', 'ULS-1', '0', '212.5'],
