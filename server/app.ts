@@ -4,6 +4,7 @@ import { authRouter } from './auth/auth.router';
 import { AuthService } from './auth/auth.service';
 import { type PassportInstance, createPassport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
+import { checkRunsRouter } from './checks/check-runs.router';
 import { usesTls } from './config';
 import type { AppContext } from './http/app-context';
 import { type CsrfProtection, createCsrfProtection } from './http/csrf';
@@ -16,6 +17,9 @@ import { outboxRouter } from './outbox/outbox.router';
 import { modelFeatureRouter } from './models/model-feature.router';
 import { membersRouter } from './projects/members.router';
 import { projectsRouter } from './projects/projects.router';
+import { resultMappingsRouter } from './results/result-mappings.router';
+import { resultSetsRouter } from './results/result-sets.router';
+import { resultUploadsRouter } from './results/result-uploads.router';
 import { usersRouter } from './users/users.router';
 
 interface ApiDeps {
@@ -34,6 +38,10 @@ function featureRouters(ctx: AppContext, deps: ApiDeps): [path: string, router: 
     ['/projects', projectsRouter(ctx)],
     ['/projects/:projectId/members', membersRouter(ctx)],
     ['/projects/:projectId', modelFeatureRouter(ctx)],
+    ['/projects/:projectId/results/uploads', resultUploadsRouter(ctx)],
+    ['/projects/:projectId/results', resultSetsRouter(ctx)],
+    ['/projects/:projectId/result-mappings', resultMappingsRouter(ctx)],
+    ['/projects/:projectId/checks', checkRunsRouter(ctx)],
     ...(ctx.config.fakeSmtp ? ([['/dev', outboxRouter(ctx.dataSource)]] as [string, Router][]) : []),
   ];
 }

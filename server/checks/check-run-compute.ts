@@ -11,7 +11,9 @@ import { CapacityCache } from '../engine/capacity-cache';
 import {
   type CheckFlag,
   type CheckParams,
+  type CheckResult,
   evaluateCapacity,
+  prepareCapacity,
   type PreparedCapacity,
   utilisationOf,
 } from '../engine/check';
@@ -20,7 +22,7 @@ import { EngineInputError } from '../engine/input-error';
 import type { Fabrication, ISectionInput } from '../engine/section';
 import { shearStressProfile } from '../engine/shear-stress';
 import { formatNumber as f, step } from '../engine/trace';
-import type { MemberFlag, MemberRecord } from '../ifc/model-read-result';
+import type { MemberFlag, MemberProfile, MemberRecord } from '../ifc/model-read-result';
 import type { GoverningShear } from '../results/governing-shear';
 import type { CheckParameters } from './check-parameters';
 
@@ -143,10 +145,7 @@ function checkOneMember(
   if (!member.profile) return unchecked('not-checked', member.reason ?? 'No I-section could be read for this member.');
   if (shears.length === 0) return unchecked('not-checked', 'No shear results were matched to this member.', [...memberFlags, 'no-results']);
 
-  const overridden = overrides.get(sectionKey(member.profile.name));
-  const fabrication = overridden ?? member.profile.fabrication;
-  const { depth_mm, webThickness_mm, topFlange, bottomFlange } = member.profile;
-  const section: ISectionInput = { depth_mm, webThickness_mm, topFlange, bottomFlange, fabrication };
+  const { section, overridden } = checkedSection(member.profile, overrides);
   const material = materialOf(member, parameters);
   const prepared = capacities.get(section, material);
   if (prepared instanceof EngineInputError) {
@@ -165,12 +164,9 @@ function checkOneMember(
   let governing = combinations[0];
   for (const combination of combinations) if (combination.utilisation > governing.utilisation) governing = combination;
 
-  const contextFlags: CheckFlag[] = [];
-  if (material.assumed) contextFlags.push('assumed-grade');
-  if (member.profile.source === 'catalogue') contextFlags.push('catalogue-section');
-  const result = evaluateCapacity(capacity, governing.VEd_N, contextFlags);
+  const result = evaluateCapacity(capacity, governing.VEd_N, contextFlagsOf(member.profile, material));
   const runFlags: RunFlag[] = [];
-  if (overridden && overridden !== member.profile.fabrication) runFlags.push('fabrication-overridden');
+  if (overridden) runFlags.push('fabrication-overridden');
   if (prepared.resistanceOverridden) runFlags.push('resistance-factor-overridden');
   if (new Set(shears.map((shear) => shear.memberKey)).size > 1) runFlags.push('several-result-keys');
   const magnitude = Math.abs(governing.VEd_N);
@@ -180,7 +176,7 @@ function checkOneMember(
     warning: result.warning,
     grade: material.grade,
     fy_MPa: result.fy_MPa,
-    fabrication,
+    fabrication: section.fabrication,
     governing: {
       ...governing,
       VRd_N: result.VRd_N,
@@ -196,6 +192,43 @@ function checkOneMember(
 interface MaterialChoice {
   grade: GradeId;
   assumed: boolean;
+}
+
+/** The section as a run checks it: the model's dimensions, with the run's fabrication for that profile if it has one. */
+function checkedSection(profile: MemberProfile, overrides: ReadonlyMap<string, Fabrication>): { section: ISectionInput; overridden: boolean } {
+  const fabrication = overrides.get(sectionKey(profile.name)) ?? profile.fabrication;
+  const { depth_mm, webThickness_mm, topFlange, bottomFlange } = profile;
+  return { section: { depth_mm, webThickness_mm, topFlange, bottomFlange, fabrication }, overridden: fabrication !== profile.fabrication };
+}
+
+/** What the member's data tells the result beside the engine's own flags. */
+function contextFlagsOf(profile: MemberProfile, material: MaterialChoice): CheckFlag[] {
+  const flags: CheckFlag[] = [];
+  if (material.assumed) flags.push('assumed-grade');
+  if (profile.source === 'catalogue') flags.push('catalogue-section');
+  return flags;
+}
+
+export interface MemberEvaluation {
+  section: ISectionInput;
+  grade: GradeId;
+  /** With the project's resistance factor, if the run has one. */
+  capacity: PreparedCapacity;
+  /** The engine's full result for the shear, with its clause-by-clause trace. */
+  result: CheckResult;
+}
+
+/**
+ * One member against one shear force exactly as a run checks it (section, grade, fabrication override, resistance
+ * factor): what a calculation sheet shows for the governing combination. Throws EngineInputError for a section the
+ * engine refuses; null for a member without an I-section.
+ */
+export function evaluateMember(member: CheckableMember, parameters: CheckParameters, shear_N: number): MemberEvaluation | null {
+  if (!member.profile || member.status === 'not-applicable') return null;
+  const { section } = checkedSection(member.profile, fabricationOverrides(parameters));
+  const material = materialOf(member, parameters);
+  const capacity = withResistanceFactor(prepareCapacity(section, { grade: material.grade }, parameters.standard, engineParamsOf(parameters)), parameters);
+  return { section, grade: material.grade, capacity, result: evaluateCapacity(capacity, shear_N, contextFlagsOf(member.profile, material)) };
 }
 
 /** The member's grade, or the run's default grade when the model's material named none. */
@@ -258,7 +291,8 @@ class RunCapacities {
   }
 }
 
-function engineParamsOf(parameters: CheckParameters): CheckParams {
+/** The engine's parameters for a run's. */
+export function engineParamsOf(parameters: CheckParameters): CheckParams {
   const shared = { warningRatio: parameters.warningRatio, stiffenerSpacing_mm: parameters.stiffenerSpacing_mm };
   if (parameters.standard !== 'en1993-1-1') return shared;
   const { gammaM0, gammaM1, eta, yieldRule, endPost } = parameters;

@@ -16,7 +16,7 @@ describe('engineVersion', () => {
       root = fs.mkdtempSync(path.join(os.tmpdir(), 'taulens-version-'));
       for (const folder of ['engine', 'checks']) fs.mkdirSync(path.join(root, folder));
       fs.writeFileSync(path.join(root, 'engine', 'check.ts'), 'export const a = 1;\n');
-      fs.writeFileSync(path.join(root, 'checks', 'run.ts'), 'export const b = 2;\n');
+      fs.writeFileSync(path.join(root, 'checks', 'check-run-compute.ts'), 'export const b = 2;\n');
     });
     afterEach(() => fs.rmSync(root, { recursive: true, force: true }));
 
@@ -26,10 +26,22 @@ describe('engineVersion', () => {
       expect(sourceHash(root)).not.toBe(before);
     });
 
+    it('changes when the run computation changes', () => {
+      const before = sourceHash(root);
+      fs.writeFileSync(path.join(root, 'checks', 'check-run-compute.ts'), 'export const b = 3;\n');
+      expect(sourceHash(root)).not.toBe(before);
+    });
+
+    it('ignores the routes and storage of check runs', () => {
+      const before = sourceHash(root);
+      fs.writeFileSync(path.join(root, 'checks', 'check-runs.router.ts'), 'export const route = 1;\n');
+      expect(sourceHash(root)).toBe(before);
+    });
+
     it('ignores tests and benchmarks beside the code', () => {
       const before = sourceHash(root);
       fs.writeFileSync(path.join(root, 'engine', 'check.spec.ts'), 'test("x", () => {});\n');
-      fs.writeFileSync(path.join(root, 'checks', 'run.d.ts'), 'export declare const b: number;\n');
+      fs.writeFileSync(path.join(root, 'checks', 'check-run-compute.d.ts'), 'export declare const b: number;\n');
       expect(sourceHash(root)).toBe(before);
     });
   });

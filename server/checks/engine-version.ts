@@ -1,13 +1,17 @@
 /**
  * The engine version a check run records: the package version plus a hash of the code that computes a run (the
- * engine and this folder), so a reviewer can tell whether two runs were computed by the same arithmetic even when
+ * engine, and the run computation and parameters of this folder, not its routes and storage), so a reviewer can tell whether two runs were computed by the same arithmetic even when
  * the package version did not change. Read once per process, from whatever files are running (.ts or built .js).
  */
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 
-const HASHED_FOLDERS = ['engine', 'checks'];
+/** Folders hashed whole, or only the named files (without extension). */
+const HASHED_SOURCES: readonly { folder: string; files?: readonly string[] }[] = [
+  { folder: 'engine' },
+  { folder: 'checks', files: ['check-run-compute', 'check-parameters'] },
+];
 const SOURCE_FILE = /\.(ts|js)$/;
 const NOT_RUN = /\.(spec|bench|d)\.(ts|js)$/;
 
@@ -22,9 +26,12 @@ export function engineVersion(): string {
 /** SHA-256 over the names and contents of the run-computing sources below `serverRoot`, first 12 hex digits. */
 export function sourceHash(serverRoot: string): string {
   const hash = createHash('sha256');
-  for (const folder of HASHED_FOLDERS) {
+  for (const { folder, files: only } of HASHED_SOURCES) {
     const dir = path.join(serverRoot, folder);
-    const files = fs.readdirSync(dir).filter((name) => SOURCE_FILE.test(name) && !NOT_RUN.test(name)).sort();
+    const files = fs
+      .readdirSync(dir)
+      .filter((name) => SOURCE_FILE.test(name) && !NOT_RUN.test(name) && (!only || only.includes(name.replace(SOURCE_FILE, ''))))
+      .sort();
     for (const name of files) {
       hash.update(`${folder}/${name}\0`);
       hash.update(fs.readFileSync(path.join(dir, name)));

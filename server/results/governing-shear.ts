@@ -1,7 +1,8 @@
 /**
  * Governing shear per member and load combination: the largest |V| over the stations, kept with its sign, station and
  * row so the calculation sheet can say where it came from. Collected from the row stream, so only one value per
- * (member key, combination) is held, never the rows.
+ * (member key, combination) is held, never the rows; the result is a columnar table that is stored as it is
+ * (governing-file.ts) and read back by check runs.
  */
 import type { MemberMatch } from './member-matching';
 import type { ResultRow } from './result-row';
@@ -17,7 +18,22 @@ export interface GoverningShear {
   memberKey: string;
 }
 
-type PerCombination = Map<string, GoverningShear>;
+/**
+ * The governing values of a whole results file, one entry per (member key, combination) in columns. Entries are
+ * grouped by key in the order of `memberKeys`, combinations within a key in order of first appearance in the file.
+ */
+export interface GoverningTable {
+  memberKeys: string[];
+  combinations: string[];
+  /** Index into memberKeys, per entry. */
+  key: Uint32Array;
+  /** Index into combinations, per entry. */
+  combination: Uint32Array;
+  shear_N: Float64Array;
+  /** NaN where the file has no station column. */
+  station_mm: Float64Array;
+  row: Uint32Array;
+}
 
 /** One member key's governing values, indexed by combination id; holes where the key has no such combination. */
 interface KeyColumns {
@@ -30,6 +46,7 @@ export class GoverningShearCollector {
   // Columns, not an object per (key, combination): a million governing values stay a few arrays per key.
   private readonly byKey = new Map<string, KeyColumns>();
   private readonly combinations = new StringIds();
+  private entries = 0;
   /** Rows of one member usually come together: its columns are kept at hand. */
   private lastKey: string | undefined;
   private last: KeyColumns | undefined;
@@ -42,7 +59,9 @@ export class GoverningShearCollector {
         this.last = this.columnsOf(row.memberKey);
       }
       const id = this.combinations.idOf(row.combination);
-      if (isLarger(row.shear_N, this.last.shear_N[id])) {
+      const current = this.last.shear_N[id];
+      if (current === undefined) this.entries++;
+      if (isLarger(row.shear_N, current)) {
         this.last.shear_N[id] = row.shear_N;
         this.last.station_mm[id] = row.station_mm ?? Number.NaN;
         this.last.row[id] = row.row;
@@ -50,24 +69,31 @@ export class GoverningShearCollector {
     }
   };
 
-  /** Governing values per member key, combinations in order of first appearance in the file. */
-  perKey(): Map<string, GoverningShear[]> {
-    const perKey = new Map<string, GoverningShear[]>();
-    for (const [memberKey, columns] of this.byKey) {
-      const shears: GoverningShear[] = [];
+  /** Everything collected so far, keys in order of first appearance. */
+  table(): GoverningTable {
+    const table: GoverningTable = {
+      memberKeys: [...this.byKey.keys()],
+      combinations: [...this.combinations.values],
+      key: new Uint32Array(this.entries),
+      combination: new Uint32Array(this.entries),
+      shear_N: new Float64Array(this.entries),
+      station_mm: new Float64Array(this.entries),
+      row: new Uint32Array(this.entries),
+    };
+    let entry = 0;
+    let keyIndex = 0;
+    for (const columns of this.byKey.values()) {
       columns.shear_N.forEach((shear_N, id) => {
-        const station_mm = columns.station_mm[id];
-        shears.push({
-          combination: this.combinations.values[id],
-          shear_N,
-          station_mm: Number.isNaN(station_mm) ? undefined : station_mm,
-          row: columns.row[id],
-          memberKey,
-        });
+        table.key[entry] = keyIndex;
+        table.combination[entry] = id;
+        table.shear_N[entry] = shear_N;
+        table.station_mm[entry] = columns.station_mm[id];
+        table.row[entry] = columns.row[id];
+        entry++;
       });
-      perKey.set(memberKey, shears);
+      keyIndex++;
     }
-    return perKey;
+    return table;
   }
 
   private columnsOf(memberKey: string): KeyColumns {
@@ -80,26 +106,56 @@ export class GoverningShearCollector {
   }
 }
 
+/** The governing values of one entry of the table, as the check run reads them. */
+export function governingShearAt(table: GoverningTable, entry: number): GoverningShear {
+  const station_mm = table.station_mm[entry];
+  return {
+    combination: table.combinations[table.combination[entry]],
+    shear_N: table.shear_N[entry],
+    ...(!Number.isNaN(station_mm) && { station_mm }),
+    row: table.row[entry],
+    memberKey: table.memberKeys[table.key[entry]],
+  };
+}
+
 /**
  * Governing values per IFC member (by GlobalId) from the matched keys. Where several analysis members feed one IFC
- * member, each combination keeps the largest |V| among them.
+ * member, each combination keeps the largest |V| among them. Only matched keys are turned into objects.
  */
-export function governingShearsByMember(
-  perKey: ReadonlyMap<string, readonly GoverningShear[]>,
-  matches: readonly MemberMatch[],
-): Map<string, GoverningShear[]> {
-  const byMember = new Map<string, PerCombination>();
+export function governingShearsByMember(table: GoverningTable, matches: readonly MemberMatch[]): Map<string, GoverningShear[]> {
+  const ranges = keyRanges(table);
+  const byMember = new Map<string, Map<number, number>>();
   for (const match of matches) {
+    const range = ranges.get(match.memberKey);
+    if (!range) continue;
     let perCombination = byMember.get(match.globalId);
     if (!perCombination) {
       perCombination = new Map();
       byMember.set(match.globalId, perCombination);
     }
-    for (const shear of perKey.get(match.memberKey) ?? []) {
-      if (isLarger(shear.shear_N, perCombination.get(shear.combination)?.shear_N)) perCombination.set(shear.combination, shear);
+    for (let entry = range[0]; entry < range[1]; entry++) {
+      const combination = table.combination[entry];
+      const current = perCombination.get(combination);
+      if (isLarger(table.shear_N[entry], current === undefined ? undefined : table.shear_N[current])) perCombination.set(combination, entry);
     }
   }
-  return new Map([...byMember].map(([globalId, perCombination]) => [globalId, [...perCombination.values()]]));
+  return new Map(
+    [...byMember].map(([globalId, perCombination]) => [globalId, [...perCombination.values()].map((entry) => governingShearAt(table, entry))]),
+  );
+}
+
+/** [first, end) entries of each member key; entries are grouped by key. */
+function keyRanges(table: GoverningTable): Map<string, [number, number]> {
+  const ranges = new Map<string, [number, number]>();
+  const count = table.key.length;
+  let start = 0;
+  for (let entry = 1; entry <= count; entry++) {
+    if (entry === count || table.key[entry] !== table.key[start]) {
+      ranges.set(table.memberKeys[table.key[start]], [start, entry]);
+      start = entry;
+    }
+  }
+  return ranges;
 }
 
 /** Equal magnitudes keep the first, so the result does not depend on the sign convention. */

@@ -1,3 +1,5 @@
+import { type FieldIssue, ValidationError } from '../http/errors';
+
 /**
  * The one error the results import throws for a file or mapping it cannot use. Like the IFC reader's error it is not an
  * HTTP error: the results service maps it (an upload answers 400 with `code` and `details`, the CLI exits 2).
@@ -54,4 +56,20 @@ export class ResultsFileError extends Error {
     super(message);
     this.name = 'ResultsFileError';
   }
+}
+
+/**
+ * The error as the API and the job runner carry it (a ValidationError keeps its code and details across the worker
+ * boundary). Bad rows become `invalid_rows` with `details.errors:[{row, column, message}]`, nothing stored.
+ */
+export function asValidationError(error: ResultsFileError): ValidationError {
+  if (error.code !== 'rows_invalid') return fileValidationError(error.message, error.code, error.details);
+  const { issues = [], stoppedEarly = false, lastRow } = error.details;
+  const errors = issues.map((issue) => ({ row: issue.row, column: issue.column ?? null, code: issue.code, message: issue.message }));
+  return fileValidationError(error.message, 'invalid_rows', { errors, stoppedEarly, lastRow });
+}
+
+function fileValidationError(message: string, code: string, details: unknown): ValidationError {
+  // ValidationError's details are typed for request fields; a file's problems carry their own shape.
+  return new ValidationError(message, { code, details: details as FieldIssue[] });
 }

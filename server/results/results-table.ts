@@ -9,7 +9,8 @@ import { type CsvFormat, detectEncoding, firstRecordIsHeader, sniffCsvFormat } f
 import { ResultsFileError } from './results-file-error';
 import { listXlsxSheets, type XlsxSheet, xlsxRecordChunks } from './xlsx-workbook';
 
-export type ResultsFileKind = 'csv' | 'xlsx';
+export const RESULTS_FILE_KINDS = ['csv', 'xlsx'] as const;
+export type ResultsFileKind = (typeof RESULTS_FILE_KINDS)[number];
 
 export interface ResultsTableOptions {
   /** XLSX: the sheet to read; required when the workbook has several. */

@@ -131,7 +131,7 @@ async function main(): Promise<void> {
   }
   if (report.counts.matched !== MEMBERS) throw new Error(`matched ${report.counts.matched} of ${MEMBERS} members`);
 
-  const shears = governingShearsByMember(collector.perKey(), report.matched);
+  const shears = governingShearsByMember(collector.table(), report.matched);
   const parameters = recommendedParameters('aisc360-22-lrfd');
   const checkRuns: number[] = [];
   let summary = computeCheckRun({ members, shears, parameters }).summary;

@@ -1,0 +1,82 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
+import { CheckRun } from './check-run.entity';
+import type { MemberCheck, RunFlag } from './check-run-compute';
+
+export const RESULT_STATUSES = ['pass', 'warning', 'fail', 'not-checked', 'not-applicable'] as const;
+/** As the results table shows it: a passing member at or above the warning ratio is a 'warning'. */
+export type ResultStatus = (typeof RESULT_STATUSES)[number];
+
+/**
+ * One member's outcome in a check run: the columns the results table sorts and filters on (indexed per run), the
+ * engine's result without its per-combination list, and that list in compact form (see member-result-row.ts).
+ * Written once when the run finishes; never updated.
+ */
+@Entity({ name: 'check_member_result' })
+@Index(['runId', 'globalId'])
+@Index(['runId', 'utilisation'])
+@Index(['runId', 'status', 'utilisation'])
+@Index(['runId', 'storey'])
+@Index(['runId', 'profileName'])
+@Index(['runId', 'tag'])
+export class CheckMemberResult {
+  @PrimaryColumn({ type: String })
+  runId: string;
+
+  /** The member's place in the model, a stable tie-break for sorting. */
+  @PrimaryColumn({ type: 'integer' })
+  ordinal: number;
+
+  @Column({ type: String, length: 64 })
+  globalId: string;
+
+  @Column({ type: 'text', nullable: true })
+  tag: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  name: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  storey: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  profileName: string | null;
+
+  @Column({ type: String, length: 16, nullable: true })
+  grade: string | null;
+
+  @Column({ type: 'simple-enum', enum: RESULT_STATUSES })
+  status: ResultStatus;
+
+  @Column({ type: 'text', nullable: true })
+  governingCombination: string | null;
+
+  @Column({ type: 'real', nullable: true })
+  VEd_kN: number | null;
+
+  @Column({ type: 'real', nullable: true })
+  VRd_kN: number | null;
+
+  @Column({ type: 'real', nullable: true })
+  utilisation: number | null;
+
+  @Column({ type: 'real', nullable: true })
+  tauMax_MPa: number | null;
+
+  @Column({ type: 'real', nullable: true })
+  tauAvgWeb_MPa: number | null;
+
+  @Column({ type: 'simple-json' })
+  flags: RunFlag[];
+
+  /** The engine's MemberCheck without `combinations`. */
+  @Column({ type: 'simple-json' })
+  detail: Omit<MemberCheck, 'combinations'>;
+
+  /** Per-combination values, compact (member-result-row.ts). */
+  @Column({ type: 'text' })
+  combinations: string;
+
+  @ManyToOne(() => CheckRun, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'runId' })
+  run?: CheckRun;
+}

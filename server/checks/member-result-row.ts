@@ -1,0 +1,88 @@
+/**
+ * A member's outcome in a check run as the check_member_result row holds it: the table's columns, the engine result
+ * without its per-combination list, and that list in a compact form (combinations by index into the run's list,
+ * the analysis member keys listed once). Utilisations are not stored per combination: |VEd| / VRd gives them back.
+ */
+import type { MemberRecord } from '../ifc/model-read-result';
+import type { CombinationCheck, MemberCheck } from './check-run-compute';
+import type { CheckMemberResult, ResultStatus } from './check-member-result.entity';
+
+/** check_member_result without its run id: what the run worker hands back per member. */
+export type MemberResultRow = Omit<CheckMemberResult, 'runId' | 'run'>;
+
+interface CompactCombinations {
+  /** Combination index, signed VEd in N, station in mm (null when none) and file row, per combination. */
+  c: number[];
+  v: number[];
+  s: (number | null)[];
+  r: number[];
+  /** Distinct analysis member keys; `k` gives each combination's key when there are several. */
+  keys: string[];
+  k?: number[];
+}
+
+export function resultStatusOf(check: Pick<MemberCheck, 'status' | 'warning'>): ResultStatus {
+  return check.status === 'pass' && check.warning ? 'warning' : check.status;
+}
+
+export function memberResultRow(
+  ordinal: number,
+  member: Pick<MemberRecord, 'tag' | 'name' | 'storey' | 'profile'>,
+  check: MemberCheck,
+  combinationIndex: ReadonlyMap<string, number>,
+): MemberResultRow {
+  const { combinations, ...detail } = check;
+  const governing = check.governing;
+  return {
+    ordinal,
+    globalId: check.globalId,
+    tag: member.tag,
+    name: member.name,
+    storey: member.storey,
+    profileName: member.profile?.name || null,
+    grade: check.grade,
+    status: resultStatusOf(check),
+    governingCombination: governing?.combination ?? null,
+    VEd_kN: governing ? governing.VEd_N / 1000 : null,
+    VRd_kN: governing ? governing.VRd_N / 1000 : null,
+    utilisation: governing?.utilisation ?? null,
+    tauMax_MPa: governing?.tauMax_MPa ?? null,
+    tauAvgWeb_MPa: governing?.tauAvgWeb_MPa ?? null,
+    flags: check.flags,
+    detail,
+    combinations: JSON.stringify(compactCombinations(combinations, combinationIndex)),
+  };
+}
+
+function compactCombinations(combinations: readonly CombinationCheck[], combinationIndex: ReadonlyMap<string, number>): CompactCombinations {
+  const keys = [...new Set(combinations.map((combination) => combination.memberKey))];
+  const compact: CompactCombinations = {
+    c: combinations.map((combination) => combinationIndex.get(combination.combination)!),
+    v: combinations.map((combination) => combination.VEd_N),
+    s: combinations.map((combination) => combination.station_mm ?? null),
+    r: combinations.map((combination) => combination.row),
+    keys,
+  };
+  if (keys.length > 1) compact.k = combinations.map((combination) => keys.indexOf(combination.memberKey));
+  return compact;
+}
+
+/** The per-combination list of a stored row, as the run computed it. */
+export function combinationsOf(row: Pick<CheckMemberResult, 'combinations' | 'detail'>, runCombinations: readonly string[]): CombinationCheck[] {
+  const compact = JSON.parse(row.combinations) as CompactCombinations;
+  const VRd_N = row.detail.governing?.VRd_N;
+  if (VRd_N === undefined) return [];
+  return compact.c.map((index, i) => ({
+    combination: runCombinations[index],
+    VEd_N: compact.v[i],
+    utilisation: Math.abs(compact.v[i]) / VRd_N,
+    ...(compact.s[i] !== null && { station_mm: compact.s[i]! }),
+    row: compact.r[i],
+    memberKey: compact.keys[compact.k?.[i] ?? 0],
+  }));
+}
+
+/** The engine's MemberCheck back from a stored row. */
+export function memberCheckOf(row: Pick<CheckMemberResult, 'combinations' | 'detail'>, runCombinations: readonly string[]): MemberCheck {
+  return { ...row.detail, combinations: combinationsOf(row, runCombinations) };
+}

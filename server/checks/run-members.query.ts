@@ -1,0 +1,201 @@
+/**
+ * The results table of a check run: server-side sort, filter and paging over check_member_result, answered from the
+ * per-run indexes (run + utilisation, run + status + utilisation, run + storey, run + profile, run + tag). A finished
+ * run never changes, so its facets and colours are computed once and kept.
+ */
+import type { DataSource, SelectQueryBuilder } from 'typeorm';
+import { LruPromiseCache } from '../results/lru-promise-cache';
+import { CheckMemberResult, type ResultStatus } from './check-member-result.entity';
+import type { RunFlag } from './check-run-compute';
+
+export const RUN_MEMBER_SORTS = [
+  'utilisation',
+  'tag',
+  'name',
+  'storey',
+  'profileName',
+  'grade',
+  'governingCombination',
+  'VEd_kN',
+  'VRd_kN',
+  'tauMax_MPa',
+  'tauAvgWeb_MPa',
+  'status',
+  'globalId',
+] as const;
+export type RunMemberSort = (typeof RUN_MEMBER_SORTS)[number];
+
+export interface RunMemberFilter {
+  status?: ResultStatus;
+  storey?: string;
+  profile?: string;
+  /** Utilisation range as ratios (1 = at capacity), inclusive. */
+  minUtil?: number;
+  maxUtil?: number;
+  /** Part of the GlobalId, tag, name or profile, any case. */
+  q?: string;
+}
+
+export interface RunMembersQuery extends RunMemberFilter {
+  sort: RunMemberSort;
+  dir: 'asc' | 'desc';
+  page: number;
+  pageSize: number;
+}
+
+export interface RunMemberRow {
+  globalId: string;
+  tag: string | null;
+  name: string | null;
+  storey: string | null;
+  profileName: string | null;
+  grade: string | null;
+  governingCombination: string | null;
+  VEd_kN: number | null;
+  VRd_kN: number | null;
+  utilisation: number | null;
+  tauMax_MPa: number | null;
+  tauAvgWeb_MPa: number | null;
+  status: ResultStatus;
+  flags: RunFlag[];
+}
+
+export interface RunMembersPage {
+  total: number;
+  rows: RunMemberRow[];
+  facets: RunFacets;
+}
+
+export interface RunFacets {
+  storeys: string[];
+  profiles: string[];
+}
+
+/** `{[globalId]: {u, s}}` for the 3D view: utilisation (null when not checked) and status. */
+export type RunColours = Record<string, { u: number | null; s: ResultStatus }>;
+
+const ROW_COLUMNS: readonly (keyof RunMemberRow)[] = [
+  'globalId',
+  'tag',
+  'name',
+  'storey',
+  'profileName',
+  'grade',
+  'governingCombination',
+  'VEd_kN',
+  'VRd_kN',
+  'utilisation',
+  'tauMax_MPa',
+  'tauAvgWeb_MPa',
+  'status',
+  'flags',
+];
+
+/** Finished runs whose facets and colours are kept; each costs about a megabyte at 50,000 members. */
+const KEPT_RUNS = 8;
+
+export class RunMembersQueries {
+  private readonly facets = new LruPromiseCache<string, RunFacets>(KEPT_RUNS);
+  private readonly colours = new LruPromiseCache<string, string>(KEPT_RUNS);
+
+  constructor(private readonly dataSource: DataSource) {}
+
+  async page(runId: string, query: RunMembersQuery): Promise<RunMembersPage> {
+    const filtered = this.filtered(runId, query);
+    const [total, rows, facets] = await Promise.all([
+      filtered.getCount(),
+      this.ordered(filtered.clone(), query)
+        .select(ROW_COLUMNS.map((column) => `m.${column}`))
+        .offset(query.page * query.pageSize)
+        .limit(query.pageSize)
+        .getMany(),
+      this.facetsOf(runId),
+    ]);
+    return { total, rows: rows.map(toRow), facets };
+  }
+
+  /** Every row the filter passes, in the requested order (for the CSV export). */
+  async all(runId: string, query: RunMemberFilter & Pick<RunMembersQuery, 'sort' | 'dir'>): Promise<RunMemberRow[]> {
+    const rows = await this.ordered(this.filtered(runId, query), query)
+      .select(ROW_COLUMNS.map((column) => `m.${column}`))
+      .getMany();
+    return rows.map(toRow);
+  }
+
+  facetsOf(runId: string): Promise<RunFacets> {
+    return this.facets.get(runId, async () => {
+      const distinct = async (column: 'storey' | 'profileName'): Promise<string[]> => {
+        const rows = await this.dataSource
+          .getRepository(CheckMemberResult)
+          .createQueryBuilder('m')
+          .select(`DISTINCT m.${column}`, 'value')
+          .where('m.runId = :runId', { runId })
+          .andWhere(`m.${column} IS NOT NULL`)
+          .orderBy('value', 'ASC')
+          .getRawMany<{ value: string }>();
+        return rows.map((row) => row.value);
+      };
+      const [storeys, profiles] = await Promise.all([distinct('storey'), distinct('profileName')]);
+      return { storeys, profiles };
+    });
+  }
+
+  /** The colours payload as JSON text, ready to send. */
+  coloursJson(runId: string): Promise<string> {
+    return this.colours.get(runId, async () => {
+      const rows = await this.dataSource
+        .getRepository(CheckMemberResult)
+        .createQueryBuilder('m')
+        .select(['m.globalId AS globalId', 'm.utilisation AS u', 'm.status AS s'])
+        .where('m.runId = :runId', { runId })
+        .orderBy('m.ordinal', 'ASC')
+        .getRawMany<{ globalId: string; u: number | null; s: ResultStatus }>();
+      const members: RunColours = {};
+      for (const row of rows) members[row.globalId] = { u: row.u, s: row.s };
+      return JSON.stringify({ members });
+    });
+  }
+
+  private filtered(runId: string, filter: RunMemberFilter): SelectQueryBuilder<CheckMemberResult> {
+    const query = this.dataSource.getRepository(CheckMemberResult).createQueryBuilder('m').where('m.runId = :runId', { runId });
+    if (filter.status) query.andWhere('m.status = :status', { status: filter.status });
+    if (filter.storey) query.andWhere('m.storey = :storey', { storey: filter.storey });
+    if (filter.profile) query.andWhere('m.profileName = :profile', { profile: filter.profile });
+    if (filter.minUtil !== undefined) query.andWhere('m.utilisation >= :minUtil', { minUtil: filter.minUtil });
+    if (filter.maxUtil !== undefined) query.andWhere('m.utilisation <= :maxUtil', { maxUtil: filter.maxUtil });
+    const text = filter.q?.trim();
+    if (text) {
+      const pattern = `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+      query.andWhere(
+        "(m.globalId LIKE :pattern ESCAPE '\\' OR m.tag LIKE :pattern ESCAPE '\\' OR m.name LIKE :pattern ESCAPE '\\' OR m.profileName LIKE :pattern ESCAPE '\\')",
+        { pattern },
+      );
+    }
+    return query;
+  }
+
+  /** Members without a value (not checked) come last either way; the model's order breaks ties. */
+  private ordered(query: SelectQueryBuilder<CheckMemberResult>, order: Pick<RunMembersQuery, 'sort' | 'dir'>): SelectQueryBuilder<CheckMemberResult> {
+    const dir = order.dir === 'asc' ? 'ASC' : 'DESC';
+    return query.orderBy(`m.${order.sort}`, dir, 'NULLS LAST').addOrderBy('m.ordinal', 'ASC');
+  }
+}
+
+function toRow(row: CheckMemberResult): RunMemberRow {
+  return {
+    globalId: row.globalId,
+    tag: row.tag,
+    name: row.name,
+    storey: row.storey,
+    profileName: row.profileName,
+    grade: row.grade,
+    governingCombination: row.governingCombination,
+    VEd_kN: row.VEd_kN,
+    VRd_kN: row.VRd_kN,
+    utilisation: row.utilisation,
+    tauMax_MPa: row.tauMax_MPa,
+    tauAvgWeb_MPa: row.tauAvgWeb_MPa,
+    status: row.status,
+    flags: row.flags,
+  };
+}
