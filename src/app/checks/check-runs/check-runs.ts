@@ -68,7 +68,8 @@ export class CheckRuns {
         autoFocus: 'first-tabbable',
       })
       .afterClosed()
-      .pipe(filter((run): run is CheckRun => run !== undefined))
+      // Cancel (mat-dialog-close) closes with an empty string, Escape with undefined.
+      .pipe(filter((run): run is CheckRun => typeof run === 'object' && run !== null))
       .subscribe((run) => void this.router.navigate([run.id], { relativeTo: this.route }));
   }
 }

@@ -89,6 +89,8 @@ export class MatchingReport {
     return item.globalId ? memberLabel({ globalId: item.globalId, tag: item.tag, name: item.name }) : '';
   }
 
+  protected readonly candidateLabel = memberLabel;
+
   protected countOf(key: keyof MatchingSummary): number | null {
     const value = this.summary()?.[key];
     return typeof value === 'number' ? value : null;
