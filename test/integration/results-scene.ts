@@ -55,7 +55,7 @@ export function resultsCsv(rows: ReadonlyArray<readonly [member: string, combina
   return `${header}\n${lines.join('\n')}\n`;
 }
 
-export async function uploadResults(agent: ApiAgent, projectId: string, content: string | Buffer, fileName = 'shear.csv') {
+export function uploadResults(agent: ApiAgent, projectId: string, content: string | Buffer, fileName = 'shear.csv') {
   return agent.post(`${resultsUrl(projectId)}/uploads`).attach('file', Buffer.from(content), fileName);
 }
 
