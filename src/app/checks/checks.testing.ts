@@ -1,4 +1,5 @@
 // Invented check runs and results for client specs. Not imported by the app.
+import { recommendedParameters } from '../../../server/checks/check-parameters';
 import { sectionProperties } from '../../../server/engine/section-properties';
 import { shearStressProfile } from '../../../server/engine/shear-stress';
 import { iSection } from '../../../server/engine/test-sections';
@@ -11,18 +12,7 @@ export const TEST_RUN: CheckRun = {
   progress: null,
   error: null,
   standard: 'en1993-1-1',
-  parameters: {
-    standard: 'en1993-1-1',
-    warningRatio: 0.9,
-    stiffenerSpacing_mm: null,
-    fabricationOverrides: {},
-    defaultGrade: 'S355',
-    gammaM0: 1,
-    gammaM1: 1,
-    eta: null,
-    yieldRule: 'en10025-2',
-    endPost: 'non-rigid',
-  },
+  parameters: recommendedParameters('en1993-1-1'),
   modelRevision: { id: 'rev-2', number: 2, sha256: 'a'.repeat(64), fileName: 'canopy-rev-B.ifc' },
   resultSet: { id: 'set-1', name: 'canopy-shears', sha256: 'b'.repeat(64) },
   engineVersion: 'engine-test',
