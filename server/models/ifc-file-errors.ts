@@ -1,5 +1,5 @@
 import { type DomainError, PayloadTooLargeError, ValidationError } from '../http/errors';
-import type { IfcReadError, IfcReadErrorCode } from '../ifc/ifc-read-error';
+import { IfcReadError, type IfcReadErrorCode } from '../ifc/ifc-read-error';
 
 /** API codes of the reader's problems; the upload contract names not_ifc and unknown_schema. */
 const API_CODE: Readonly<Record<IfcReadErrorCode, string>> = {
@@ -19,4 +19,13 @@ export function domainErrorOf(error: IfcReadError): DomainError {
   const code = API_CODE[error.code];
   if (error.code === 'archive-too-large') return new PayloadTooLargeError(error.message, { code });
   return new ValidationError(error.message, { code, details: [{ location: 'body', field: 'file', message: error.message }] });
+}
+
+/** Runs work of the IFC reader, turning its IfcReadError into the domain error. */
+export async function readingIfc<T>(work: () => Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (error) {
+    throw error instanceof IfcReadError ? domainErrorOf(error) : error;
+  }
 }

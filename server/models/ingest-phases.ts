@@ -32,5 +32,5 @@ export function overallFraction(phase: IngestPhase, fraction: number): number {
 
 /** What the ingest was doing in that phase, for failure messages ("… while building the 3D geometry"). */
 export function phaseActivity(phase: IngestPhase | null): string {
-  return PHASES.find((p) => p.phase === phase)?.doing ?? 'waiting to start';
+  return PHASES.find((p) => p.phase === phase)?.doing ?? 'starting to read the file';
 }

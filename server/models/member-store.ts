@@ -10,8 +10,8 @@ import type { MemberRecord } from '../ifc/model-read-result';
 import { memberLineBatches } from './member-lines';
 import { MEMBER_ROW_COLUMNS, memberRowOf } from './member-row';
 
-/** 200 rows × 22 values stays far below SQLite's 32,766 bound parameters per statement. */
-const ROWS_PER_BATCH = 200;
+/** 500 rows × 22 values stays below SQLite's 32,766 bound parameters per statement. */
+const ROWS_PER_BATCH = 500;
 
 function insertSql(table: string, columns: readonly string[], rows: number): string {
   const tuple = `(${columns.map(() => '?').join(',')})`;

@@ -5,12 +5,11 @@
  */
 import type { CatalogueSection } from '../catalogue/catalogue-section';
 import type { GradeId } from '../engine/grades';
-import { IfcReadError } from '../ifc/ifc-read-error';
 import type { ModelInfo } from '../ifc/model-read-result';
 import { readModel } from '../ifc/read-model';
 import { defineJob } from '../jobs/job-worker';
 import { type IngestPhase, overallFraction } from './ingest-phases';
-import { domainErrorOf } from './ifc-file-errors';
+import { readingIfc } from './ifc-file-errors';
 import { writeMemberLines } from './member-lines';
 
 export interface IngestJobInput {
@@ -28,19 +27,15 @@ export interface IngestJobOutput {
 
 export default defineJob<IngestJobInput, IngestJobOutput>(async (input, report) => {
   const progress = (phase: IngestPhase, fraction: number) => report({ fraction: overallFraction(phase, fraction), message: phase });
-  let result;
-  try {
-    result = await readModel(input.ifcPath, {
+  const result = await readingIfc(() =>
+    readModel(input.ifcPath, {
       fileName: input.fileName,
       glb: { path: input.glbPath },
       defaultGrade: input.defaultGrade,
       projectCatalogue: input.projectCatalogue,
       onProgress: progress,
-    });
-  } catch (error) {
-    if (error instanceof IfcReadError) throw domainErrorOf(error);
-    throw error;
-  }
+    }),
+  );
   writeMemberLines(input.membersPath, result.members);
   return { model: result.model };
 });

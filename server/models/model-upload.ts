@@ -13,9 +13,8 @@ import type { Request, RequestHandler } from 'express';
 import multer, { MulterError } from 'multer';
 import { PayloadTooLargeError, ValidationError } from '../http/errors';
 import { DEFAULT_ARCHIVE_LIMITS, extractIfcFromZip } from '../ifc/ifc-archive';
-import { IfcReadError } from '../ifc/ifc-read-error';
 import { HEADER_PROBE_BYTES, readStepHeader, type StepHeader, TAIL_PROBE_BYTES } from '../ifc/step-header';
-import { domainErrorOf } from './ifc-file-errors';
+import { readingIfc } from './ifc-file-errors';
 
 /** The uploaded file as it lies in the temporary folder. */
 export interface ReceivedFile {
@@ -176,23 +175,24 @@ async function measure(file: string): Promise<{ size: number; sha256: string }> 
   return { size, sha256: hash.digest('hex') };
 }
 
+/** Reads the header, size and SHA-256 of an IFC file on disk; throws the domain error for a file that is not IFC. */
+export async function checkIfcFile(file: string, fileName: string): Promise<CheckedIfc> {
+  const { size, sha256 } = await measure(file);
+  return { path: file, fileName, sizeBytes: size, sha256, header: await readingIfc(() => headerOf(file, size)) };
+}
+
 /**
  * Turns the received file into a checked IFC: an .ifczip is unpacked (with the upload limit on the unpacked size and
  * the archive reader's ratio limit), then the STEP header is read. Throws the domain error for a file that is not a
  * complete IFC file of a supported schema.
  */
 export async function checkIfcUpload(req: Request, file: ReceivedFile, options: { dir: string; maxBytes: number }): Promise<CheckedIfc> {
-  try {
-    let ifc = { path: file.path, size: file.size, sha256: file.sha256 };
-    if (path.extname(file.originalName).toLowerCase() === '.ifczip') {
-      const extracted = requestTempFile(req, options.dir, '.ifc');
-      await extractIfcFromZip(file.path, extracted, { ...DEFAULT_ARCHIVE_LIMITS, maxUncompressedBytes: options.maxBytes });
-      ifc = { path: extracted, ...(await measure(extracted)) };
-      await rm(file.path, { force: true });
-    }
-    const header = await headerOf(ifc.path, ifc.size);
-    return { path: ifc.path, fileName: file.originalName, sizeBytes: ifc.size, sha256: ifc.sha256, header };
-  } catch (error) {
-    throw error instanceof IfcReadError ? domainErrorOf(error) : error;
+  if (path.extname(file.originalName).toLowerCase() !== '.ifczip') {
+    const header = await readingIfc(() => headerOf(file.path, file.size));
+    return { path: file.path, fileName: file.originalName, sizeBytes: file.size, sha256: file.sha256, header };
   }
+  const extracted = requestTempFile(req, options.dir, '.ifc');
+  await readingIfc(() => extractIfcFromZip(file.path, extracted, { ...DEFAULT_ARCHIVE_LIMITS, maxUncompressedBytes: options.maxBytes }));
+  await rm(file.path, { force: true });
+  return checkIfcFile(extracted, file.originalName);
 }

@@ -33,10 +33,13 @@ export interface ModelServiceDeps {
   workDir: string;
 }
 
-/** A new revision and its ingest, which never rejects (a failure marks the revision failed). */
+/**
+ * A new revision and its ingest, which never rejects: a failure marks the revision failed. It resolves to the revision
+ * as the ingest left it, or null if the revision was deleted meanwhile (with its project).
+ */
 export interface AcceptedRevision {
   revision: RevisionView;
-  ingested: Promise<RevisionView>;
+  ingested: Promise<RevisionView | null>;
 }
 
 const INGEST_WORKER = workerFile(__filename, './model-ingest.job');
@@ -133,7 +136,7 @@ export class ModelService {
     }
   }
 
-  private async ingest(revision: ModelRevision, ifcPath: string, ownFile: boolean): Promise<RevisionView> {
+  private async ingest(revision: ModelRevision, ifcPath: string, ownFile: boolean): Promise<RevisionView | null> {
     const { dataSource, storage, jobs, logger, workDir } = this.deps;
     const keys = fileKeys(revision.projectId, revision.id);
     const glbPath = path.join(workDir, `${revision.id}.glb`);
@@ -182,7 +185,7 @@ export class ModelService {
       await rm(membersPath, { force: true });
       if (ownFile) await rm(ifcPath, { force: true });
     }
-    return this.get(revision.projectId, revision.id);
+    return this.get(revision.projectId, revision.id).catch(() => null);
   }
 
   /** Failed revisions keep their record and message, but no members and no files. */

@@ -288,9 +288,9 @@ describe('models', () => {
         const members = await agent.get(`${modelsUrl(team)}/${revision.id}/members`).expect(409);
         expect(members.body.error.code).toBe('revision_not_ready');
         await agent.get(`${modelsUrl(team)}/${revision.id}/geometry.glb`).expect(409);
-        // A failed revision does not block the corrected file, nor the same one.
-        await upload(agent, team, noLengthUnit, 'no-units.ifc').expect(202);
-        await app.dataSource.getRepository(ModelRevision).delete({ projectId: team.project.id });
+        // A failed revision does not block uploading the same file again.
+        const again = await upload(agent, team, noLengthUnit, 'no-units.ifc').expect(202);
+        expect((await untilFinal(agent, team, again.body.revision.id)).status).toBe('failed');
       });
     });
 
