@@ -9,6 +9,7 @@ import { defaultSettingsFor } from '../projects/project-settings';
 import type { FileStorage } from '../storage/file-storage';
 import { hashPassword } from '../users/password';
 import { User } from '../users/user.entity';
+import { demoModelStep } from './demo-model';
 
 /** Shared by every demo account; printed once, on the first seeding. */
 export const DEMO_PASSWORD = 'taulens-demo';
@@ -128,7 +129,7 @@ const demoProjectsStep: DemoStep = {
 };
 
 /** The steps in order; a later feature appends its own (demo model, shear results, a check run…). */
-export const DEMO_STEPS: DemoStep[] = [demoUsersStep, demoProjectsStep];
+export const DEMO_STEPS: DemoStep[] = [demoUsersStep, demoProjectsStep, demoModelStep];
 
 export async function seedDemo(deps: DemoDeps, steps: readonly DemoStep[] = DEMO_STEPS): Promise<DemoSeedResult> {
   const createdAccounts = !(await deps.dataSource.getRepository(User).existsBy({ email: DEMO_USERS[0].email }));
