@@ -13,6 +13,8 @@ export interface RunResult {
   drawCalls: number;
   triangles: number;
   frame_ms: number;
+  /** The CPU part of a frame: issuing it, without waiting for the GPU. */
+  submit_ms: number;
   recolour_ms: number;
   recolourAndFrame_ms: number;
   programs: number;

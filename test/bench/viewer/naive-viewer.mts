@@ -62,12 +62,16 @@ export class NaiveViewer {
     for (const { globalId, material } of this.meshes) material.color.setHex(colours.get(globalId) ?? 0xc8c8c8);
   }
 
-  /** Renders and reads one pixel back, which waits for the GPU to finish the frame. */
-  renderAndWait(): void {
+  render(): void {
     this.camera.lookAt(this.centre);
     this.headlight.position.copy(this.camera.position);
     this.headlight.target.position.copy(this.centre);
     this.renderer.render(this.scene, this.camera);
+  }
+
+  /** Renders and reads one pixel back, which waits for the GPU to finish the frame. */
+  renderAndWait(): void {
+    this.render();
     const gl = this.renderer.getContext();
     gl.readPixels(0, 0, 1, 1, gl.RGBA, gl.UNSIGNED_BYTE, this.pixel);
   }
