@@ -19,7 +19,7 @@ import type { GpuResources } from './gpu-resources';
 /** Edges between faces meeting at more than this angle are drawn; flat-shaded steel has 90° edges. */
 const CREASE_ANGLE_DEG = 30;
 /** Past this many instances an outline would cost more than it tells; the rest stay selected without one. */
-export const MAX_OUTLINED_INSTANCES = 300;
+const MAX_OUTLINED_INSTANCES = 300;
 
 const _matrix = /*@__PURE__*/ new Matrix4();
 
