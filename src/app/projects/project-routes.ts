@@ -52,11 +52,7 @@ export const projectRoutes: Routes = [
   sectionRoute('shear-results', { loadChildren: () => import('../results/results-routes').then((m) => m.resultsRoutes) }),
   sectionRoute('checks', { loadChildren: () => import('../checks/checks-routes').then((m) => m.checksRoutes) }),
   placeholderRoute('3d-view', 'The model coloured by utilisation, with a legend.', []),
-  placeholderRoute('findings', 'Overstressed webs tracked from open to verified or accepted.', [
-    { label: 'Create finding', icon: 'add_comment', permission: 'finding.create' },
-    { label: 'Verify findings', icon: 'verified', permission: 'finding.verify' },
-    { label: 'Export BCF, PDF or CSV', icon: 'download', permission: 'export' },
-  ]),
+  sectionRoute('findings', { loadChildren: () => import('../findings/findings-routes').then((m) => m.findingsRoutes) }),
   sectionRoute('members', {
     loadComponent: () => import('./project-members/project-members').then((m) => m.ProjectMembers),
   }),

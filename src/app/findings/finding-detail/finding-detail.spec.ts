@@ -1,0 +1,111 @@
+import { HttpTestingController } from '@angular/common/http/testing';
+import { CSRF_TOKEN_URL } from '../../core/csrf.interceptor';
+import { nextRequest, settle } from '../../core/http.testing';
+import { ProjectRole } from '../../core/permissions';
+import { TEST_PROJECT_ID } from '../../core/session.testing';
+import { configureProjectPagesForTests, openProjectSection } from '../../projects/project.testing';
+import { FindingDetail as Detail } from '../finding';
+import { TEST_MEMBERS, testDetail, testFinding } from '../findings.testing';
+
+const findingApi = `/api/projects/${TEST_PROJECT_ID}/findings/finding-1`;
+
+describe('FindingDetail', () => {
+  let backend: HttpTestingController;
+
+  // The route loads the page lazily; transforming it and Material on first use can outlast a test's timeout.
+  beforeAll(() => import('./finding-detail'), 60_000);
+
+  beforeEach(() => {
+    backend = configureProjectPagesForTests();
+  });
+
+  afterEach(() => backend.verify());
+
+  async function open(role: ProjectRole, detail: Detail): Promise<HTMLElement> {
+    const harness = await openProjectSection(role, 'findings/finding-1');
+    (await nextRequest(backend, findingApi)).flush(detail);
+    (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}/members`)).flush({ members: TEST_MEMBERS });
+    await settle();
+    return harness.routeNativeElement!.querySelector<HTMLElement>('tl-finding-detail')!;
+  }
+
+  const buttons = (page: HTMLElement) => [...page.querySelectorAll('.status-actions button')].map((button) => button.textContent!.trim());
+
+  async function answerWrite(method: string, url: string, body: object): Promise<unknown> {
+    (await nextRequest(backend, CSRF_TOKEN_URL)).flush({ token: 't' });
+    const request = await nextRequest(backend, { method, url });
+    request.flush(body);
+    return request.request.body;
+  }
+
+  it('offers the status changes the server allows and links to the 3D view at the finding', async () => {
+    const page = await open('engineer', testDetail({ allowedTransitions: ['in-progress', 'resolved'] }));
+    expect(page.querySelector('h1')!.textContent!.replace(/\s+/g, ' ').trim()).toBe('F-0012 Web shear over capacity: G-101');
+    expect(buttons(page)).toEqual(['construction Start work', 'task_alt Mark resolved']);
+    expect(page.querySelector('.view-link')!.getAttribute('href')).toBe(`/projects/${TEST_PROJECT_ID}/3d-view?viewpoint=finding-1`);
+    expect(page.querySelector('.history li')!.textContent!.replace(/\s+/g, ' ')).toContain('System raised the finding');
+    expect(page.querySelector('tl-cautions-notice')).not.toBeNull();
+    // Engineers do not assign.
+    expect(page.querySelector<HTMLElement>('.triage mat-select')!.getAttribute('aria-disabled')).toBe('true');
+
+    page.querySelectorAll<HTMLButtonElement>('.status-actions button')[1].click();
+    expect(await answerWrite('POST', `${findingApi}/transitions`, { finding: testFinding({ status: 'resolved' }) })).toEqual({ to: 'resolved' });
+    (await nextRequest(backend, findingApi)).flush(testDetail({ finding: testFinding({ status: 'resolved' }) }));
+    await settle();
+    expect(page.querySelector('[role=status]')!.textContent).toContain('F-0012 is now Resolved.');
+  });
+
+  it('shows the snapshot as the way into the 3D view when there is one', async () => {
+    const page = await open('reviewer', testDetail({ finding: testFinding({ hasSnapshot: true, kind: 'manual' }) }));
+    expect(page.querySelector('.view-link img')!.getAttribute('src')).toBe(`${findingApi}/snapshot.png`);
+  });
+
+  it('asks a reviewer for the justification before accepting, and sends it', async () => {
+    const page = await open('reviewer', testDetail({ allowedTransitions: ['verified', 'open', 'accepted'] }));
+    expect(buttons(page)).toEqual(['verified Verify', 'undo Reopen', 'gavel Accept as is…']);
+    page.querySelectorAll<HTMLButtonElement>('.status-actions button')[2].click();
+    await settle();
+    const dialog = document.querySelector<HTMLElement>('tl-accept-dialog')!;
+    dialog.querySelector<HTMLButtonElement>('button[type=submit]')!.click();
+    await settle();
+    expect(dialog.textContent).toContain('Write why the finding may stay as it is.');
+    const text = dialog.querySelector<HTMLTextAreaElement>('textarea')!;
+    text.value = '  End plate to S-410 carries the shear.  ';
+    text.dispatchEvent(new Event('input'));
+    dialog.querySelector<HTMLButtonElement>('button[type=submit]')!.click();
+    const accepted = testFinding({ status: 'accepted', justification: 'End plate to S-410 carries the shear.' });
+    expect(await answerWrite('POST', `${findingApi}/transitions`, { finding: accepted })).toEqual({
+      to: 'accepted',
+      justification: 'End plate to S-410 carries the shear.',
+    });
+    (await nextRequest(backend, findingApi)).flush(testDetail({ finding: accepted }));
+    await settle();
+    expect(page.querySelector('.justification')!.textContent).toContain('End plate to S-410 carries the shear.');
+  });
+
+  it('lets a coordinator assign and set the priority, sending only what changed', async () => {
+    const page = await open('coordinator', testDetail());
+    page.querySelector<HTMLElement>('.triage mat-select')!.click();
+    await settle();
+    [...document.querySelectorAll<HTMLElement>('mat-option')].find((option) => option.textContent!.trim() === 'Test engineer')!.click();
+    await settle();
+    page.querySelector<HTMLButtonElement>('.triage button[type=submit]')!.click();
+    expect(await answerWrite('PATCH', findingApi, { finding: testFinding() })).toEqual({ assigneeId: 'user-engineer' });
+    (await nextRequest(backend, findingApi)).flush(testDetail());
+    await settle();
+  });
+
+  it('posts a comment and clears the box', async () => {
+    const page = await open('engineer', testDetail());
+    const box = page.querySelector<HTMLTextAreaElement>('.comment-form textarea')!;
+    box.value = '@reviewer@example.test the web plate is now 12 mm';
+    box.dispatchEvent(new Event('input'));
+    page.querySelector<HTMLButtonElement>('.comment-form button[type=submit]')!.click();
+    const comment = { id: 'k1', guid: 'g', author: { id: 'user-engineer', name: 'Test engineer' }, text: box.value, createdAt: '2026-03-06T10:00:00Z' };
+    expect(await answerWrite('POST', `${findingApi}/comments`, { comment })).toEqual({ text: '@reviewer@example.test the web plate is now 12 mm' });
+    (await nextRequest(backend, findingApi)).flush(testDetail({ comments: [comment] }));
+    await settle();
+    expect(box.value).toBe('');
+    expect(page.querySelector('.comments li')!.textContent).toContain('the web plate is now 12 mm');
+  });
+});
