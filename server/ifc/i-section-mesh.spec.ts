@@ -1,6 +1,6 @@
 import { findSection, toSectionInput } from '../catalogue/catalogue';
 import { sectionProperties } from '../engine/section-properties';
-import { extrudedMesh, iSectionOutline, type Point2, triangulate } from './i-section-mesh';
+import { extrudedMesh, iSectionOutline, outlineWithCap, type Point2, triangulate } from './i-section-mesh';
 
 function shoelace(points: readonly Point2[]): number {
   let twice = 0;
@@ -55,7 +55,7 @@ describe('triangulate and extrudedMesh', () => {
   });
 
   it('encloses area × length with outward faces (divergence theorem)', () => {
-    const { vertices, indices } = extrudedMesh(outline, [0, 0, 1], 6000);
+    const { vertices, indices } = extrudedMesh(outlineWithCap(outline), [0, 0, 1], 6000);
     let volume = 0;
     for (let t = 0; t < indices.length; t += 3) {
       const [a, b, c] = [indices[t], indices[t + 1], indices[t + 2]].map((i) => [vertices[i * 6], vertices[i * 6 + 1], vertices[i * 6 + 2]]);

@@ -72,36 +72,62 @@ export function triangulate(polygon: readonly Point2[]): number[] {
   return triangles;
 }
 
+/** An outline with its cap triangles, worked out once per profile. */
+export interface Outline {
+  points: readonly Point2[];
+  cap: readonly number[];
+}
+
+export function outlineWithCap(points: readonly Point2[]): Outline {
+  return { points, cap: triangulate(points) };
+}
+
 /**
- * Prism of `outline` (in the solid's xy plane, model units) swept by `direction × depth`: caps and flat-shaded sides,
- * as x, y, z, nx, ny, nz per vertex.
+ * Prism of the outline (in the solid's xy plane, model units) swept by `direction × depth`: caps and flat-shaded
+ * sides, as x, y, z, nx, ny, nz per vertex.
  */
-export function extrudedMesh(outline: readonly Point2[], direction: Vec3, depth: number): { vertices: Float32Array; indices: Uint32Array } {
-  const n = outline.length;
-  const cap = triangulate(outline);
-  const vertices = new Float32Array((2 * n + 4 * n) * 6);
-  const indices: number[] = [];
+export function extrudedMesh(outline: Outline, direction: Vec3, depth: number): { vertices: Float32Array; indices: Uint32Array } {
+  const { points, cap } = outline;
+  const n = points.length;
+  const vertices = new Float32Array(6 * n * 6);
+  const indices = new Uint32Array(2 * cap.length + 6 * n);
   const [dx, dy, dz] = [direction[0] * depth, direction[1] * depth, direction[2] * depth];
   let v = 0;
-  const put = (x: number, y: number, z: number, normal: Vec3): number => {
-    vertices.set([x, y, z, normal[0], normal[1], normal[2]], v * 6);
+  const put = (x: number, y: number, z: number, nx: number, ny: number, nz: number): number => {
+    const at = v * 6;
+    vertices[at] = x;
+    vertices[at + 1] = y;
+    vertices[at + 2] = z;
+    vertices[at + 3] = nx;
+    vertices[at + 4] = ny;
+    vertices[at + 5] = nz;
     return v++;
   };
-  const bottom = outline.map(([x, y]) => put(x, y, 0, [0, 0, -1]));
-  const top = outline.map(([x, y]) => put(x + dx, y + dy, dz, [0, 0, 1]));
+  for (const [x, y] of points) put(x, y, 0, 0, 0, -1);
+  for (const [x, y] of points) put(x + dx, y + dy, dz, 0, 0, 1);
+  let i = 0;
   for (let t = 0; t < cap.length; t += 3) {
-    indices.push(top[cap[t]], top[cap[t + 1]], top[cap[t + 2]]);
-    indices.push(bottom[cap[t]], bottom[cap[t + 2]], bottom[cap[t + 1]]);
+    indices[i++] = n + cap[t];
+    indices[i++] = n + cap[t + 1];
+    indices[i++] = n + cap[t + 2];
+    indices[i++] = cap[t];
+    indices[i++] = cap[t + 2];
+    indices[i++] = cap[t + 1];
   }
-  for (let i = 0; i < n; i++) {
-    const [x0, y0] = outline[i];
-    const [x1, y1] = outline[(i + 1) % n];
-    const normal = normalize(cross([x1 - x0, y1 - y0, 0], direction)) ?? [0, 0, 1];
-    const a = put(x0, y0, 0, normal);
-    const b = put(x1, y1, 0, normal);
-    const c = put(x1 + dx, y1 + dy, dz, normal);
-    const d = put(x0 + dx, y0 + dy, dz, normal);
-    indices.push(a, b, c, a, c, d);
+  for (let k = 0; k < n; k++) {
+    const [x0, y0] = points[k];
+    const [x1, y1] = points[(k + 1) % n];
+    const [nx, ny, nz] = normalize(cross([x1 - x0, y1 - y0, 0], direction)) ?? [0, 0, 1];
+    const a = put(x0, y0, 0, nx, ny, nz);
+    const b = put(x1, y1, 0, nx, ny, nz);
+    const c = put(x1 + dx, y1 + dy, dz, nx, ny, nz);
+    const d = put(x0 + dx, y0 + dy, dz, nx, ny, nz);
+    indices[i++] = a;
+    indices[i++] = b;
+    indices[i++] = c;
+    indices[i++] = a;
+    indices[i++] = c;
+    indices[i++] = d;
   }
-  return { vertices, indices: Uint32Array.from(indices) };
+  return { vertices, indices };
 }

@@ -10,7 +10,7 @@ import { type Mat4, transformPoint, type Vec3 } from './matrix4';
 import { MaterialReader, type MaterialReading } from './material-reader';
 import { SectionResolver, type SectionOutcome } from './member-section';
 import type { MemberFlag, MemberMaterial, MemberRecord, MemberStatus, Point3_mm } from './model-read-result';
-import { readObjectPlacement } from './placement-reader';
+import { PlacementResolver } from './placement-reader';
 import { ProfileReader } from './profile-reader';
 import { type ElementShape, type MemberLine, ShapeReader, type SweptSolid } from './shape-reader';
 import { SpatialIndex } from './spatial-index';
@@ -35,12 +35,6 @@ export interface MemberSolid {
   placement: Mat4;
 }
 
-export interface MemberReading {
-  record: MemberRecord;
-  /** Present for members with a usable section and a swept body. */
-  solid?: MemberSolid;
-}
-
 /** IfcElementType.PredefinedType: position 9 of IfcBeamType, IfcColumnType and IfcMemberType. */
 const TYPE_PREDEFINED_AT = 9;
 const UNSET_PREDEFINED = new Set(['NOTDEFINED']);
@@ -51,6 +45,7 @@ export class MemberReader {
   private readonly shapes: ShapeReader;
   private readonly profiles: ProfileReader;
   private readonly sections: SectionResolver;
+  private readonly placements: PlacementResolver;
   private readonly typePredefined = new Map<number, string | null>();
 
   constructor(
@@ -62,6 +57,7 @@ export class MemberReader {
     this.shapes = new ShapeReader(lines, options.radiansPerAngleUnit);
     this.profiles = new ProfileReader(lines, options.ifc2x3, options.scaleToMm, options.radiansPerAngleUnit);
     this.sections = new SectionResolver(options.projectCatalogue);
+    this.placements = new PlacementResolver(lines);
   }
 
   /** Express ids of all beams, columns and members, in file order. */
@@ -69,7 +65,7 @@ export class MemberReader {
     return MEMBER_TYPES.flatMap((type) => this.lines.idsOfType(type, true)).sort((a, b) => a - b);
   }
 
-  read(expressId: number): MemberReading {
+  read(expressId: number): MemberRecord {
     const line = this.lines.line(expressId);
     const args = line?.args ?? [];
     const typeId = this.spatial.typeOf(expressId);
@@ -84,7 +80,7 @@ export class MemberReader {
     const outcome = this.section(shape, material, objectType);
     flags.push(...(outcome.status === 'not-applicable' ? [] : outcome.flags));
 
-    const placement = readObjectPlacement(this.lines, refOf(args[5]));
+    const placement = this.placements.placement(refOf(args[5]));
     const line3d = this.memberLine(shape, solid, placement);
     if (line3d?.curved) flags.push('curved');
     if (shape.hasRepresentation && !line3d) flags.push('no-axis');
@@ -121,7 +117,17 @@ export class MemberReader {
       section: outcome.status === 'ok' ? outcome.section : null,
       flags: [...new Set(flags)],
     };
-    return outcome.status === 'ok' && solid ? { record, solid: { solid, placement } } : { record };
+    return record;
+  }
+
+  /**
+   * The first swept solid of a member and its placement, read again on demand: only the few members web-ifc cannot
+   * tessellate need it, so it is not kept for all of them.
+   */
+  solidOf(expressId: number): MemberSolid | undefined {
+    const args = this.lines.line(expressId)?.args ?? [];
+    const solid = this.shapes.read(refOf(args[6])).solids[0];
+    return solid ? { solid, placement: this.placements.placement(refOf(args[5])) } : undefined;
   }
 
   /** Frame, direction and depth of a member's extruded solid, for building its mesh (undefined if not extruded). */

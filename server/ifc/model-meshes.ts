@@ -4,13 +4,15 @@
  * from the first piece, so that 32-bit vertex positions keep millimetre precision.
  */
 import type { IfcAPI } from 'web-ifc';
-import { ElementMeshBuilder, type ElementMesh, FLOATS_PER_VERTEX } from './element-mesh';
+import { ElementMeshBuilder, type ElementMesh, FLOATS_PER_VERTEX, MeshStore } from './element-mesh';
 
 /** Beyond this distance from the origin (metres, any axis) the model is shifted. */
 const SHIFT_BEYOND_M = 1000;
 
 export interface StreamedMeshes {
   meshes: ElementMesh[];
+  /** Where the meshes are stored; further meshes of the model go there too. */
+  store: MeshStore;
   /** Subtracted from every position, in glTF axes and metres; undefined when web-ifc produced no piece at all. */
   offset: [number, number, number] | undefined;
 }
@@ -27,6 +29,7 @@ interface WasmHeaps {
 
 export function streamModelMeshes(api: IfcAPI, modelId: number, onProgress: (fraction: number) => void): StreamedMeshes {
   const meshes: ElementMesh[] = [];
+  const store = new MeshStore();
   let offset: [number, number, number] | undefined;
   let builder: ElementMeshBuilder | undefined;
   const heaps = api.wasmModule as WasmHeaps;
@@ -36,7 +39,7 @@ export function streamModelMeshes(api: IfcAPI, modelId: number, onProgress: (fra
     for (let i = 0; i < count; i++) {
       const placed = pieces.get(i);
       offset ??= offsetFor(placed.flatTransformation);
-      builder ??= new ElementMeshBuilder(offset);
+      builder ??= new ElementMeshBuilder(offset, store);
       const geometry = api.GetGeometry(modelId, placed.geometryExpressID);
       const vertexPtr = geometry.GetVertexData() / 4;
       const indexPtr = geometry.GetIndexData() / 4;
@@ -50,5 +53,5 @@ export function streamModelMeshes(api: IfcAPI, modelId: number, onProgress: (fra
     if (merged) meshes.push(merged);
     if (total > 0 && (index % 256 === 0 || index === total - 1)) onProgress((index + 1) / total);
   });
-  return { meshes, offset };
+  return { meshes, store, offset };
 }

@@ -7,12 +7,17 @@ import * as path from 'node:path';
 import { IfcAPI, LogLevel, type LoaderSettings } from 'web-ifc';
 import { IfcReadError } from './ifc-read-error';
 import { HEADER_PROBE_BYTES, readStepHeader, type StepHeader, TAIL_PROBE_BYTES } from './step-header';
+import { text, type TypeCodeOf } from './step-line-parser';
+import { StepOffsets } from './step-offsets';
+import { type StepBytes, StepText } from './step-text';
 
 export interface OpenedModel {
   api: IfcAPI;
   modelId: number;
   header: StepHeader;
   byteLength: number;
+  /** The instances' own text, for reading attributes without going through web-ifc. */
+  text: StepText;
   close(): void;
 }
 
@@ -59,20 +64,59 @@ function headerOfBytes(bytes: Uint8Array): StepHeader {
   return readStepHeader(bytes.subarray(0, HEADER_PROBE_BYTES), bytes.subarray(Math.max(0, bytes.byteLength - TAIL_PROBE_BYTES)), bytes.byteLength);
 }
 
-function opened(api: IfcAPI, modelId: number, header: StepHeader, byteLength: number): OpenedModel {
+/** CRC-32 (IEEE 802.3) table: names are looked up by the checksum of their bytes, so no string is built per line. */
+const CRC_TABLE = Uint32Array.from({ length: 256 }, (_, n) => {
+  let c = n;
+  for (let k = 0; k < 8; k++) c = c & 1 ? 0xedb88320 ^ (c >>> 1) : c >>> 1;
+  return c >>> 0;
+});
+
+/** Entity type codes by name bytes (case-insensitive, as STEP names are), asking web-ifc once per distinct name. */
+function typeCodesOf(api: IfcAPI): TypeCodeOf {
+  const codes = new Map<number, number>();
+  return (bytes, start, end) => {
+    let crc = 0xffffffff;
+    for (let i = start; i < end; i++) {
+      const b = bytes[i] >= 0x61 && bytes[i] <= 0x7a ? bytes[i] - 0x20 : bytes[i];
+      crc = CRC_TABLE[(crc ^ b) & 0xff] ^ (crc >>> 8);
+    }
+    let code = codes.get(crc);
+    if (code === undefined) {
+      code = api.GetTypeCodeFromName(text(bytes, start, end).toUpperCase());
+      codes.set(crc, code);
+    }
+    return code;
+  };
+}
+
+function opened(api: IfcAPI, modelId: number, header: StepHeader, source: StepBytes, offsets: StepOffsets): OpenedModel {
   if (modelId < 0) {
     throw new IfcReadError('unreadable', `web-ifc could not open this ${header.fileSchema} file; it may be damaged.`);
   }
-  return { api, modelId, header, byteLength, close: () => api.CloseModel(modelId) };
+  const text = new StepText(source, offsets, typeCodesOf(api));
+  const byteLength = source.kind === 'bytes' ? source.bytes.byteLength : source.size;
+  return {
+    api,
+    modelId,
+    header,
+    byteLength,
+    text,
+    close: () => {
+      text.close();
+      api.CloseModel(modelId);
+    },
+  };
 }
 
 /** Checks the header, then opens the model. Throws IfcReadError for a file that is not a complete, supported IFC. */
 export async function openModel(source: Uint8Array | string, settings: LoaderSettings = {}): Promise<OpenedModel> {
   const loaderSettings: LoaderSettings = { ...settings, ALLOW_INCOMPATIBLE_SCHEMA_ALIASES: false };
+  const offsets = new StepOffsets();
   if (typeof source !== 'string') {
     const header = headerOfBytes(source);
     const api = await ifcApi();
-    return opened(api, api.OpenModel(source, loaderSettings), header, source.byteLength);
+    offsets.scan(source, 0);
+    return opened(api, api.OpenModel(source, loaderSettings), header, { kind: 'bytes', bytes: source }, offsets);
   }
   const fd = fs.openSync(source, 'r');
   try {
@@ -80,12 +124,21 @@ export async function openModel(source: Uint8Array | string, settings: LoaderSet
     const header = headerOfFile(fd, size);
     const api = await ifcApi();
     let chunk = Buffer.alloc(0);
+    // web-ifc reads the file twice, in TAPE_SIZE chunks; the offsets are taken on the first pass only.
+    let scannedTo = 0;
     const modelId = api.OpenModelFromCallback((offset, length) => {
-      if (chunk.length < length) chunk = Buffer.alloc(length);
-      const read = fs.readSync(fd, chunk, 0, length, offset);
-      return chunk.subarray(0, read);
+      const wanted = Math.max(0, Math.min(length, size - offset));
+      // Not zero-filled and no larger than the file: a 64 MB chunk for a small file would only add to the memory used.
+      if (chunk.length < wanted) chunk = Buffer.allocUnsafe(wanted);
+      const read = wanted === 0 ? 0 : fs.readSync(fd, chunk, 0, wanted, offset);
+      const bytes = chunk.subarray(0, read);
+      if (offset === scannedTo && read > 0) {
+        offsets.scan(bytes, offset);
+        scannedTo += read;
+      }
+      return bytes;
     }, loaderSettings);
-    return opened(api, modelId, header, size);
+    return opened(api, modelId, header, { kind: 'file', path: source, size }, offsets);
   } finally {
     fs.closeSync(fd);
   }

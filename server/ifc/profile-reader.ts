@@ -142,14 +142,14 @@ export class ProfileReader {
 
   /**
    * IfcDerivedProfileDef: the parent profile through a 2D operator. A uniform scale and a mirror about the x axis
-   * (which swaps the flanges) are applied; a mirror about the web leaves an I-section as it is. IfcMirroredProfileDef
-   * has its operator derived ('*'), so its parent sits one position earlier.
+   * (which swaps the flanges) are applied; a mirror about the web leaves an I-section as it is (IfcMirroredProfileDef,
+   * whose operator is derived: '*').
    */
   private derived(mirrored: boolean, args: StepValue[], ifcType: string, name: string | null, depth: number): ProfileReading {
     const parentId = refOf(args[2]);
     if (parentId === undefined || depth >= MAX_DERIVATION_DEPTH) return { kind: 'unreadable', ifcType, name, reason: `its derived profile '${name ?? ifcType}' has no readable parent profile` };
     const parent = this.readUncached(parentId, depth + 1);
-    const label = textOf(args[mirrored ? 3 : 4]);
+    const label = textOf(args[4]);
     const ownName = name ?? label ?? parent.name;
     if (parent.kind === 'not-i-shape' || parent.kind === 'unreadable') return { ...parent, name: ownName };
     const flags: MemberFlag[] = [...parent.flags, 'derived-profile'];

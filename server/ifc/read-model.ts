@@ -10,10 +10,10 @@ import type { CatalogueSection } from '../catalogue/catalogue-section';
 import type { EnYieldRule, GradeId } from '../engine/grades';
 import { ElementMeshBuilder, type ElementMesh } from './element-mesh';
 import { type GlbElement, glbBytes, writeGlbFile } from './glb-writer';
-import { extrudedMesh, iSectionOutline } from './i-section-mesh';
+import { extrudedMesh, iSectionOutline, type Outline, outlineWithCap } from './i-section-mesh';
 import { lengthUnitOf } from './length-unit';
 import { fromColumns, type Mat4, multiply, type Vec3 } from './matrix4';
-import { type MemberReading, MemberReader } from './member-reader';
+import { MemberReader } from './member-reader';
 import { offsetFor, streamModelMeshes } from './model-meshes';
 import type { MemberRecord, ModelReadResult } from './model-read-result';
 import { openModel } from './open-model';
@@ -51,18 +51,25 @@ function baseName(path: string): string {
 }
 
 interface OwnMeshInput {
-  reading: MemberReading;
+  record: MemberRecord;
   reader: MemberReader;
   toGltf: Mat4;
   scaleToMm: number;
+  /** Outlines by profile: members of one profile share the same profile object. */
+  outlines: WeakMap<object, Outline>;
 }
 
 /** Transform and model-unit mesh of a member's extruded I-section, built by us; undefined if it is not extruded. */
-function ownMeshPieces({ reading, reader, toGltf, scaleToMm }: OwnMeshInput): { vertices: Float32Array; indices: Uint32Array; transform: Mat4 } | undefined {
-  const { record, solid } = reading;
+function ownMeshPieces({ record, reader, toGltf, scaleToMm, outlines }: OwnMeshInput): { vertices: Float32Array; indices: Uint32Array; transform: Mat4 } | undefined {
+  const { profile } = record;
+  const solid = profile ? reader.solidOf(record.expressId) : undefined;
   const extrusion = solid && reader.extrusionOf(solid.solid);
-  if (!extrusion || !record.profile) return undefined;
-  const outline = iSectionOutline(record.profile).map(([x, y]) => [x / scaleToMm, y / scaleToMm] as [number, number]);
+  if (!extrusion || !profile) return undefined;
+  let outline = outlines.get(profile);
+  if (!outline) {
+    outline = outlineWithCap(iSectionOutline(profile).map(([x, y]) => [x / scaleToMm, y / scaleToMm] as [number, number]));
+    outlines.set(profile, outline);
+  }
   const { vertices, indices } = extrudedMesh(outline, extrusion.direction, extrusion.depth);
   return { vertices, indices, transform: multiply(toGltf, multiply(solid.placement, extrusion.frame)) };
 }
@@ -84,7 +91,7 @@ export async function readModel(source: Uint8Array | string, options: ReadModelO
   const opened = await openModel(source);
   try {
     progress('parse', 1);
-    const lines = new StepLines(opened.api, opened.modelId);
+    const lines = new StepLines(opened.api, opened.modelId, opened.text);
     const units = projectUnits(lines);
     const length = lengthUnitOf(units);
     const reader = new MemberReader(lines, {
@@ -96,14 +103,13 @@ export async function readModel(source: Uint8Array | string, options: ReadModelO
       projectCatalogue: options.projectCatalogue,
     });
     const ids = reader.memberIds();
-    const readings: MemberReading[] = [];
+    const members: MemberRecord[] = [];
     progress('members', 0);
     ids.forEach((id, i) => {
-      readings.push(reader.read(id));
+      members.push(reader.read(id));
       if (i % 1000 === 999) progress('members', (i + 1) / ids.length);
     });
     progress('members', 1);
-    const members = readings.map((r) => r.record);
 
     let glbResult: Uint8Array | undefined;
     let meshedElements = 0;
@@ -111,26 +117,27 @@ export async function readModel(source: Uint8Array | string, options: ReadModelO
     if (glb !== 'none') {
       progress('geometry', 0);
       const streamed = streamModelMeshes(opened.api, opened.modelId, (f) => progress('geometry', 0.9 * f));
-      const byId = new Map<number, MemberReading>(readings.map((r) => [r.record.expressId, r]));
+      const byId = new Map<number, MemberRecord>(members.map((m) => [m.expressId, m]));
       const elements: GlbElement[] = [];
       const meshed = new Set<number>();
       for (const mesh of streamed.meshes) {
-        const member = byId.get(mesh.expressId)?.record;
+        const member = byId.get(mesh.expressId);
         meshed.add(mesh.expressId);
         elements.push(member ? { mesh, globalId: member.globalId, ifcClass: member.ifcClass, context: false } : contextElement(lines, mesh));
       }
       const toGltf = gltfFromModel(length.scaleToMm);
       let offset = streamed.offset;
-      for (const reading of readings) {
-        const record: MemberRecord = reading.record;
+      let builder: ElementMeshBuilder | undefined;
+      const outlines = new WeakMap<object, Outline>();
+      for (const record of members) {
         if (meshed.has(record.expressId) || record.flags.includes('no-representation')) continue;
-        const pieces = record.status === 'ok' ? ownMeshPieces({ reading, reader, toGltf, scaleToMm: length.scaleToMm }) : undefined;
+        const pieces = record.status === 'ok' ? ownMeshPieces({ record, reader, toGltf, scaleToMm: length.scaleToMm, outlines }) : undefined;
         if (!pieces) {
           record.flags.push('no-geometry');
           continue;
         }
         offset ??= offsetFor(pieces.transform);
-        const builder = new ElementMeshBuilder(offset);
+        builder ??= new ElementMeshBuilder(offset, streamed.store);
         builder.add(pieces.vertices, pieces.indices, pieces.transform);
         const mesh = builder.take(record.expressId);
         if (!mesh) continue;

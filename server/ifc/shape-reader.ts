@@ -97,6 +97,7 @@ export class ShapeReader {
     return shape;
   }
 
+  /** Solids inside a representation map are shared by every occurrence: read each once. */
   private mappedSolidArgs(itemId: number): StepValue[] {
     let args = this.mappedSolids.get(itemId);
     if (!args) {
@@ -107,6 +108,7 @@ export class ShapeReader {
   }
 
   private collect(itemId: number, transform: Mat4 | undefined, clipped: boolean, shape: ElementShape, depth: number): void {
+    // The type alone first: brep and tessellated bodies can be long lines that are never needed.
     const type = this.lines.typeOf(itemId);
     if (depth > MAX_DEPTH || type === 0) return;
     if (SWEPT.has(type)) {

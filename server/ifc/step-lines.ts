@@ -1,11 +1,10 @@
 /**
- * Positional access to the lines of an open model through web-ifc's raw line data. Raw reads cost a fraction of
- * GetLine (which builds a typed object per value), and the reader makes tens of thousands of them per model.
- *
- * Positions follow the IFC schema's attribute order, except that web-ifc leaves out attributes written '*' (derived
- * in a subtype); none of the entities read positionally here has such attributes, the units are read by name instead.
+ * Positional access to the lines of an open model: attributes by their position in the IFC schema's attribute order
+ * ('*' and '$' both read as null), parsed from the file's own text. web-ifc answers the questions it answers cheaply
+ * (entity types, ids by type, placements) and the few by-name reads (units).
  */
 import type { IfcAPI } from 'web-ifc';
+import type { StepText } from './step-text';
 
 export type StepValue = null | StepValue[] | { type: number; value: unknown; typecode?: number };
 
@@ -71,34 +70,29 @@ export function booleanOf(value: StepValue | undefined): boolean | undefined {
   return v.value === 'T' ? true : v.value === 'F' ? false : undefined;
 }
 
-interface RawLine {
-  type?: number;
-  arguments?: unknown[];
-}
-
 export class StepLines {
   private readonly typeNames = new Map<number, string>();
-  private readonly readRaw: (id: number) => RawLine | undefined;
 
+  /**
+   * Lines are parsed from the file's own bytes rather than read through web-ifc: its per-line marshalling cost
+   * several microseconds, and the reader makes tens of thousands of reads per model.
+   */
   constructor(
     readonly api: IfcAPI,
     readonly modelId: number,
-  ) {
-    // The wasm module's single-line read skips the id-vector round trip of GetRawLineData (about 10 % per read).
-    const wasm = api.wasmModule as { GetLine?: (model: number, id: number) => RawLine } | undefined;
-    this.readRaw = typeof wasm?.GetLine === 'function' ? (id) => wasm.GetLine!(modelId, id) : (id) => api.GetRawLineData(modelId, id);
-  }
+    private readonly text: StepText,
+  ) {}
 
   /** The line with this express id, or undefined when the file has none. */
   line(id: number | undefined): StepLine | undefined {
     if (id === undefined) return undefined;
-    const raw = this.readRaw(id);
-    return raw && typeof raw.type === 'number' ? { id, type: raw.type, args: (raw.arguments ?? []) as StepValue[] } : undefined;
+    const parsed = this.text.line(id);
+    return parsed ? { id, type: parsed.type, args: parsed.args } : undefined;
   }
 
-  /** Entity type code of a line (0 when absent); much cheaper than reading the line. */
+  /** Entity type code of a line (0 when absent), without parsing its arguments. */
   typeOf(id: number | undefined): number {
-    return id === undefined ? 0 : this.api.GetLineType(this.modelId, id) || 0;
+    return id === undefined ? 0 : this.text.typeOf(id);
   }
 
   /** Schema spelling of a type code, e.g. 'IfcBeamStandardCase'. */
