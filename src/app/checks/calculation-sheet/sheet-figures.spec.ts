@@ -2,7 +2,7 @@ import { expectClose } from '../../../../server/engine/expect-close';
 import { sectionProperties } from '../../../../server/engine/section-properties';
 import { shearStressProfile } from '../../../../server/engine/shear-stress';
 import { iSection } from '../../../../server/engine/test-sections';
-import { figureFrame, sectionFigure, stressFigure } from './sheet-figures';
+import { figureFrame, PLOT_WIDTH_MM, sectionFigure, stressFigure } from './sheet-figures';
 
 // IPE 300: h 300, b 150, tw 7.1, tf 10.7, r 15 mm (EN 10365 dimensions).
 const IPE_300 = iSection(300, 7.1, [150, 10.7, 15]);
@@ -39,9 +39,9 @@ describe('section figure', () => {
   const figure = sectionFigure(props, frame);
 
   it('picks the largest drawing-office scale at which the section fits its paper box', () => {
-    // 150 × 300 mm in a 70 × 125 mm box: at 1:2 it would be 150 mm tall; at 1:2.5 it is 60 × 120 mm.
+    // 150 × 300 mm in a 62 × 125 mm box: at 1:2 it would be 150 mm tall; at 1:2.5 it is 60 × 120 mm.
     expect(frame.scale).toBe(2.5);
-    expect(figure.widthPaper_mm).toBeCloseTo((150 + (16 + 18) * 2.5) / 2.5, 6);
+    expect(figure.widthPaper_mm).toBeCloseTo(150 / 2.5 + 16 + 18, 6);
     expect(frame.heightPaper_mm).toBeCloseTo(300 / 2.5 + 24, 6);
   });
 
@@ -61,10 +61,19 @@ describe('section figure', () => {
     expect(Math.min(...atMid)).toBeCloseTo(3.55, 6);
   });
 
+  it('keeps both figures of the widest section that fits its box within an A4 page inside 12 mm margins', () => {
+    // 300 mm wide is 60 mm at 1:5, nearly the whole 62 mm box.
+    const wide = sectionProperties(iSection(500, 12, [300, 28, 27]));
+    const wideFrame = figureFrame(wide);
+    const plot = stressFigure({ samples: [], tauMax_MPa: 100, tauMaxAt_mm: 250, junctions: [], webAverage: { tau_MPa: 90, from_mm: 28, to_mm: 472 } }, wideFrame);
+    expect(sectionFigure(wide, wideFrame).widthPaper_mm + plot.widthPaper_mm).toBeLessThanOrEqual(210 - 2 * 12);
+  });
+
   it('dimensions d, b, tf, tw and r, with d spanning the whole depth to scale', () => {
     expect(figure.dimensions.map((dimension) => dimension.label)).toEqual(['d = 300', 'b = 150', 'tf = 10.7', 'tw = 7.1', 'r = 15']);
     const depth = figure.dimensions.find((dimension) => dimension.key === 'd')!;
     expect(Math.abs(depth.y1 - depth.y2)).toBeCloseTo(300, 6);
+    expect(depth.vertical).toBe(true);
     const tw = figure.dimensions.find((dimension) => dimension.key === 'tw')!;
     expect(tw.x2 - tw.x1).toBeCloseTo(7.1, 6);
     // Text prints 2.6 mm high whatever the scale.
@@ -85,7 +94,7 @@ describe('stress figure', () => {
     const [, sectionTop, , sectionHeight] = numbers(section.viewBox);
     const [, plotTop, , plotHeight] = numbers(figure.viewBox);
     expect([plotTop, plotHeight]).toEqual([sectionTop, sectionHeight]);
-    // 180 × 420 mm needs 1:5 in the 70 × 125 mm box (1:2.5 would be 168 mm tall).
+    // 180 × 420 mm needs 1:5 in the 60 × 125 mm box (1:2.5 would be 168 mm tall).
     expect(frame.scale).toBe(5);
   });
 
@@ -95,9 +104,9 @@ describe('stress figure', () => {
     expect(figure.peak.label).toBe('τmax = 28.43 MPa');
     // Mid-depth of a doubly symmetric section: svg y = 420 − 210.
     expect(figure.peak.y).toBeCloseTo(210, 6);
-    // Axis 0–30 MPa (round ticks) over 60 mm of paper at 1:5.
+    // Axis 0–30 MPa (round ticks) over the plot's paper width at 1:5.
     expect(figure.ticks.map((tick) => tick.label)).toEqual(['0', '10', '20', '30']);
-    expect(figure.peak.x).toBeCloseTo((profile.tauMax_MPa / 30) * 60 * 5, 3);
+    expect(figure.peak.x).toBeCloseTo((profile.tauMax_MPa / 30) * PLOT_WIDTH_MM * 5, 3);
   });
 
   it('shows the jump at each web–flange junction: τmin in the web to b/t times less in the flange', () => {

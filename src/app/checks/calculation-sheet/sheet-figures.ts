@@ -11,15 +11,17 @@ import type { SectionProperties } from '../../../../server/engine/section-proper
 import { formatNumber } from '../../../../server/engine/trace';
 import { drawingScale, niceTicks, PT_PER_MM, sectionOutline_mm } from '../../../../server/reports/section-outline';
 
-/** Paper room for the section on an A4 sheet beside the plot (mm). */
-export const SECTION_BOX_MM = { width: 70, height: 125 } as const;
-/** Paper width of the τ axis (mm). */
-export const PLOT_WIDTH_MM = 60;
+/**
+ * Paper room for the section and the width of the τ axis (mm), chosen so that both figures with their margins stay
+ * within the 186 mm an A4 page leaves inside 12 mm margins.
+ */
+export const SECTION_BOX_MM = { width: 62, height: 125 } as const;
+export const PLOT_WIDTH_MM = 50;
 /** Paper sizes (mm) of text, arrowheads, and the margins that hold the dimensions and labels. */
 export const TEXT_MM = 2.6;
 const ARROW_MM = 1.6;
 const MARGIN_MM = { top: 12, bottom: 12, left: 16, right: 18 } as const;
-const PLOT_MARGIN_MM = { left: 8, right: 34 } as const;
+const PLOT_MARGIN_MM = { left: 8, right: 30 } as const;
 
 export interface FigureFrame {
   /** The drawing scale 1:n. */
@@ -45,6 +47,8 @@ export interface DimensionLine extends Segment {
   labelX: number;
   labelY: number;
   anchor: 'start' | 'middle' | 'end';
+  /** Text turned to read upwards along a vertical dimension line. */
+  vertical: boolean;
   /** Extension lines from the section to the dimension line. */
   extensions: Segment[];
   /** Arrowheads at the ends of the line (a leader has one, at its start). */
@@ -135,7 +139,8 @@ export function sectionFigure(props: SectionProperties, frame: FigureFrame = fig
     label: `d = ${formatNumber(d)}`,
     labelX: dimX - gap,
     labelY: y(d / 2),
-    anchor: 'end',
+    anchor: 'middle',
+    vertical: true,
     extensions: [
       { x1: -bottom.width_mm / 2 - gap, y1: y(0), x2: dimX - gap, y2: y(0) },
       { x1: -top.width_mm / 2 - gap, y1: y(d), x2: dimX - gap, y2: y(d) },
@@ -152,6 +157,7 @@ export function sectionFigure(props: SectionProperties, frame: FigureFrame = fig
     labelX: 0,
     labelY: labelBelow ? atY + gap + text : atY - gap,
     anchor: 'middle',
+    vertical: false,
     extensions: [
       { x1: -flangeWidth / 2, y1: edgeY, x2: -flangeWidth / 2, y2: atY },
       { x1: flangeWidth / 2, y1: edgeY, x2: flangeWidth / 2, y2: atY },
@@ -169,6 +175,7 @@ export function sectionFigure(props: SectionProperties, frame: FigureFrame = fig
     labelX: tfX + gap,
     labelY: y(d - top.thickness_mm / 2) + text / 3,
     anchor: 'start',
+    vertical: false,
     extensions: [{ x1: top.width_mm / 2 + gap, y1: y(d - top.thickness_mm), x2: tfX + gap, y2: y(d - top.thickness_mm) }],
     arrows: 'both',
   };
@@ -184,6 +191,7 @@ export function sectionFigure(props: SectionProperties, frame: FigureFrame = fig
     labelX: input.webThickness_mm / 2 + 6 * n + gap,
     labelY: twY + text / 3,
     anchor: 'start',
+    vertical: false,
     extensions: [{ x1: input.webThickness_mm / 2, y1: twY, x2: input.webThickness_mm / 2 + 6 * n, y2: twY }],
     arrows: 'both',
   };
@@ -229,6 +237,7 @@ function filletLeader(props: SectionProperties, frame: FigureFrame): DimensionLi
     labelX: labelX + 1.5 * n,
     labelY: labelY + (TEXT_MM * n) / 3,
     anchor: 'start',
+    vertical: false,
     extensions: [],
     arrows: 'start',
   };

@@ -38,7 +38,9 @@ describe('RunResults', () => {
     await settle();
 
     const cells = [...table.querySelectorAll('tbody tr td')].map((td) => td.textContent!.replace(/\s+/g, ' ').trim());
-    expect(cells.slice(0, 7)).toEqual(['G-101Girder G-101', 'Level 2', 'IPE 300', 'S355', 'ULS-2', '405.2', '360.5']);
+    expect(table.querySelector('a.member-link')!.textContent).toBe('G-101');
+    expect(table.querySelector('td .sub')!.textContent).toBe('Girder G-101');
+    expect(cells.slice(1, 7)).toEqual(['Level 2', 'IPE 300', 'S355', 'ULS-2', '405.2', '360.5']);
     // Percentages round up, as in reports: 1.1241 → 112.5 %.
     expect(cells[7]).toBe('112.5 %');
     const bar = table.querySelector<HTMLElement>('tl-utilisation-bar .bar')!;

@@ -34,7 +34,7 @@ import { UtilisationBar } from '../utilisation-bar/utilisation-bar';
 // Typing in the number and text filters waits for a pause before asking the server.
 const TYPING_PAUSE_MS = 300;
 
-const COLUMNS = ['tag', 'storey', 'profileName', 'grade', 'governingCombination', 'VEd_kN', 'VRd_kN', 'utilisation', 'status', 'flags', 'view'] as const;
+const COLUMNS = ['tag', 'storey', 'profileName', 'grade', 'governingCombination', 'VEd_kN', 'VRd_kN', 'utilisation', 'status', 'flags'] as const;
 
 interface SummaryCard {
   key: string;
