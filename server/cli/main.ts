@@ -4,10 +4,11 @@
  * with 1, also with a message and no stack trace.
  */
 import { IfcReadError } from '../ifc/ifc-read-error';
+import { checkCommand } from './check-command';
 import { type Command, type CommandIo, UsageError } from './command';
 import { membersCommand } from './members-command';
 
-const COMMANDS: readonly Command[] = [membersCommand];
+const COMMANDS: readonly Command[] = [membersCommand, checkCommand];
 
 const io: CommandIo = {
   out: (text) => process.stdout.write(text),

@@ -233,7 +233,8 @@ describe('shear results', () => {
     });
 
     it('imports results of another model with a loud warning: almost nothing matches', async () => {
-      const content = resultsCsv(Array.from({ length: 20 }, (_, i) => [`GRID-${i}`, 'ULS-1', 10] as const).concat([[members[0].tag!, 'ULS-1', 10]]));
+      const strangers = Array.from({ length: 20 }, (_, i): [string, string, number] => [`GRID-${i}`, 'ULS-1', 10]);
+      const content = resultsCsv([...strangers, [members[0].tag!, 'ULS-1', 10]]);
       const resultSet = await importResults(coordinator, projectId, revision.id, content);
       expect(resultSet.matching).toMatchObject({ keys: 21, matched: 1, unmatchedResults: 20, likelyOtherModel: true });
       expect(resultSet.matching.warning).toBe(

@@ -1,0 +1,197 @@
+/**
+ * `taulens check`, spawned as a child process on the shared buildingSMART samples and on generated frames of our
+ * invented scenario. The child runs the TypeScript sources (as bin.js does when there is no build), so the test sees
+ * this tree and not an older build in dist/.
+ */
+import { spawnSync } from 'node:child_process';
+import * as fs from 'node:fs';
+import * as os from 'node:os';
+import * as path from 'node:path';
+import ExcelJS from 'exceljs';
+import { schemaErrors, schemaForEntry } from '../../test/fixtures/bcf/bcf-schemas';
+import { writeFrameFile } from '../../test/generator/generate-frame';
+import { fromNewtons } from '../engine/units';
+import { openArchive } from '../findings/bcf/bcf-archive-reader';
+import { REPORT_CAUTIONS_TEXT } from '../reports/report-cautions';
+import { dispatch } from './main';
+
+const ROOT = path.resolve(__dirname, '../..');
+const SAMPLES = path.resolve(ROOT, '../shared/samples/ifc');
+const LAUNCH = `require('ts-node').register({ transpileOnly: true, project: ${JSON.stringify(path.join(ROOT, 'tsconfig.server.json'))} });
+require(${JSON.stringify(path.join(__dirname, 'main.ts'))}).run(process.argv.slice(1));`;
+
+function taulens(...args: string[]): { status: number | null; stdout: string; stderr: string } {
+  const run = spawnSync(process.execPath, ['-e', LAUNCH, ...args], { cwd: ROOT, encoding: 'utf8', timeout: 120_000 });
+  return { status: run.status, stdout: run.stdout, stderr: run.stderr };
+}
+
+interface CheckedMember {
+  globalId: string;
+  tag: string | null;
+  name: string | null;
+  status: string;
+  reason?: string;
+  flags: string[];
+  governing: { combination: string; VEd_kN: number; VRd_kN: number; utilisation: number; tauMax_MPa: number; tauAvgWeb_MPa: number } | null;
+  profile: { name: string } | null;
+}
+
+describe('taulens check', () => {
+  let dir: string;
+  let frame: string;
+  const write = (name: string, content: string | Buffer): string => {
+    const file = path.join(dir, name);
+    fs.writeFileSync(file, content);
+    return file;
+  };
+
+  beforeAll(() => {
+    dir = fs.mkdtempSync(path.join(os.tmpdir(), 'taulens-check-cli-'));
+    frame = path.join(dir, 'canteen-frame.ifc');
+    writeFrameFile(frame, { members: 40, unit: 'inch', fileName: 'canteen-frame.ifc' });
+  });
+  afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
+
+  // EN 1993-1-1 §6.2.6 (6.18) with the sample's IPE200 (EN 10365 dimensions 200/100/5.6/8.5/12, S355JR):
+  // A = 2·b·tf + (h − 2tf)·tw + (4 − π)·r² = 2848.4 mm² and Av = A − 2b·tf + (tw + 2r)·tf = 1400.0 mm² (section
+  // tables list 28.48 cm² and 14.00 cm², from memory), above η·hw·tw = 1229.8 mm²; fy = 355 MPa (tf ≤ 16 mm), so
+  // Vpl,Rd = 1400 × 355/√3 = 286.94 kN [calc].
+  it('checks the IPE200 beams of a buildingSMART sample by Name against Vpl,Rd = 286.9 kN (EN 1993-1-1)', () => {
+    const forces = write('sample-forces.csv', 'member,combination,shear\nTopMid,ULS-1,143.47\nBotMid,ULS-1,-200\nBotLeft,ULS-1,300\n');
+    const run = taulens('check', path.join(SAMPLES, 'beam-varying-cardinal-points.ifc'), '--forces', forces, '--force-unit', 'kN', '--standard', 'en1993-1-1', '--json');
+    expect(run.stderr).toBe('');
+    expect(run.status).toBe(1);
+    const output = JSON.parse(run.stdout);
+    expect(output).toMatchObject({ cautions: REPORT_CAUTIONS_TEXT, standard: 'en1993-1-1', unmatchedForces: [], forces: { rows: 3, keys: 3, forceUnit: 'kN' } });
+    const byName = new Map<string, CheckedMember>(output.members.map((m: CheckedMember) => [m.name, m]));
+    const topMid = byName.get('TopMid')!;
+    expect(topMid.status).toBe('pass');
+    expect(Math.abs(topMid.governing!.VRd_kN - 286.94)).toBeLessThan(0.01);
+    expect(topMid.governing!.utilisation).toBeCloseTo(0.5, 3);
+    expect(byName.get('BotMid')!.governing!.VEd_kN).toBe(-200);
+    expect(byName.get('BotLeft')!.status).toBe('fail');
+    expect(byName.get('TopRight')).toMatchObject({ status: 'not-checked', governing: null, reason: 'No shear results were matched to this member.', flags: ['no-results'] });
+  });
+
+  // AISC Design Examples (v15.0) G.1A quoting Manual Table 3-2: W24x62, Fy = 50 ksi: φvVn = 306 kips (±0.5).
+  it('checks a generated frame by Tag in kips: W24x62 carries the published φvVn = 306 kips, and a failure exits 1', () => {
+    const forces = write('frame-forces.csv', 'member,combination,station,shear\nT17,ULS-1,0,153\nT17,ULS-1,144,-12\nT17,ULS-2,0,-100\nT23,ULS-1,0,320\nNOT-IN-MODEL,ULS-1,0,5\n');
+    const run = taulens('check', frame, '--forces', forces, '--force-unit', 'kip', '--length-unit', 'in', '--standard', 'aisc360-22-lrfd', '--json');
+    expect(run.status).toBe(1);
+    expect(run.stderr).toBe('taulens check: 1 force key(s) match no single member: NOT-IN-MODEL.\n');
+    const output = JSON.parse(run.stdout);
+    expect(output.unmatchedForces).toEqual(['NOT-IN-MODEL']);
+    expect(output.model).toMatchObject({ fileName: 'canteen-frame.ifc', lengthUnit: 'inch' });
+    const byTag = new Map<string, CheckedMember>(output.members.map((m: CheckedMember) => [m.tag, m]));
+    const beam = byTag.get('T17')!;
+    expect(beam).toMatchObject({ status: 'pass', profile: { name: 'W24x62' }, governing: { combination: 'ULS-1' } });
+    expect(Math.abs(fromNewtons(beam.governing!.VRd_kN * 1000, 'kip') - 306)).toBeLessThanOrEqual(0.5);
+    expect(fromNewtons(beam.governing!.VEd_kN * 1000, 'kip')).toBeCloseTo(153, 9);
+    expect(beam.governing!.tauMax_MPa).toBeGreaterThan(beam.governing!.tauAvgWeb_MPa * 0.9);
+    expect(byTag.get('T23')!.status).toBe('fail');
+    expect(new Set(output.members.map((m: CheckedMember) => m.status))).toEqual(new Set(['pass', 'fail', 'not-checked']));
+    expect(Object.keys(beam)).toEqual(expect.arrayContaining(['globalId', 'tag', 'name', 'ifcClass', 'storey', 'status', 'profile', 'section', 'material', 'governing', 'flags']));
+  });
+
+  it('exits 0 when every checked member passes, and prints a table with the cautions without --json', () => {
+    const forces = write('passing.csv', 'member;combination;V [kN]\nT17;ULS-1;100,5\n');
+    const run = taulens('check', frame, '--forces', forces, '--standard', 'aisc360-22-asd');
+    expect(run.status).toBe(0);
+    expect(run.stdout).toContain('web shear by AISC 360-22 §G2.1, ASD');
+    expect(run.stdout).toContain('40 members: 1 pass (0 near the limit), 0 fail, 39 not checked, 0 not applicable.');
+    expect(run.stdout.trimEnd().endsWith(REPORT_CAUTIONS_TEXT)).toBe(true);
+  });
+
+  it('writes one BCF 2.1 topic per failing member, valid against the buildingSMART schemas', async () => {
+    const forces = write('failing.csv', 'member,combination,shear\nT17,ULS-1,400\nT20,ULS-1,500\nT23,ULS-1,10\n');
+    const bcf = path.join(dir, 'failures.bcf');
+    const run = taulens('check', frame, '--forces', forces, '--force-unit', 'kip', '--standard', 'aisc360-22-lrfd', '--json', '--bcf', bcf);
+    expect(run.status).toBe(1);
+    const archive = await openArchive(fs.readFileSync(bcf));
+    try {
+      const topics = archive.names.filter((name) => name.endsWith('/markup.bcf'));
+      expect(topics).toHaveLength(2);
+      for (const name of archive.names) {
+        const schema = schemaForEntry(name);
+        if (schema) expect(await schemaErrors('2.1', schema, name, await archive.read(name))).toEqual([]);
+      }
+      const markups = await Promise.all(topics.map(async (name) => (await archive.read(name)).toString('utf8')));
+      const viewpoints = await Promise.all(archive.names.filter((name) => name.endsWith('.bcfv')).map(async (name) => (await archive.read(name)).toString('utf8')));
+      const output = JSON.parse(run.stdout);
+      const failing = output.members.filter((m: CheckedMember) => m.status === 'fail').map((m: CheckedMember) => m.globalId);
+      expect(failing).toHaveLength(2);
+      for (const globalId of failing) expect(viewpoints.filter((viewpoint) => viewpoint.includes(`IfcGuid="${globalId}"`))).toHaveLength(1);
+      expect(markups.join('\n')).toContain('Web shear over capacity: T17');
+    } finally {
+      archive.close();
+    }
+    // The same check exports the same topic GUIDs, so a re-import finds them again.
+    const again = path.join(dir, 'failures-again.bcf');
+    taulens('check', frame, '--forces', forces, '--force-unit', 'kip', '--standard', 'aisc360-22-lrfd', '--bcf', again);
+    const [first, second] = await Promise.all([openArchive(fs.readFileSync(bcf)), openArchive(fs.readFileSync(again))]);
+    expect(second.names).toEqual(first.names);
+    first.close();
+    second.close();
+  });
+
+  it('warns loudly on stderr when the forces are for another model', () => {
+    const rows = Array.from({ length: 12 }, (_, i) => `E${i},ULS-1,10`).join('\n');
+    const run = taulens('check', frame, '--forces', write('other-model.csv', `member,combination,shear\n${rows}\nT17,ULS-1,10\n`), '--force-unit', 'kN', '--standard', 'en1993-1-1', '--json');
+    expect(run.status).toBe(0);
+    expect(run.stderr).toContain('WARNING: only 1 of 13 force keys match a member of canteen-frame.ifc. These forces are probably for another model');
+  });
+
+  it('reads an XLSX, asking for the sheet when it has several', async () => {
+    const book = new ExcelJS.Workbook();
+    book.addWorksheet('Read me').addRow(['Invented demo data']);
+    book.addWorksheet('Shear').addRows([['member', 'combination', 'shear'], ['T17', 'ULS-1', 150]]);
+    const xlsx = path.join(dir, 'forces.xlsx');
+    await book.xlsx.writeFile(xlsx);
+    const ask = taulens('check', frame, '--forces', xlsx, '--force-unit', 'kip', '--standard', 'aisc360-22-lrfd');
+    expect(ask.status).toBe(2);
+    expect(ask.stderr).toContain('The workbook has 2 sheets (Read me, Shear). Choose the sheet that holds the shear results.');
+    const chosen = taulens('check', frame, '--forces', xlsx, '--sheet', 'Shear', '--force-unit', 'kip', '--standard', 'aisc360-22-lrfd', '--json');
+    expect(chosen.status).toBe(0);
+    expect(JSON.parse(chosen.stdout).forces).toMatchObject({ rows: 1, keys: 1 });
+  });
+
+  describe('bad input exits 2 with one clear message', () => {
+    // Run in this process through the same dispatch as the bin (spawning each case would only repeat the start-up).
+    const check = async (forces: string, ...extra: string[]) => {
+      let stdout = '';
+      let stderr = '';
+      const status = await dispatch(['check', frame, '--forces', forces, '--standard', 'en1993-1-1', ...extra], { out: (t) => (stdout += t), err: (t) => (stderr += t) });
+      return { status, stdout, stderr };
+    };
+    const cases: Array<[what: string, content: string, extra: string[], message: string | RegExp]> = [
+      ['an unknown force unit', 'member,combination,shear\nT17,ULS-1,1\n', ['--force-unit', 'tonne'], "--force-unit must be one of N, kN, kip, lbf, got 'tonne'"],
+      ['no force unit where the header gives none', 'member,combination,shear\nT17,ULS-1,1\n', [], "--force-unit is required: the header does not say the unit of 'shear'"],
+      ['a non-numeric shear', 'member,combination,shear\nT17,ULS-1,lots\n', ['--force-unit', 'kN'], "Row 2 (column 'shear'): 'lots' is not a number; expected a shear force in kN."],
+      ['a missing shear', 'member,combination,shear\nT17,ULS-1,\n', ['--force-unit', 'kN'], "Row 2 (column 'shear'): the shear force is empty."],
+      ['a repeated row', 'member,combination,shear\nT17,ULS-1,1\nT17,ULS-1,2\n', ['--force-unit', 'kN'], "Row 3 repeats member 'T17', combination 'ULS-1' of row 2."],
+      ['an empty file', '', ['--force-unit', 'kN'], 'The file is empty: it holds no header and no rows.'],
+      ['a header without a shear column', 'member,combination,moment\nT17,ULS-1,1\n', ['--force-unit', 'kN'], 'the forces file has no shear column (its columns: member, combination, moment)'],
+    ];
+    it.each(cases)('%s', async (_what, content, extra, message) => {
+      const run = await check(write(`bad-${Math.random().toString(36).slice(2)}.csv`, content), ...extra);
+      expect(run.status).toBe(2);
+      expect(run.stdout).toBe('');
+      expect(run.stderr).toMatch(typeof message === 'string' ? new RegExp(message.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')) : message);
+      expect(run.stderr).not.toMatch(/\n\s+at /);
+    });
+
+    it('a model that is not IFC, a missing forces file, and no standard (spawned: the exit status of the process)', () => {
+      const forces = write('ok.csv', 'member,combination,shear\nT1,U,1\n');
+      const notIfc = taulens('check', write('notes.ifc', 'hello'), '--forces', forces, '--force-unit', 'kN', '--standard', 'en1993-1-1');
+      expect(notIfc.status).toBe(2);
+      expect(notIfc.stderr).toMatch(/^taulens check: /);
+      expect(notIfc.stderr).not.toMatch(/\n\s+at /);
+      const missing = taulens('check', frame, '--forces', path.join(dir, 'nowhere.csv'), '--standard', 'en1993-1-1');
+      expect(missing.status).toBe(2);
+      expect(missing.stderr).toContain('no such file');
+      const noStandard = taulens('check', frame, '--forces', forces, '--force-unit', 'kN');
+      expect(noStandard.status).toBe(2);
+      expect(noStandard.stderr).toContain('--standard is required: one of aisc360-22-lrfd, aisc360-22-asd, en1993-1-1');
+    });
+  });
+});

@@ -1,0 +1,331 @@
+/**
+ * `taulens check <model.ifc|.ifczip> --forces <file> --force-unit kN|N|kip|lbf --standard … [--json] [--bcf out.bcf]`:
+ * the web shear check of every I-section member of a model against the shear forces of an analysis export, for
+ * pipelines (JSON on stdout, exit status) and for people (a table). The forces file is read like an upload (CSV of
+ * any delimiter or XLSX); its columns are found by their names, the default format being `member,combination,shear`
+ * with an optional `station`, where member is a GlobalId or a Tag.
+ *
+ * Exit status: 0 when every checked member passes, 1 when any fails, 2 on bad input (the message is on stderr).
+ */
+import * as fs from 'node:fs';
+import { createHash } from 'node:crypto';
+import * as os from 'node:os';
+import * as path from 'node:path';
+import { type CheckParameters, checkParametersSchema } from '../checks/check-parameters';
+import { type CheckRunComputation, computeCheckRun, type MemberCheck } from '../checks/check-run-compute';
+import { engineVersion } from '../checks/engine-version';
+import { resultStatusOf } from '../checks/member-result-row';
+import { STANDARDS, type Standard } from '../engine/check';
+import { type EnYieldRule, GRADE_IDS, type GradeId, isGradeId } from '../engine/grades';
+import { FORCE_UNITS, type ForceUnit, LENGTH_UNITS, type LengthUnit } from '../engine/units';
+import { exportBcf } from '../findings/bcf/bcf-export';
+import { nameBasedUuid } from '../findings/bcf/bcf-guid';
+import type { FindingExport } from '../findings/export/finding-export';
+import { memberLabelOf, memberTagOf, planRunSync } from '../findings/finding-sync-plan';
+import { DomainError } from '../http/errors';
+import { extractIfcFromZip } from '../ifc/ifc-archive';
+import type { MemberRecord, ModelInfo } from '../ifc/model-read-result';
+import { readModel } from '../ifc/read-model';
+import { percentText, STANDARD_LABELS } from '../reports/report-format';
+import { REPORT_CAUTIONS_TEXT } from '../reports/report-cautions';
+import { MEMBER_KEY_KINDS, type MemberKeyKind, parseColumnMapping } from '../results/column-mapping';
+import { governingShearsByMember } from '../results/governing-shear';
+import { type MatchReport, matchResultsToMembers } from '../results/member-matching';
+import { ResultsFileError } from '../results/results-file-error';
+import { importResultsFile } from '../results/results-import';
+import { previewResultsFile } from '../results/results-preview';
+import { type Command, type CommandIo, optionValue, positionals, UsageError } from './command';
+import { type ListedMember, listedMember } from './member-listing';
+
+const VALUE_FLAGS = ['--forces', '--force-unit', '--length-unit', '--standard', '--sheet', '--member-key', '--default-grade', '--yield-rule', '--bcf'];
+const SWITCHES = ['--json'];
+const YIELD_RULES: readonly EnYieldRule[] = ['en10025-2', 'en1993-1-1-table-3.1'];
+/** Unmatched force keys listed on stderr before "and N more". */
+const LISTED_KEYS = 10;
+/** Namespace of the BCF topic GUIDs this command derives from the model and member, so a re-export keeps them. */
+const TOPIC_NAMESPACE = '6f1d3c52-8a4e-4b7f-9c21-3e5a7d90b4c8';
+
+const USAGE = `usage: taulens check <model.ifc | model.ifczip> --forces <forces.csv | forces.xlsx>
+                     --force-unit ${FORCE_UNITS.join('|')} --standard ${STANDARDS.join('|')}
+                     [--json] [--bcf out.bcf] [--length-unit ${LENGTH_UNITS.join('|')}] [--sheet <name>]
+                     [--member-key ${MEMBER_KEY_KINDS.join('|')}] [--default-grade ${GRADE_IDS.join('|')}]
+                     [--yield-rule ${YIELD_RULES.join('|')}]
+
+Checks the web of every I-section beam, column and member of the model for the shear forces of an analysis export:
+the elastic shear stress τ = VQ/(It) and the capacity by AISC 360-22 §G2.1 (LRFD or ASD) or EN 1993-1-1 §6.2.6
+with EN 1993-1-5 §5, with the code's recommended factors.
+
+The forces file is CSV (any delimiter) or XLSX. Its header names the columns; the default format is
+  member,combination,shear          (optionally station)
+where member is the GlobalId or the Tag of the IFC member (Name also matches). Each member takes, per combination,
+the largest |shear| over its stations.
+
+  --forces          the shear forces file (required)
+  --force-unit      unit of the shear column (required unless the header says it, e.g. 'V [kN]')
+  --standard        the design code (required)
+  --json            print {model, cautions, standard, …, unmatchedForces, members:[…]} as JSON instead of a table
+  --bcf out.bcf     also write one BCF 2.1 topic per failing member
+  --length-unit     unit of the station column (default mm)
+  --sheet           the worksheet of an XLSX file with several
+  --member-key      what the member column holds (default auto: GlobalId, then Tag, then Name)
+  --default-grade   grade for members whose material names none (default S355 for EN, A992 for AISC)
+  --yield-rule      EN yield strength by thickness: EN 10025-2 bands (default) or EN 1993-1-1 Table 3.1
+
+Per member, status is 'pass', 'fail', 'not-checked' (no forces, or no usable section) or 'not-applicable' (not an
+I-section); governing gives the combination with the highest utilisation.
+Exit status: 0 every checked member passes, 1 any member fails, 2 bad input (the message is on stderr).`;
+
+interface CheckArguments {
+  model: string;
+  forces: string;
+  forceUnit?: ForceUnit;
+  lengthUnit: LengthUnit;
+  standard: Standard;
+  sheet?: string;
+  memberKey: MemberKeyKind;
+  defaultGrade?: GradeId;
+  yieldRule: EnYieldRule;
+  json: boolean;
+  bcf?: string;
+}
+
+function oneOf<T extends string>(flag: string, value: string | undefined, allowed: readonly T[]): T | undefined {
+  if (value === undefined) return undefined;
+  if (!allowed.includes(value as T)) throw new UsageError(`${flag} must be one of ${allowed.join(', ')}, got '${value}'`);
+  return value as T;
+}
+
+function parse(args: readonly string[]): CheckArguments {
+  const unknown = args.filter((a) => a.startsWith('--') && !VALUE_FLAGS.includes(a) && !SWITCHES.includes(a));
+  if (unknown.length > 0) throw new UsageError(`unknown option ${unknown[0]}`);
+  const files = positionals(args, VALUE_FLAGS);
+  if (files.length !== 1) throw new UsageError(files.length === 0 ? 'give the model file to check' : `one model file at a time, got ${files.length}`);
+  const forces = optionValue(args, '--forces');
+  if (!forces) throw new UsageError('--forces <file> is required: the shear forces of the analysis');
+  const standard = oneOf('--standard', optionValue(args, '--standard'), STANDARDS);
+  if (!standard) throw new UsageError(`--standard is required: one of ${STANDARDS.join(', ')}`);
+  const defaultGrade = optionValue(args, '--default-grade');
+  if (defaultGrade !== undefined && !isGradeId(defaultGrade)) throw new UsageError(`--default-grade must be one of ${GRADE_IDS.join(', ')}, got '${defaultGrade}'`);
+  for (const file of [files[0], forces]) {
+    if (!fs.existsSync(file) || !fs.statSync(file).isFile()) throw new UsageError(`no such file: ${file}`);
+  }
+  return {
+    model: files[0],
+    forces,
+    forceUnit: oneOf('--force-unit', optionValue(args, '--force-unit'), FORCE_UNITS),
+    lengthUnit: oneOf('--length-unit', optionValue(args, '--length-unit'), LENGTH_UNITS) ?? 'mm',
+    standard,
+    sheet: optionValue(args, '--sheet'),
+    memberKey: oneOf('--member-key', optionValue(args, '--member-key'), MEMBER_KEY_KINDS) ?? 'auto',
+    defaultGrade,
+    yieldRule: oneOf('--yield-rule', optionValue(args, '--yield-rule'), YIELD_RULES) ?? 'en10025-2',
+    json: args.includes('--json'),
+    bcf: optionValue(args, '--bcf'),
+  };
+}
+
+/** The mapping from the forces file's header: the default format or the usual names, the units from the options. */
+async function mappingFor(options: CheckArguments) {
+  const { headers, guess } = await previewResultsFile(options.forces, { sheet: options.sheet, rowLimit: 1 });
+  const missing = guess.missing.filter((field) => field.endsWith('Column'));
+  if (missing.length > 0) {
+    const names = missing.map((field) => field.replace('Column', '')).join(', ');
+    throw new UsageError(`the forces file has no ${names} column (its columns: ${headers.join(', ')}); use the header member,combination,shear (optionally station)`);
+  }
+  const forceUnit = options.forceUnit ?? guess.mapping.forceUnit;
+  if (!forceUnit) throw new UsageError(`--force-unit is required: the header does not say the unit of '${guess.mapping.shearColumn}'`);
+  return parseColumnMapping({ ...guess.mapping, forceUnit, lengthUnit: guess.mapping.lengthUnit ?? options.lengthUnit, memberKeyKind: options.memberKey });
+}
+
+function isZip(file: string): boolean {
+  const fd = fs.openSync(file, 'r');
+  try {
+    const magic = Buffer.alloc(4);
+    return fs.readSync(fd, magic, 0, 4, 0) === 4 && magic.readUInt32LE(0) === 0x04034b50;
+  } finally {
+    fs.closeSync(fd);
+  }
+}
+
+async function readMembers(options: CheckArguments, parameters: CheckParameters, scratch: string): Promise<{ model: ModelInfo; members: MemberRecord[] }> {
+  let ifc = options.model;
+  if (isZip(ifc)) {
+    ifc = path.join(scratch, 'model.ifc');
+    await extractIfcFromZip(options.model, ifc);
+  }
+  const yieldRule = parameters.standard === 'en1993-1-1' ? parameters.yieldRule : options.yieldRule;
+  const { model, members } = await readModel(ifc, { fileName: path.basename(options.model), glb: 'none', defaultGrade: parameters.defaultGrade, yieldRule });
+  return { model, members };
+}
+
+interface CheckedMember extends Omit<ListedMember, 'status'> {
+  status: MemberCheck['status'];
+  governing: { combination: string; VEd_kN: number; VRd_kN: number; utilisation: number; tauMax_MPa: number; tauAvgWeb_MPa: number } | null;
+}
+
+function checkedMember(record: MemberRecord, check: MemberCheck): CheckedMember {
+  const listed = listedMember(record);
+  const governing = check.governing;
+  const reason = check.reason ?? listed.reason;
+  return {
+    ...listed,
+    status: check.status,
+    ...(reason ? { reason } : {}),
+    flags: [...new Set([...listed.flags, ...check.flags])],
+    governing: governing && {
+      combination: governing.combination,
+      VEd_kN: governing.VEd_N / 1000,
+      VRd_kN: governing.VRd_N / 1000,
+      utilisation: governing.utilisation,
+      tauMax_MPa: governing.tauMax_MPa,
+      tauAvgWeb_MPa: governing.tauAvgWeb_MPa,
+    },
+  };
+}
+
+function sha256Of(file: string): string {
+  return createHash('sha256').update(fs.readFileSync(file)).digest('hex');
+}
+
+/** One topic per failing member, worded as the server's generated findings are. */
+function failureFindings(records: readonly MemberRecord[], run: CheckRunComputation, context: { modelSha256: string; standard: Standard; forcesFile: string }): FindingExport[] {
+  const results = run.members.map((check, i) => ({
+    globalId: check.globalId,
+    tag: records[i].tag,
+    name: records[i].name,
+    storey: records[i].storey,
+    profileName: records[i].profile?.name ?? null,
+    status: resultStatusOf(check),
+    utilisation: check.governing?.utilisation ?? null,
+    VEd_kN: check.governing ? check.governing.VEd_N / 1000 : null,
+    VRd_kN: check.governing ? check.governing.VRd_N / 1000 : null,
+    governingCombination: check.governing?.combination ?? null,
+    flags: check.flags,
+  }));
+  const byGlobalId = new Map(results.map((result) => [result.globalId, result]));
+  const createdAt = new Date().toISOString();
+  return planRunSync({ runId: 'cli', revisionNumber: 1 }, results, [])
+    .create.filter((draft) => draft.kind === 'web-shear-fail')
+    .map((draft, i): FindingExport => {
+      const result = byGlobalId.get(draft.globalId)!;
+      return {
+        id: `F-${i + 1}`,
+        guid: nameBasedUuid(TOPIC_NAMESPACE, `${context.modelSha256}/${draft.globalId}`),
+        kind: 'failure',
+        title: draft.title,
+        description:
+          `${percentText(result.utilisation!)} utilisation under ${result.governingCombination} ` +
+          `(VEd ${Math.abs(result.VEd_kN!).toFixed(1)} kN, VRd ${result.VRd_kN!.toFixed(1)} kN) by ${STANDARD_LABELS[context.standard]}, ` +
+          `forces from ${path.basename(context.forcesFile)}. ${REPORT_CAUTIONS_TEXT}`,
+        status: 'open',
+        priority: draft.priority,
+        labels: ['web shear'],
+        createdAt,
+        createdBy: 'taulens-check@localhost',
+        comments: [],
+        memberGlobalIds: [draft.globalId],
+        memberLabel: memberLabelOf(result),
+        utilisation: result.utilisation!,
+      };
+    });
+}
+
+function warnAboutMatching(report: MatchReport, model: ModelInfo, io: CommandIo): void {
+  if (report.likelyOtherModel) {
+    io.err(
+      `taulens check: WARNING: only ${report.counts.matched} of ${report.counts.keys} force keys match a member of ${model.fileName}. ` +
+        'These forces are probably for another model; the results below check almost nothing.\n',
+    );
+  }
+  const unmatched = report.unmatchedKeys.concat(report.ambiguous.map((match) => match.memberKey));
+  if (unmatched.length > 0) {
+    const listed = unmatched.slice(0, LISTED_KEYS).join(', ');
+    const more = unmatched.length > LISTED_KEYS ? ` and ${unmatched.length - LISTED_KEYS} more` : '';
+    io.err(`taulens check: ${unmatched.length} force key(s) match no single member: ${listed}${more}.\n`);
+  }
+}
+
+function table(model: ModelInfo, standard: Standard, members: readonly CheckedMember[], run: CheckRunComputation): string {
+  const header = ['GlobalId'.padEnd(22), 'Tag'.padEnd(10), 'Profile'.padEnd(16), 'Status'.padEnd(14), 'Combination'.padEnd(14), 'VEd kN'.padStart(9), 'VRd kN'.padStart(9), 'Util.'.padStart(8)];
+  const lines = [`${model.fileName}: web shear by ${STANDARD_LABELS[standard]}`, '', header.join('  '), header.map((h) => '-'.repeat(h.length)).join('  ')];
+  for (const member of members) {
+    const g = member.governing;
+    lines.push(
+      [
+        member.globalId.padEnd(22),
+        (member.tag ?? '').slice(0, 10).padEnd(10),
+        (member.profile?.name ?? '').slice(0, 16).padEnd(16),
+        member.status.padEnd(14),
+        (g?.combination ?? '').slice(0, 14).padEnd(14),
+        (g ? Math.abs(g.VEd_kN).toFixed(1) : '').padStart(9),
+        (g ? g.VRd_kN.toFixed(1) : '').padStart(9),
+        (g ? percentText(g.utilisation) : '').padStart(8),
+      ]
+        .join('  ')
+        .trimEnd(),
+    );
+  }
+  const s = run.summary;
+  lines.push('', `${s.members} members: ${s.pass} pass (${s.warnings} near the limit), ${s.fail} fail, ${s.notChecked} not checked, ${s.notApplicable} not applicable.`, '', REPORT_CAUTIONS_TEXT);
+  return lines.join('\n') + '\n';
+}
+
+async function run(args: readonly string[], io: CommandIo): Promise<number> {
+  const options = parse(args);
+  const parameters = checkParametersSchema.parse({ standard: options.standard, ...(options.defaultGrade && { defaultGrade: options.defaultGrade }), ...(options.standard === 'en1993-1-1' && { yieldRule: options.yieldRule }) });
+  const scratch = fs.mkdtempSync(path.join(os.tmpdir(), 'taulens-check-'));
+  try {
+    const mapping = await mappingFor(options);
+    const { summary, governing } = await importResultsFile(options.forces, mapping, options.sheet);
+    const { model, members: records } = await readMembers(options, parameters, scratch);
+    const report = matchResultsToMembers(summary.memberKeys, records, { keyKind: mapping.memberKeyKind });
+    warnAboutMatching(report, model, io);
+    const computed = computeCheckRun({ members: records, shears: governingShearsByMember(governing, report.matched), parameters });
+    const members = records.map((record, i) => checkedMember(record, computed.members[i]));
+    if (options.bcf) {
+      const modelSha256 = sha256Of(options.model);
+      const findings = failureFindings(records, computed, { modelSha256, standard: options.standard, forcesFile: options.forces });
+      const bcf = await exportBcf(findings, { version: '2.1', project: { id: nameBasedUuid(TOPIC_NAMESPACE, modelSha256), name: model.fileName }, modelFiles: [{ fileName: model.fileName ?? path.basename(options.model) }] });
+      fs.writeFileSync(`${options.bcf}.part`, bcf);
+      fs.renameSync(`${options.bcf}.part`, options.bcf);
+    }
+    if (options.json) {
+      const output = {
+        model,
+        cautions: REPORT_CAUTIONS_TEXT,
+        standard: options.standard,
+        parameters,
+        engineVersion: engineVersion(),
+        forces: { fileName: path.basename(options.forces), sha256: sha256Of(options.forces), rows: summary.rowCount, keys: summary.memberKeys.length, combinations: summary.combinations, forceUnit: mapping.forceUnit },
+        summary: computed.summary,
+        unmatchedForces: report.unmatchedKeys,
+        ambiguousForces: report.ambiguous.map((match) => ({ key: match.memberKey, candidates: match.candidates })),
+        members,
+      };
+      io.out(JSON.stringify(output, null, 2) + '\n');
+    } else {
+      io.out(table(model, options.standard, members, computed));
+    }
+    return computed.summary.fail > 0 ? 1 : 0;
+  } catch (error) {
+    if (error instanceof ResultsFileError) {
+      const rows = (error.details.issues ?? []).slice(0, LISTED_KEYS).map((issue) => `\n  ${issue.message}`).join('');
+      io.err(`taulens check: ${options.forces}: ${error.message}${rows}\n`);
+      return 2;
+    }
+    if (error instanceof DomainError) {
+      io.err(`taulens check: ${error.message}\n`);
+      return 2;
+    }
+    throw error;
+  } finally {
+    fs.rmSync(scratch, { recursive: true, force: true });
+  }
+}
+
+export const checkCommand: Command = {
+  name: 'check',
+  summary: 'check the webs of a model for the shear forces of an analysis export',
+  usage: USAGE,
+  run,
+};
