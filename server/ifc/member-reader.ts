@@ -10,7 +10,7 @@ import { type Mat4, transformPoint, type Vec3 } from './matrix4';
 import { MaterialReader, type MaterialReading } from './material-reader';
 import { SectionResolver, type SectionOutcome } from './member-section';
 import type { MemberFlag, MemberMaterial, MemberRecord, MemberStatus, Point3_mm } from './model-read-result';
-import { PlacementResolver } from './placement-reader';
+import { readObjectPlacement } from './placement-reader';
 import { ProfileReader } from './profile-reader';
 import { type ElementShape, type MemberLine, ShapeReader, type SweptSolid } from './shape-reader';
 import { SpatialIndex } from './spatial-index';
@@ -45,7 +45,6 @@ export class MemberReader {
   private readonly shapes: ShapeReader;
   private readonly profiles: ProfileReader;
   private readonly sections: SectionResolver;
-  private readonly placements: PlacementResolver;
   private readonly typePredefined = new Map<number, string | null>();
 
   constructor(
@@ -57,7 +56,6 @@ export class MemberReader {
     this.shapes = new ShapeReader(lines, options.radiansPerAngleUnit);
     this.profiles = new ProfileReader(lines, options.ifc2x3, options.scaleToMm, options.radiansPerAngleUnit);
     this.sections = new SectionResolver(options.projectCatalogue);
-    this.placements = new PlacementResolver(lines);
   }
 
   /** Express ids of all beams, columns and members, in file order. */
@@ -80,7 +78,7 @@ export class MemberReader {
     const outcome = this.section(shape, material, objectType);
     flags.push(...(outcome.status === 'not-applicable' ? [] : outcome.flags));
 
-    const placement = this.placements.placement(refOf(args[5]));
+    const placement = readObjectPlacement(this.lines, refOf(args[5]));
     const line3d = this.memberLine(shape, solid, placement);
     if (line3d?.curved) flags.push('curved');
     if (shape.hasRepresentation && !line3d) flags.push('no-axis');
@@ -127,7 +125,7 @@ export class MemberReader {
   solidOf(expressId: number): MemberSolid | undefined {
     const args = this.lines.line(expressId)?.args ?? [];
     const solid = this.shapes.read(refOf(args[6])).solids[0];
-    return solid ? { solid, placement: this.placements.placement(refOf(args[5])) } : undefined;
+    return solid ? { solid, placement: readObjectPlacement(this.lines, refOf(args[5])) } : undefined;
   }
 
   /** Frame, direction and depth of a member's extruded solid, for building its mesh (undefined if not extruded). */

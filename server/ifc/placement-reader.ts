@@ -3,13 +3,12 @@
  * object placements, and the coordinate systems inside a representation (solid positions, mapping origins, targets).
  */
 import {
-  IFCLOCALPLACEMENT,
   IFCAXIS2PLACEMENT2D,
   IFCAXIS2PLACEMENT3D,
   IFCCARTESIANTRANSFORMATIONOPERATOR2DNONUNIFORM,
   IFCCARTESIANTRANSFORMATIONOPERATOR3DNONUNIFORM,
 } from 'web-ifc';
-import { axis2Placement, identity, type Mat4, multiply, transformationOperator, type Vec3 } from './matrix4';
+import { axis2Placement, identity, type Mat4, transformationOperator, type Vec3 } from './matrix4';
 import { numberOf, numbersOf, refOf, type StepLines } from './step-lines';
 
 function vector(values: readonly number[]): Vec3 | undefined {
@@ -59,35 +58,11 @@ export function readTransformationOperator(lines: StepLines, id: number | undefi
 }
 
 /**
- * World transforms of object placements, in model units: IfcLocalPlacement chains resolved here (world = parent ×
- * relative), with the placements that others are relative to (sites, storeys, assemblies) kept; any other placement
- * (IfcGridPlacement, IfcLinearPlacement) through web-ifc.
+ * World transform of an object placement (IfcLocalPlacement chains, grid and linear placements), in model units,
+ * by web-ifc: it keeps the placements it has resolved, which makes it faster than reading the chain here.
  */
-export class PlacementResolver {
-  private readonly parents = new Map<number, Mat4>();
-
-  constructor(private readonly lines: StepLines) {}
-
-  placement(placementId: number | undefined, depth = 0): Mat4 {
-    const line = this.lines.line(placementId);
-    if (!line || placementId === undefined) return identity();
-    if (line.type !== IFCLOCALPLACEMENT || depth > MAX_PLACEMENT_DEPTH) {
-      const flat = this.lines.api.GetWorldTransformMatrix(this.lines.modelId, placementId);
-      return flat && flat.length === 16 ? Float64Array.from(flat) : identity();
-    }
-    const relative = readAxisPlacement(this.lines, refOf(line.args[1]));
-    const parentId = refOf(line.args[0]);
-    return parentId === undefined ? relative : multiply(this.parent(parentId, depth + 1), relative);
-  }
-
-  private parent(id: number, depth: number): Mat4 {
-    let parent = this.parents.get(id);
-    if (!parent) {
-      parent = this.placement(id, depth);
-      this.parents.set(id, parent);
-    }
-    return parent;
-  }
+export function readObjectPlacement(lines: StepLines, placementId: number | undefined): Mat4 {
+  if (placementId === undefined) return identity();
+  const flat = lines.api.GetWorldTransformMatrix(lines.modelId, placementId);
+  return flat && flat.length === 16 ? Float64Array.from(flat) : identity();
 }
-
-const MAX_PLACEMENT_DEPTH = 64;
