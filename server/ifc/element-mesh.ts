@@ -50,12 +50,30 @@ export class MeshStore {
   readonly longIndices = new Arena<Uint32Array>(Uint32Array);
 }
 
+const EMPTY_BOUNDS = [Infinity, Infinity, Infinity, -Infinity, -Infinity, -Infinity];
+
+/** Columns of the 3×3 part at right angles and of one length. */
+function isRotationWithUniformScale(m: Mat4): boolean {
+  const lx = Math.hypot(m[0], m[1], m[2]);
+  const ly = Math.hypot(m[4], m[5], m[6]);
+  const lz = Math.hypot(m[8], m[9], m[10]);
+  const tolerance = 1e-9 * lx;
+  return (
+    Math.abs(lx - ly) < tolerance &&
+    Math.abs(lx - lz) < tolerance &&
+    Math.abs(m[0] * m[4] + m[1] * m[5] + m[2] * m[6]) < tolerance * lx &&
+    Math.abs(m[0] * m[8] + m[1] * m[9] + m[2] * m[10]) < tolerance * lx &&
+    Math.abs(m[4] * m[8] + m[5] * m[9] + m[6] * m[10]) < tolerance * lx
+  );
+}
+
 /** Accumulates the pieces of one element at a time in reused scratch arrays. */
 export class ElementMeshBuilder {
   private vertices = new Float32Array(64 * 1024);
   private indices = new Uint32Array(64 * 1024);
   private vertexCount = 0;
   private indexCount = 0;
+  private bounds = EMPTY_BOUNDS;
 
   /** `offset` is subtracted after transforming (glTF axes, metres). */
   constructor(
@@ -85,33 +103,49 @@ export class ElementMeshBuilder {
     if (count === 0 || sourceIndices.length === 0) return;
     const base = this.vertexCount;
     this.reserve((base + count) * FLOATS_PER_VERTEX, this.indexCount + sourceIndices.length);
-    const m = transform;
-    const n = normalMatrix(m as Mat4);
-    const [ox, oy, oz] = this.offset;
+    const m = transform as Mat4;
+    const [m0, m1, m2, m4, m5, m6, m8, m9, m10] = [m[0], m[1], m[2], m[4], m[5], m[6], m[8], m[9], m[10]];
+    const tx = m[12] - this.offset[0];
+    const ty = m[13] - this.offset[1];
+    const tz = m[14] - this.offset[2];
+    const n = normalMatrix(m);
+    // A rotation with a uniform scale (nearly every placement) keeps unit normals unit after the scale is divided out.
+    const uniform = isRotationWithUniformScale(m);
+    const unitScale = uniform ? 1 / Math.hypot(m0, m1, m2) : 1;
+    const [n0, n1, n2, n3, n4, n5, n6, n7, n8] = uniform ? [m0, m1, m2, m4, m5, m6, m8, m9, m10].map((v) => v * unitScale) : Array.from(n);
     const out = this.vertices;
+    let [minX, minY, minZ, maxX, maxY, maxZ] = this.bounds;
     let o = base * FLOATS_PER_VERTEX;
     for (let v = 0; v < source.length; v += FLOATS_PER_VERTEX, o += FLOATS_PER_VERTEX) {
       const x = source[v];
       const y = source[v + 1];
       const z = source[v + 2];
-      out[o] = m[0] * x + m[4] * y + m[8] * z + m[12] - ox;
-      out[o + 1] = m[1] * x + m[5] * y + m[9] * z + m[13] - oy;
-      out[o + 2] = m[2] * x + m[6] * y + m[10] * z + m[14] - oz;
+      const px = (out[o] = m0 * x + m4 * y + m8 * z + tx);
+      const py = (out[o + 1] = m1 * x + m5 * y + m9 * z + ty);
+      const pz = (out[o + 2] = m2 * x + m6 * y + m10 * z + tz);
+      // Bounds of the stored (32-bit) values, as glTF's accessor min/max must be.
+      if (px < minX) minX = px;
+      if (px > maxX) maxX = px;
+      if (py < minY) minY = py;
+      if (py > maxY) maxY = py;
+      if (pz < minZ) minZ = pz;
+      if (pz > maxZ) maxZ = pz;
       const a = source[v + 3];
       const b = source[v + 4];
       const c = source[v + 5];
-      const nx = n[0] * a + n[3] * b + n[6] * c;
-      const ny = n[1] * a + n[4] * b + n[7] * c;
-      const nz = n[2] * a + n[5] * b + n[8] * c;
-      const length = Math.sqrt(nx * nx + ny * ny + nz * nz) || 1;
+      const nx = n0 * a + n3 * b + n6 * c;
+      const ny = n1 * a + n4 * b + n7 * c;
+      const nz = n2 * a + n5 * b + n8 * c;
+      const length = uniform ? 1 : Math.sqrt(nx * nx + ny * ny + nz * nz) || 1;
       out[o + 3] = nx / length;
       out[o + 4] = ny / length;
       out[o + 5] = nz / length;
     }
+    this.bounds = [minX, minY, minZ, maxX, maxY, maxZ];
     const indices = this.indices;
     let at = this.indexCount;
     // A mirroring transform turns faces inside out; swap two corners of each triangle to turn them back.
-    const flip = determinant3(m as Mat4) < 0;
+    const flip = determinant3(m) < 0;
     for (let i = 0; i + 2 < sourceIndices.length; i += 3, at += 3) {
       indices[at] = sourceIndices[i] + base;
       indices[at + 1] = sourceIndices[flip ? i + 2 : i + 1] + base;
@@ -129,15 +163,10 @@ export class ElementMeshBuilder {
     vertices.set(this.vertices.subarray(0, floats));
     const indices = this.vertexCount <= 0xffff ? this.store.shortIndices.take(this.indexCount) : this.store.longIndices.take(this.indexCount);
     indices.set(this.indices.subarray(0, this.indexCount));
-    const min: [number, number, number] = [Infinity, Infinity, Infinity];
-    const max: [number, number, number] = [-Infinity, -Infinity, -Infinity];
-    for (let v = 0; v < floats; v += FLOATS_PER_VERTEX) {
-      for (let k = 0; k < 3; k++) {
-        const value = vertices[v + k];
-        if (value < min[k]) min[k] = value;
-        if (value > max[k]) max[k] = value;
-      }
-    }
+    const [minX, minY, minZ, maxX, maxY, maxZ] = this.bounds;
+    const min: [number, number, number] = [Math.fround(minX), Math.fround(minY), Math.fround(minZ)];
+    const max: [number, number, number] = [Math.fround(maxX), Math.fround(maxY), Math.fround(maxZ)];
+    this.bounds = EMPTY_BOUNDS;
     this.vertexCount = 0;
     this.indexCount = 0;
     return { expressId, vertices, indices, min, max };
