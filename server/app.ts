@@ -6,6 +6,10 @@ import { type PassportInstance, createPassport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import { checkRunsRouter } from './checks/check-runs.router';
 import { usesTls } from './config';
+import { findingExportsRouter } from './findings/finding-exports.router';
+import { findingsRouter } from './findings/findings.router';
+import { runReportRouter } from './findings/run-report.router';
+import { savedViewpointsRouter } from './findings/saved-viewpoints.router';
 import type { AppContext } from './http/app-context';
 import { type CsrfProtection, createCsrfProtection } from './http/csrf';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
@@ -13,6 +17,7 @@ import { jsonBody } from './http/json-body';
 import { requestLogger } from './http/request-logger';
 import { securityHeaders } from './http/security-headers';
 import { webClientRouter } from './http/web-client';
+import { notificationsRouter } from './notifications/notifications.router';
 import { outboxRouter } from './outbox/outbox.router';
 import { modelFeatureRouter } from './models/model-feature.router';
 import { membersRouter } from './projects/members.router';
@@ -42,6 +47,11 @@ function featureRouters(ctx: AppContext, deps: ApiDeps): [path: string, router: 
     ['/projects/:projectId/results', resultSetsRouter(ctx)],
     ['/projects/:projectId/result-mappings', resultMappingsRouter(ctx)],
     ['/projects/:projectId/checks', checkRunsRouter(ctx)],
+    ['/projects/:projectId/findings', findingExportsRouter(ctx)],
+    ['/projects/:projectId/findings', findingsRouter(ctx)],
+    ['/projects/:projectId/viewpoints', savedViewpointsRouter(ctx)],
+    ['/projects/:projectId/checks/:runId/report.pdf', runReportRouter(ctx)],
+    ['/notifications', notificationsRouter(ctx)],
     ...(ctx.config.fakeSmtp ? ([['/dev', outboxRouter(ctx.dataSource)]] as [string, Router][]) : []),
   ];
 }

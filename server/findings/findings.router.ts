@@ -13,6 +13,7 @@ import {
   transitionInput,
   updateFindingInput,
 } from './finding-requests';
+import { listenForFinishedRuns } from './finding-run-listener';
 import { FindingService } from './finding.service';
 
 /**
@@ -22,10 +23,15 @@ import { FindingService } from './finding.service';
 const TAKE_PART: Action = 'finding.comment';
 const findingInput = { params: findingParams };
 
-/** /api/projects/:projectId/findings: the list, one finding, its status, comments and assignment. */
+/**
+ * /api/projects/:projectId/findings: the list, one finding, its status, comments and assignment. Also makes the
+ * findings follow finished check runs.
+ */
 export function findingsRouter(ctx: AppContext): Router {
   const notifier = new FindingNotifier(ctx.dataSource, ctx.mailer, ctx.config.publicUrl, ctx.logger);
   const findings = new FindingService(ctx.dataSource, ctx.storage, notifier);
+  // Built once per app, like the router, so the listener is registered once.
+  listenForFinishedRuns(ctx, notifier);
   const router = Router({ mergeParams: true });
 
   router.get('/', requireProjectPermission('project.read'), validate(listFindingsInput), async (req, res) => {
