@@ -119,7 +119,7 @@ function chunkHeader(length: number, type: number): Uint8Array {
 const bytesOf = (array: Float32Array | Uint16Array | Uint32Array): Uint8Array => new Uint8Array(array.buffer, array.byteOffset, array.byteLength);
 
 /** Streams the .glb to `sink` in pieces; returns its length in bytes. */
-export function writeGlb(input: GlbInput, sink: (bytes: Uint8Array) => void): number {
+function writeGlb(input: GlbInput, sink: (bytes: Uint8Array) => void): number {
   const { json, vertexBytes, indexBytes } = layout(input);
   const jsonLength = align4(json.byteLength);
   const binLength = vertexBytes + indexBytes;

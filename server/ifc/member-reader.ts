@@ -16,7 +16,7 @@ import { type ElementShape, type MemberLine, ShapeReader, type SweptSolid } from
 import { SpatialIndex } from './spatial-index';
 import { enumOf, refOf, type StepLines, textOf } from './step-lines';
 
-export const MEMBER_TYPES = [IFCBEAM, IFCCOLUMN, IFCMEMBER] as const;
+const MEMBER_TYPES = [IFCBEAM, IFCCOLUMN, IFCMEMBER] as const;
 
 export interface MemberReaderOptions {
   ifc2x3: boolean;

@@ -24,9 +24,9 @@ export interface FrameLayout {
   slots: MemberSlot[];
 }
 
-export const SPAN_X_MM = 6000;
-export const SPAN_Y_MM = 7500;
-export const STOREY_HEIGHT_MM = 4000;
+const SPAN_X_MM = 6000;
+const SPAN_Y_MM = 7500;
+const STOREY_HEIGHT_MM = 4000;
 
 function membersPerStorey(bays: number): number {
   return (bays + 1) ** 2 + 2 * bays * (bays + 1) + 2;

@@ -73,7 +73,7 @@ export function pathOf(slot: MemberSlot): ProfilePath {
   }
 }
 
-export function defectOf(slot: MemberSlot, defects: boolean): Defect | undefined {
+function defectOf(slot: MemberSlot, defects: boolean): Defect | undefined {
   return defects && slot.role === 'beam-x' && slot.storey === 0 ? DEFECTS_BY_BEAM_INDEX.get(slot.roleIndex) : undefined;
 }
 
