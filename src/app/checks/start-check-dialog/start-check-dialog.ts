@@ -11,7 +11,8 @@ import { MatSelectModule } from '@angular/material/select';
 import type { GradeId } from '../../../../server/engine/grades';
 import { ApiError, errorMessage } from '../../core/api-error';
 import { StandardId, STANDARDS } from '../../projects/project';
-import { ResultSet, resultsUrl, RevisionChoice, revisionsUrl } from '../../results/results-api';
+import { ResultSet, resultsUrl, revisionsUrl } from '../../results/results-api';
+import { RevisionField } from '../../results/revision-field/revision-field';
 import { CheckRun, ChecksApi } from '../checks-api';
 import {
   checkParametersOf,
@@ -44,7 +45,7 @@ const optionalFactor = (min: number, max: number) => [Validators.min(min), Valid
 /** Starts a check run: which revision and results, which standard, and the parameters with recommended values. */
 @Component({
   selector: 'tl-start-check-dialog',
-  imports: [ReactiveFormsModule, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule],
+  imports: [ReactiveFormsModule, MatButtonModule, MatDialogModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, RevisionField],
   templateUrl: './start-check-dialog.html',
   styleUrl: './start-check-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -56,10 +57,6 @@ export class StartCheckDialog {
 
   protected readonly standards = STANDARDS;
 
-  protected readonly revisions = httpResource<{ revisions: RevisionChoice[] }>(() => revisionsUrl(this.data.projectId));
-  protected readonly readyRevisions = computed(() =>
-    this.revisions.hasValue() ? this.revisions.value().revisions.filter((revision) => revision.status === 'ready') : [],
-  );
   protected readonly resultSets = httpResource<{ resultSets: ResultSet[] }>(() => resultsUrl(this.data.projectId));
   protected readonly resultSetList = computed(() => (this.resultSets.hasValue() ? this.resultSets.value().resultSets : []));
 
@@ -107,9 +104,9 @@ export class StartCheckDialog {
 
   constructor() {
     effect(() => {
-      this.readyRevisions();
-      this.resultSetList();
-      untracked(() => this.pickDefaults());
+      const revisionId = this.revisionId();
+      const sets = this.resultSetList();
+      untracked(() => this.pickResultSet(revisionId, sets));
     });
     const destroyRef = inject(DestroyRef);
     // A grade of the other family makes no sense after a change of standard.
@@ -130,13 +127,12 @@ export class StartCheckDialog {
     this.form.controls.fabricationOverrides.removeAt(index);
   }
 
-  /** Fills the revision and results as the lists come in: the newest revision, then the newest set for it. */
-  private pickDefaults(): void {
-    const revision = this.form.controls.modelRevisionId;
-    if (!revision.value && this.readyRevisions()[0]) revision.setValue(this.readyRevisions()[0].id);
+  /** Once a revision is chosen, the newest results imported for it (or the newest of all), unless the user chose. */
+  private pickResultSet(revisionId: string, sets: readonly ResultSet[]): void {
     const set = this.form.controls.resultSetId;
-    const forRevision = this.resultSetList().find((candidate) => candidate.modelRevisionId === revision.value);
-    if (!set.value && (forRevision ?? this.resultSetList()[0])) set.setValue((forRevision ?? this.resultSetList()[0]).id);
+    if (set.value || !revisionId) return;
+    const choice = sets.find((candidate) => candidate.modelRevisionId === revisionId) ?? sets[0];
+    if (choice) set.setValue(choice.id);
   }
 
   protected startCheck(confirmPoorMatch = false): void {

@@ -31,11 +31,10 @@ import {
   MemberKeyKind,
   ResultsApi,
   ResultsUpload,
-  RevisionChoice,
-  revisionsUrl,
   RowErrors,
   rowErrorsOf,
 } from '../results-api';
+import { RevisionField } from '../revision-field/revision-field';
 
 const column = () => new FormControl('', { nonNullable: true });
 
@@ -78,6 +77,7 @@ function mappingValidator(group: AbstractControl): ValidationErrors | null {
     MatProgressBarModule,
     MatSelectModule,
     MatStepperModule,
+    RevisionField,
   ],
   templateUrl: './results-import.html',
   styleUrl: './results-import.scss',
@@ -132,13 +132,6 @@ export class ResultsImport {
   });
   protected readonly templateList = computed(() => (this.templates.hasValue() ? this.templates.value().templates : []));
 
-  protected readonly revisions = httpResource<{ revisions: RevisionChoice[] }>(() => {
-    const id = this.context.projectId();
-    return id ? revisionsUrl(id) : undefined;
-  });
-  protected readonly readyRevisions = computed(() =>
-    this.revisions.hasValue() ? this.revisions.value().revisions.filter((revision) => revision.status === 'ready') : [],
-  );
 
   protected readonly headers = computed(() => this.upload()?.headers ?? []);
   protected readonly needsSheet = computed(() => (this.upload()?.sheets?.length ?? 0) > 1);
@@ -190,13 +183,6 @@ export class ResultsImport {
     this.run(this.api.importResults(this.context.projectId(), request), ({ resultSet }) => {
       void this.router.navigate(['..', resultSet.id], { relativeTo: this.route });
     });
-  }
-
-  /** Entering the last step picks the newest ready revision unless the user chose one. */
-  protected prepareTarget(stepIndex: number): void {
-    const revision = this.targetForm.controls.modelRevisionId;
-    const newest = this.readyRevisions()[0];
-    if (stepIndex === 2 && newest && !revision.value) revision.setValue(newest.id);
   }
 
   private showPreview(upload: ResultsUpload): void {
