@@ -10,6 +10,7 @@ import type { FileStorage } from '../storage/file-storage';
 import { hashPassword } from '../users/password';
 import { User } from '../users/user.entity';
 import { demoCheckRunStep } from './demo-check-run';
+import { demoFindingsStep } from './demo-findings';
 import { demoModelStep } from './demo-model';
 import { demoResultsStep } from './demo-results';
 
@@ -131,7 +132,7 @@ const demoProjectsStep: DemoStep = {
 };
 
 /** The steps in order; a later feature appends its own (demo model, shear results, a check run…). */
-export const DEMO_STEPS: DemoStep[] = [demoUsersStep, demoProjectsStep, demoModelStep, demoResultsStep, demoCheckRunStep];
+export const DEMO_STEPS: DemoStep[] = [demoUsersStep, demoProjectsStep, demoModelStep, demoResultsStep, demoCheckRunStep, demoFindingsStep];
 
 export async function seedDemo(deps: DemoDeps, steps: readonly DemoStep[] = DEMO_STEPS): Promise<DemoSeedResult> {
   const createdAccounts = !(await deps.dataSource.getRepository(User).existsBy({ email: DEMO_USERS[0].email }));

@@ -7,7 +7,7 @@ import { type Action, can } from '../auth/permissions';
 import { runTransaction } from '../data-source';
 import { ConflictError, ValidationError } from '../http/errors';
 import { latestReadyRevision, loadMemberRecords } from '../models/model-queries';
-import type { FindingNotice, FindingNotifier } from '../notifications/finding-notifier';
+import type { FindingNotice, NoticeSink } from '../notifications/finding-notifier';
 import { Project } from '../projects/project.entity';
 import type { FileStorage } from '../storage/file-storage';
 import { exportBcf } from './bcf/bcf-export';
@@ -50,7 +50,7 @@ export class FindingExchangeService {
   constructor(
     private readonly dataSource: DataSource,
     private readonly storage: FileStorage,
-    private readonly notifier: FindingNotifier,
+    private readonly notifier: NoticeSink,
   ) {}
 
   /** The project's findings matching the filters, oldest first, as the exporters read them. */

@@ -2,7 +2,7 @@
 import type { DataSource } from 'typeorm';
 import { findRun, listRunMemberResults } from '../checks/check-results.query';
 import type { AppContext } from '../http/app-context';
-import type { FindingNotifier } from '../notifications/finding-notifier';
+import type { NoticeSink } from '../notifications/finding-notifier';
 import { type SyncOutcome, syncFindingsFromRun } from './finding-sync';
 
 /** Applies a finished run of the project to its findings; null when the run is not there or not done. */
@@ -17,7 +17,7 @@ export async function syncFindingsForRun(dataSource: DataSource, projectId: stri
  * Registers the listener once per app. It runs after the run is stored; a failure is logged and leaves the
  * findings as they were (the sync is one transaction), and a later run catches up.
  */
-export function listenForFinishedRuns(ctx: Pick<AppContext, 'dataSource' | 'events' | 'logger'>, notifier: FindingNotifier): void {
+export function listenForFinishedRuns(ctx: Pick<AppContext, 'dataSource' | 'events' | 'logger'>, notifier: NoticeSink): void {
   ctx.events.on('check-run.finished', ({ projectId, runId }) => {
     syncFindingsForRun(ctx.dataSource, projectId, runId)
       .then((outcome) => {

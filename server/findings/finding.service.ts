@@ -9,7 +9,7 @@ import { runTransaction } from '../data-source';
 import { ForbiddenError, NotFoundError, ValidationError } from '../http/errors';
 import { ProjectMember } from '../projects/project-member.entity';
 import type { FileStorage } from '../storage/file-storage';
-import type { FindingNotice, FindingNotifier } from '../notifications/finding-notifier';
+import type { FindingNotice, NoticeSink } from '../notifications/finding-notifier';
 import type { FindingViewpoint } from './export/finding-export';
 import { FindingChange } from './finding-change.entity';
 import { FindingComment } from './finding-comment.entity';
@@ -121,7 +121,7 @@ export class FindingService {
   constructor(
     private readonly dataSource: DataSource,
     private readonly storage: FileStorage,
-    private readonly notifier: FindingNotifier,
+    private readonly notifier: NoticeSink,
   ) {}
 
   async list(projectId: string, query: FindingListQuery, me: string): Promise<{ total: number; findings: FindingView[] }> {

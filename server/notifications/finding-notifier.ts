@@ -42,6 +42,9 @@ interface Scene {
   members: Map<string, User>;
 }
 
+/** Where services hand their notices once a change is committed (the demo seed passes one that sends nothing). */
+export type NoticeSink = Pick<FindingNotifier, 'deliver'>;
+
 export class FindingNotifier {
   private readonly preferences: NotificationPreferences;
 

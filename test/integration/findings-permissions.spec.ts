@@ -1,3 +1,4 @@
+import type { Response } from 'superagent';
 import type { Test } from 'supertest';
 import { Finding } from '../../server/findings/finding.entity';
 import type { Project } from '../../server/projects/project.entity';
@@ -25,7 +26,7 @@ interface Scene {
 
 interface Case {
   route: string;
-  send(agent: ApiAgent, scene: Scene): Test | Promise<Test>;
+  send(agent: ApiAgent, scene: Scene): Test | Promise<Response>;
   expected: [anonymous: number, outsider: number, reviewer: number, engineer: number, coordinator: number, admin: number];
   /** When the project is archived; reads are unchanged, every change is 409 for everyone who may make it. */
   archived?: [anonymous: number, outsider: number, reviewer: number, engineer: number, coordinator: number, admin: number];
@@ -101,7 +102,7 @@ const CASES: Case[] = [
   { route: 'GET …/findings/export.csv', send: (a, s) => a.get(url(s, '/export.csv')), expected: [401, 404, 200, 200, 200, 200], archived: [401, 404, 200, 200, 200, 200] },
   {
     route: 'POST …/findings/import',
-    send: async (a, s) => a.post(url(s, '/import')).attach('file', await unchangedBcf(s), 'returned.bcf'),
+    send: async (a, s) => await a.post(url(s, '/import')).attach('file', await unchangedBcf(s), 'returned.bcf'),
     expected: [401, 404, 200, 200, 200, 200],
     archived: [401, 404, 409, 409, 409, 409],
   },
