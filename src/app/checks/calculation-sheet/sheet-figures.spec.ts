@@ -6,16 +6,19 @@ import { figureFrame, PLOT_WIDTH_MM, sectionFigure, stressFigure } from './sheet
 
 // IPE 300: h 300, b 150, tw 7.1, tf 10.7, r 15 mm (EN 10365 dimensions).
 const IPE_300 = iSection(300, 7.1, [150, 10.7, 15]);
-// Three-rectangle I-beam of Gere, Mechanics of Materials, Problem 5.10-2: b = 180, t = 12, h = 420, h1 = 380 mm,
-// V = 125 kN → τmax = 28.43 MPa, τmin = 21.86 MPa, τaver = 27.41 MPa (solution manual).
-const GERE_BEAM = iSection(420, 12, [180, 20, 0]);
-const GERE_SHEAR_N = 125_000;
+// A fillet-less girder of three rectangles (invented: d 500, tw 10, b 200, tf 16 mm) under V = 200 kN. Expected values
+// by the closed-form three-rectangle formulas (common practice, no source), worked by hand beside this test:
+// I = (b·d³ − (b − tw)·hw³)/12 = 460.365×10⁶ mm⁴; Q(junction) = b·tf·(d − tf)/2 = 774 400 mm³;
+// Qmax = Q(junction) + tw·hw²/8 = 1 048 180 mm³ → τmax = V·Qmax/(I·tw) = 45.54 MPa; web at the junction 33.64 MPa,
+// flange at the junction 1.682 MPa; V/(hw·tw) = 42.74 MPa.
+const GIRDER = iSection(500, 10, [200, 16, 0]);
+const GIRDER_SHEAR_N = 200_000;
 
 function numbers(viewBox: string): number[] {
   return viewBox.split(' ').map(Number);
 }
 
-function stressOf(input: typeof GERE_BEAM, shear_N: number, elasticLimit_MPa?: number) {
+function stressOf(input: typeof GIRDER, shear_N: number, elasticLimit_MPa?: number) {
   const props = sectionProperties(input);
   const profile = shearStressProfile(props, shear_N);
   const frame = figureFrame(props);
@@ -89,30 +92,30 @@ describe('section figure', () => {
 
 describe('stress figure', () => {
   it('shares the section figure’s vertical frame, so both print at the same height and scale', () => {
-    const { props, frame, figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
+    const { props, frame, figure } = stressOf(GIRDER, GIRDER_SHEAR_N);
     const section = sectionFigure(props, frame);
     const [, sectionTop, , sectionHeight] = numbers(section.viewBox);
     const [, plotTop, , plotHeight] = numbers(figure.viewBox);
     expect([plotTop, plotHeight]).toEqual([sectionTop, sectionHeight]);
-    // 180 × 420 mm needs 1:5 in the 60 × 125 mm box (1:2.5 would be 168 mm tall).
+    // 200 × 500 mm needs 1:5 in the 60 × 125 mm box (1:2.5 would be 200 mm tall).
     expect(frame.scale).toBe(5);
   });
 
-  it('marks τmax at the neutral axis with the textbook value', () => {
-    const { profile, figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
-    expectClose(profile.tauMax_MPa, 28.43, 5e-4, 'τmax');
-    expect(figure.peak.label).toBe('τmax = 28.43 MPa');
-    // Mid-depth of a doubly symmetric section: svg y = 420 − 210.
-    expect(figure.peak.y).toBeCloseTo(210, 6);
-    // Axis 0–30 MPa (round ticks) over the plot's paper width at 1:5.
-    expect(figure.ticks.map((tick) => tick.label)).toEqual(['0', '10', '20', '30']);
-    expect(figure.peak.x).toBeCloseTo((profile.tauMax_MPa / 30) * PLOT_WIDTH_MM * 5, 3);
+  it('marks τmax at the neutral axis with the closed-form value', () => {
+    const { profile, figure } = stressOf(GIRDER, GIRDER_SHEAR_N);
+    expectClose(profile.tauMax_MPa, 45.537, 5e-4, 'τmax');
+    expect(figure.peak.label).toBe('τmax = 45.54 MPa');
+    // Mid-depth of a doubly symmetric section: svg y = 500 − 250.
+    expect(figure.peak.y).toBeCloseTo(250, 6);
+    // Axis 0–60 MPa (round ticks) over the plot's paper width at 1:5.
+    expect(figure.ticks.map((tick) => tick.label)).toEqual(['0', '20', '40', '60']);
+    expect(figure.peak.x).toBeCloseTo((profile.tauMax_MPa / 60) * PLOT_WIDTH_MM * 5, 3);
   });
 
   it('shows the jump at each web–flange junction: τmin in the web to b/t times less in the flange', () => {
-    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
-    expect(figure.jumps.map((jump) => jump.label)).toEqual(['21.86 → 1.457', '21.86 → 1.457']);
-    expect(figure.jumps.map((jump) => jump.segment.y1).sort((a, b) => a - b)).toEqual([20, 400]);
+    const { figure } = stressOf(GIRDER, GIRDER_SHEAR_N);
+    expect(figure.jumps.map((jump) => jump.label)).toEqual(['33.64 → 1.682', '33.64 → 1.682']);
+    expect(figure.jumps.map((jump) => jump.segment.y1).sort((a, b) => a - b)).toEqual([16, 484]);
     for (const { segment } of figure.jumps) {
       expect(segment.y1).toBe(segment.y2);
       expect(segment.x2).toBeGreaterThan(segment.x1);
@@ -120,24 +123,24 @@ describe('stress figure', () => {
   });
 
   it('draws the web average V/(hw·tw) over the clear web as a separate mark', () => {
-    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
-    expect(figure.marks.map((mark) => mark.label)).toEqual(['V/(hw·tw) = 27.41']);
-    expect(figure.marks[0].segment.y1).toBeCloseTo(20, 6);
-    expect(figure.marks[0].segment.y2).toBeCloseTo(400, 6);
+    const { figure } = stressOf(GIRDER, GIRDER_SHEAR_N);
+    expect(figure.marks.map((mark) => mark.label)).toEqual(['V/(hw·tw) = 42.74']);
+    expect(figure.marks[0].segment.y1).toBeCloseTo(16, 6);
+    expect(figure.marks[0].segment.y2).toBeCloseTo(484, 6);
   });
 
   it('adds the limit of the elastic check over the whole depth when the standard has one, and widens the axis for it', () => {
     // S235 with γM0 = 1.00: 235/√3 = 135.7 MPa (EN 1993-1-1 (6.19)).
-    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N, 235 / Math.sqrt(3));
+    const { figure } = stressOf(GIRDER, GIRDER_SHEAR_N, 235 / Math.sqrt(3));
     const limit = figure.marks.find((mark) => mark.key === 'elastic-limit')!;
     expect(limit.label).toBe('fy/(√3·γM0) = 135.7');
-    expect([limit.segment.y1, limit.segment.y2]).toEqual([0, 420]);
+    expect([limit.segment.y1, limit.segment.y2]).toEqual([0, 500]);
     expect(figure.ticks.map((tick) => tick.label)).toEqual(['0', '50', '100', '150']);
   });
 
   it('closes the filled area against the τ = 0 axis', () => {
-    const { figure } = stressOf(GERE_BEAM, GERE_SHEAR_N);
-    expect(figure.areaPath.startsWith('M0,420L')).toBe(true);
+    const { figure } = stressOf(GIRDER, GIRDER_SHEAR_N);
+    expect(figure.areaPath.startsWith('M0,500L')).toBe(true);
     expect(figure.areaPath.endsWith('L0,0Z')).toBe(true);
   });
 });
