@@ -1,24 +1,11 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, JoinColumn, ManyToOne } from 'typeorm';
 import { User } from '../users/user.entity';
-import { Finding } from './finding.entity';
-
-export const CHANGE_SOURCES = ['user', 'system', 'bcf-import'] as const;
-export type ChangeSource = (typeof CHANGE_SOURCES)[number];
+import { CHANGE_SOURCES, type ChangeSource } from './finding-fields';
+import { FindingPart } from './finding-part';
 
 /** One line of a finding's history: who changed which field from what to what, and when. */
 @Entity({ name: 'finding_change' })
-export class FindingChange {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Index()
-  @Column({ type: String })
-  findingId: string;
-
-  @ManyToOne(() => Finding, { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'findingId' })
-  finding?: Finding;
-
+export class FindingChange extends FindingPart {
   /** Null for changes the system made (a check run). */
   @Column({ type: String, nullable: true })
   actorId: string | null;

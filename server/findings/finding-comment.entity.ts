@@ -1,21 +1,10 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { User } from '../users/user.entity';
-import { Finding } from './finding.entity';
+import { FindingPart } from './finding-part';
 
 /** A comment on a finding, written in Taulens or brought in by a BCF import. */
 @Entity({ name: 'finding_comment' })
-export class FindingComment {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Index()
-  @Column({ type: String })
-  findingId: string;
-
-  @ManyToOne(() => Finding, { onDelete: 'CASCADE' })
-  @JoinColumn({ name: 'findingId' })
-  finding?: Finding;
-
+export class FindingComment extends FindingPart {
   /** BCF comment GUID, lower-case; an import adds only comments whose GUID is new. */
   @Index({ unique: true })
   @Column({ type: String, length: 36 })

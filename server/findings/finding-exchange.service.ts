@@ -13,6 +13,7 @@ import type { FileStorage } from '../storage/file-storage';
 import { exportBcf } from './bcf/bcf-export';
 import { importBcf, rejectUnknown } from './bcf/bcf-import';
 import type { BcfVersion } from './bcf/bcf-version';
+import type { BcfImportSummary } from './finding-api-types';
 import { planBcfImport } from './bcf-import-plan';
 import type { FindingExport } from './export/finding-export';
 import { findingsCsv } from './export/findings-csv';
@@ -30,15 +31,6 @@ export interface ExportFile {
   fileName: string;
   contentType: string;
   body: Buffer | string;
-}
-
-export interface BcfImportSummary {
-  version: BcfVersion;
-  topics: number;
-  statusChanges: number;
-  commentsAdded: number;
-  unchanged: number;
-  warnings: string[];
 }
 
 const ACCEPTED_UPLOAD = /\.(bcf|bcfzip)$/i;

@@ -17,6 +17,10 @@ export type GeneratedKind = Exclude<FindingKind, 'manual'>;
 export const FINDING_PRIORITIES = ['low', 'normal', 'high', 'critical'] as const;
 export type FindingPriority = (typeof FINDING_PRIORITIES)[number];
 
+/** Who made a change: a person in Taulens, the system after a check run, or a person through a BCF import. */
+export const CHANGE_SOURCES = ['user', 'system', 'bcf-import'] as const;
+export type ChangeSource = (typeof CHANGE_SOURCES)[number];
+
 export const FINDING_LIMITS = {
   title: 200,
   description: 4000,

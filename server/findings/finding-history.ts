@@ -1,7 +1,8 @@
 /** Rows of a finding's history, written beside every change in the same transaction. */
 import type { EntityManager } from 'typeorm';
 import { percentRoundedUp } from '../reports/report-format';
-import { type ChangeSource, FindingChange } from './finding-change.entity';
+import { FindingChange } from './finding-change.entity';
+import type { ChangeSource } from './finding-fields';
 
 export interface ChangeActor {
   /** Null for the system. */

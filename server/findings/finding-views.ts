@@ -1,67 +1,11 @@
-/** What the findings API answers: plain JSON, never entities. */
-import type { FindingCamera, FindingViewpoint } from './export/finding-export';
-import type { FindingChange, ChangeSource } from './finding-change.entity';
+/** Entities to the findings API's JSON (finding-api-types.ts): plain data, never entities. */
+import type { ChangeView, CommentView, FindingView, PersonRef, SavedViewpointView } from './finding-api-types';
+import type { FindingChange } from './finding-change.entity';
 import type { FindingComment } from './finding-comment.entity';
-import type { FindingKind, FindingPriority, FindingStatus } from './finding-fields';
 import type { Finding } from './finding.entity';
 import type { SavedViewpoint } from './saved-viewpoint.entity';
 
-export interface PersonRef {
-  id: string | null;
-  name: string;
-}
-
-export interface FindingView {
-  id: string;
-  guid: string;
-  number: number;
-  kind: FindingKind;
-  title: string;
-  description: string;
-  status: FindingStatus;
-  priority: FindingPriority;
-  assignee: { id: string; name: string; email: string } | null;
-  dueDate: string | null;
-  labels: string[];
-  memberGlobalIds: string[];
-  memberTag: string | null;
-  runId: string | null;
-  utilisation: number | null;
-  justification: string | null;
-  viewpoint: FindingViewpoint | null;
-  hasSnapshot: boolean;
-  /** Null when a check run raised it. */
-  createdBy: PersonRef | null;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface CommentView {
-  id: string;
-  guid: string;
-  author: PersonRef;
-  text: string;
-  createdAt: string;
-}
-
-export interface ChangeView {
-  id: string;
-  /** `{id: null, name: 'System'}` for changes a check run made. */
-  actor: PersonRef;
-  source: ChangeSource;
-  field: string;
-  from: string | null;
-  to: string | null;
-  at: string;
-}
-
-export interface FindingDetailView {
-  finding: FindingView;
-  comments: CommentView[];
-  history: ChangeView[];
-  /** The statuses the caller may move this finding to now. */
-  allowedTransitions: FindingStatus[];
-}
+export type { ChangeView, CommentView, FindingDetailView, FindingView, PersonRef, SavedViewpointView } from './finding-api-types';
 
 export const SYSTEM_ACTOR: PersonRef = { id: null, name: 'System' };
 
@@ -110,17 +54,6 @@ export function toChangeView(change: FindingChange): ChangeView {
     to: change.toValue,
     at: change.at.toISOString(),
   };
-}
-
-export interface SavedViewpointView {
-  id: string;
-  name: string;
-  camera: FindingCamera;
-  visibleGlobalIds: string[] | null;
-  selectedGlobalIds: string[];
-  sectionPlane: SavedViewpoint['sectionPlane'];
-  createdById: string | null;
-  createdAt: string;
 }
 
 export function toSavedViewpointView(viewpoint: SavedViewpoint): SavedViewpointView {

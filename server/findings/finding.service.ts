@@ -10,7 +10,7 @@ import { ForbiddenError, NotFoundError, ValidationError } from '../http/errors';
 import { ProjectMember } from '../projects/project-member.entity';
 import type { FileStorage } from '../storage/file-storage';
 import type { FindingNotice, NoticeSink } from '../notifications/finding-notifier';
-import type { FindingViewpoint } from './export/finding-export';
+import type { FindingPageView, FindingPatch, NewFindingRequest } from './finding-api-types';
 import { FindingChange } from './finding-change.entity';
 import { FindingComment } from './finding-comment.entity';
 import { FINDING_LIMITS, type FindingPriority, type FindingStatus } from './finding-fields';
@@ -38,24 +38,9 @@ export interface FindingActor {
 
 export type FindingAccess = ProjectAccess & { projectId: string };
 
-export interface NewFinding {
-  title: string;
-  description: string;
-  memberGlobalIds: string[];
-  viewpoint?: FindingViewpoint;
-  snapshotPng?: string;
-  priority: FindingPriority;
-  labels: string[];
-}
-
-export interface FindingPatch {
-  priority?: FindingPriority;
-  dueDate?: string | null;
-  labels?: string[];
-  assigneeId?: string | null;
-  title?: string;
-  description?: string;
-}
+/** A new finding as the route parsed it, defaults filled in. */
+export type NewFinding = Required<Pick<NewFindingRequest, 'title' | 'description' | 'memberGlobalIds' | 'priority' | 'labels'>> &
+  Pick<NewFindingRequest, 'viewpoint' | 'snapshotPng'>;
 
 /** Triage fields belong to whoever assigns; wording and labels to anyone taking part (the route's guard). */
 const PATCH_ACTIONS: Readonly<Partial<Record<keyof FindingPatch, Action>>> = {
@@ -124,7 +109,7 @@ export class FindingService {
     private readonly notifier: NoticeSink,
   ) {}
 
-  async list(projectId: string, query: FindingListQuery, me: string): Promise<{ total: number; findings: FindingView[] }> {
+  async list(projectId: string, query: FindingListQuery, me: string): Promise<FindingPageView> {
     const manager = this.dataSource.manager;
     const total = await filteredFindings(manager, projectId, query, me).getCount();
     const rows = await sortedPage(filteredFindings(manager, projectId, query, me), query.sort, query.dir, query.page, query.pageSize).getMany();

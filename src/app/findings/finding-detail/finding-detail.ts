@@ -14,9 +14,8 @@ import { filter, Observable } from 'rxjs';
 import { percentText } from '../../../../server/reports/report-format';
 import { errorMessage } from '../../core/api-error';
 import { CautionsNotice } from '../../core/cautions-notice/cautions-notice';
-import { Member } from '../../projects/project';
 import { ProjectContext } from '../../projects/project-context';
-import { membersUrl } from '../../projects/project-members-api';
+import { projectPeople } from '../project-people';
 import { askForJustification } from '../accept-dialog/accept-dialog';
 import { changeSourceText, changeText } from '../change-text';
 import {
@@ -94,11 +93,7 @@ export class FindingDetail {
   protected readonly snapshotUrl = computed(() => findingUrl(this.context.projectId(), this.findingId(), '/snapshot.png'));
   protected readonly viewLink = computed(() => ['/projects', this.context.projectId(), '3d-view']);
 
-  protected readonly members = httpResource<{ members: Member[] }>(() => {
-    const projectId = this.context.projectId();
-    return projectId ? membersUrl(projectId) : undefined;
-  });
-  protected readonly people = computed(() => (this.members.hasValue() ? this.members.value().members : []));
+  protected readonly people = projectPeople(() => this.context.projectId());
 
   protected readonly canAssign = computed(() => this.context.can('finding.assign'));
   protected readonly canTakePart = computed(() => this.context.can('finding.comment'));

@@ -19,9 +19,8 @@ import { debounceTime, Observable } from 'rxjs';
 import { percentText } from '../../../../server/reports/report-format';
 import { errorMessage } from '../../core/api-error';
 import { CautionsNotice } from '../../core/cautions-notice/cautions-notice';
-import { Member } from '../../projects/project';
 import { ProjectContext } from '../../projects/project-context';
-import { membersUrl } from '../../projects/project-members-api';
+import { projectPeople } from '../project-people';
 import {
   BcfImportSummary,
   Finding,
@@ -121,11 +120,7 @@ export class FindingsList {
     return error ? errorMessage(error) : null;
   });
 
-  protected readonly members = httpResource<{ members: Member[] }>(() => {
-    const projectId = this.context.projectId();
-    return projectId ? membersUrl(projectId) : undefined;
-  });
-  protected readonly people = computed(() => (this.members.hasValue() ? this.members.value().members : []));
+  protected readonly people = projectPeople(() => this.context.projectId());
 
   protected readonly canAssign = computed(() => this.context.can('finding.assign'));
   protected readonly canExport = computed(() => this.context.can('export'));
