@@ -45,10 +45,7 @@ export const projectRoutes: Routes = [
     pathMatch: 'full',
     loadComponent: () => import('./project-overview/project-overview').then((m) => m.ProjectOverview),
   }),
-  placeholderRoute('models', 'IFC revisions of the structural model and the I-section members found in each.', [
-    { label: 'Upload IFC revision', icon: 'upload', permission: 'model.upload' },
-    { label: 'Compare revisions', icon: 'compare_arrows', permission: 'model.read' },
-  ]),
+  sectionRoute('models', { loadChildren: () => import('../models/models-routes').then((m) => m.modelsRoutes) }),
   sectionRoute('shear-results', { loadChildren: () => import('../results/results-routes').then((m) => m.resultsRoutes) }),
   sectionRoute('checks', { loadChildren: () => import('../checks/checks-routes').then((m) => m.checksRoutes) }),
   placeholderRoute('3d-view', 'The model coloured by utilisation, with a legend.', []),

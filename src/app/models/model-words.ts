@@ -1,0 +1,52 @@
+/** Our words for the states of revisions and members, and small formatting rules the Models pages share. */
+import type { MemberStatus, RevisionStatus, RevisionView } from './models-api';
+
+export const REVISION_STATUS_LABELS: Readonly<Record<RevisionStatus, string>> = {
+  queued: 'Waiting to be read',
+  ingesting: 'Reading',
+  ready: 'Ready',
+  failed: 'Could not be read',
+};
+
+const PHASE_LABELS: Readonly<Record<string, string>> = {
+  parse: 'Opening the file',
+  members: 'Reading members and sections',
+  geometry: 'Building the 3D geometry',
+  write: 'Writing the 3D geometry',
+  store: 'Saving the members',
+};
+
+export const MEMBER_STATUS_LABELS: Readonly<Record<MemberStatus, string>> = {
+  ok: 'Section read',
+  'not-applicable': 'Not an I-section',
+  flagged: 'Needs a look',
+};
+
+export function isRunning(revision: Pick<RevisionView, 'status'>): boolean {
+  return revision.status === 'queued' || revision.status === 'ingesting';
+}
+
+/** "Building the 3D geometry · 62 %" while a revision is read. */
+export function progressText(revision: Pick<RevisionView, 'status' | 'progress'>): string {
+  if (!revision.progress) return REVISION_STATUS_LABELS[revision.status];
+  const phase = PHASE_LABELS[revision.progress.phase] ?? 'Reading';
+  return `${phase} · ${Math.floor(revision.progress.fraction * 100)} %`;
+}
+
+/** 1 KB = 1024 bytes, one decimal above 1 MB: "812 KB", "14.6 MB". */
+export function sizeText(bytes: number): string {
+  if (bytes < 1024) return `${bytes} B`;
+  if (bytes < 1024 ** 2) return `${Math.round(bytes / 1024)} KB`;
+  if (bytes < 1024 ** 3) return `${(bytes / 1024 ** 2).toFixed(1)} MB`;
+  return `${(bytes / 1024 ** 3).toFixed(2)} GB`;
+}
+
+/** Millimetres with at most one decimal, or a dash. */
+export function mmText(value: number | null | undefined): string {
+  return value === null || value === undefined ? '—' : value.toLocaleString('en', { maximumFractionDigits: 1 });
+}
+
+/** The label a revision goes by in lists and selectors. */
+export function revisionLabel(revision: Pick<RevisionView, 'number' | 'fileName'>): string {
+  return `Revision ${revision.number} · ${revision.fileName}`;
+}
