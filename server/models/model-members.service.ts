@@ -5,11 +5,11 @@ import type { MemberListQuery } from './member-list-query';
 import { MEMBER_ROW_COLUMNS, type MemberRow } from './member-row';
 import { ModelMember } from './model-member.entity';
 import { ModelMemberRecord } from './model-member-record.entity';
-import { loadMemberRecords } from './model-queries';
+import { loadMemberRecords, toRevisionView } from './model-queries';
 import { ModelRevision } from './model-revision.entity';
 import { type RevisionComparison, compareRevisions } from './revision-compare';
 import { revisionNotFound, revisionNotReady } from './revision-errors';
-import { type RevisionView, toRevisionView } from './revision-view';
+import type { RevisionView } from './revision-view';
 
 export interface MemberPage {
   total: number;

@@ -6,7 +6,7 @@ import { type DataSource, LessThan } from 'typeorm';
 import type { MemberRecord } from '../ifc/model-read-result';
 import { ModelMemberRecord } from './model-member-record.entity';
 import { ModelRevision } from './model-revision.entity';
-import { type RevisionView, toRevisionView } from './revision-view';
+import type { RevisionView } from './revision-view';
 
 export type { RevisionView } from './revision-view';
 
@@ -50,4 +50,28 @@ export async function latestReadyRevision(dataSource: DataSource, projectId: str
     .getRepository(ModelRevision)
     .findOne({ where: { projectId, status: 'ready' }, order: { number: 'DESC' }, relations: WITH_UPLOADER });
   return latest ? toRevisionView(latest) : null;
+}
+
+/** The API view of a revision entity; `revision.uploadedBy` must be loaded (relations: { uploadedBy: true }). */
+export function toRevisionView(revision: ModelRevision): RevisionView {
+  const uploader = revision.uploadedBy;
+  return {
+    id: revision.id,
+    number: revision.number,
+    fileName: revision.fileName,
+    sizeBytes: revision.sizeBytes,
+    sha256: revision.sha256,
+    note: revision.note,
+    uploadedBy: uploader ? { id: uploader.id, name: uploader.name } : null,
+    uploadedAt: revision.uploadedAt.toISOString(),
+    status: revision.status,
+    progress:
+      revision.progressPhase !== null && revision.progressFraction !== null
+        ? { phase: revision.progressPhase, fraction: revision.progressFraction }
+        : null,
+    error: revision.error,
+    schema: revision.schema,
+    lengthUnit: revision.lengthUnit,
+    counts: revision.counts,
+  };
 }

@@ -2,18 +2,7 @@ import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, Primary
 import type { IfcSchema } from '../ifc/model-read-result';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
-
-export const REVISION_STATUSES = ['queued', 'ingesting', 'ready', 'failed'] as const;
-export type RevisionStatus = (typeof REVISION_STATUSES)[number];
-
-/** Member counts of an ingested revision (context = slabs, walls… shown only for orientation). */
-export interface RevisionCounts {
-  members: number;
-  ok: number;
-  notApplicable: number;
-  flagged: number;
-  context: number;
-}
+import { REVISION_STATUSES, type RevisionCounts, type RevisionStatus } from './revision-view';
 
 /** One uploaded IFC file of a project and the state of its ingest. */
 @Entity({ name: 'model_revision' })

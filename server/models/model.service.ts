@@ -17,12 +17,13 @@ import type { IngestJobInput, IngestJobOutput } from './model-ingest.job';
 import { storeMembers } from './member-store';
 import { ModelMember } from './model-member.entity';
 import { ModelMemberRecord } from './model-member-record.entity';
+import { toRevisionView } from './model-queries';
 import { ModelRevision } from './model-revision.entity';
 import type { CheckedIfc } from './model-upload';
 import { ProjectCatalogueService } from './project-catalogue.service';
 import { revisionNotFound, revisionNotReady } from './revision-errors';
 import { ProgressRecorder, RevisionEvents } from './revision-progress';
-import { type RevisionView, toRevisionView } from './revision-view';
+import type { RevisionView } from './revision-view';
 
 export interface ModelServiceDeps {
   dataSource: DataSource;

@@ -7,7 +7,8 @@ import { EventEmitter } from 'node:events';
 import { type DataSource, In } from 'typeorm';
 import type { JobProgress } from '../jobs/job-progress';
 import { type IngestPhase, isIngestPhase } from './ingest-phases';
-import { ModelRevision, type RevisionStatus } from './model-revision.entity';
+import { ModelRevision } from './model-revision.entity';
+import type { RevisionStatus } from './revision-view';
 
 const WRITE_INTERVAL_MS = 400;
 

@@ -1,7 +1,18 @@
+/** Model revisions as the API shows them; plain types, shared with the client. */
 import type { IfcSchema } from '../ifc/model-read-result';
-import type { ModelRevision, RevisionCounts, RevisionStatus } from './model-revision.entity';
 
-/** A revision as the API shows it. */
+export const REVISION_STATUSES = ['queued', 'ingesting', 'ready', 'failed'] as const;
+export type RevisionStatus = (typeof REVISION_STATUSES)[number];
+
+/** Member counts of an ingested revision (context = slabs, walls… shown only for orientation). */
+export interface RevisionCounts {
+  members: number;
+  ok: number;
+  notApplicable: number;
+  flagged: number;
+  context: number;
+}
+
 export interface RevisionView {
   id: string;
   number: number;
@@ -19,28 +30,4 @@ export interface RevisionView {
   schema: IfcSchema | null;
   lengthUnit: string | null;
   counts: RevisionCounts | null;
-}
-
-/** `revision.uploadedBy` must be loaded (relations: { uploadedBy: true }). */
-export function toRevisionView(revision: ModelRevision): RevisionView {
-  const uploader = revision.uploadedBy;
-  return {
-    id: revision.id,
-    number: revision.number,
-    fileName: revision.fileName,
-    sizeBytes: revision.sizeBytes,
-    sha256: revision.sha256,
-    note: revision.note,
-    uploadedBy: uploader ? { id: uploader.id, name: uploader.name } : null,
-    uploadedAt: revision.uploadedAt.toISOString(),
-    status: revision.status,
-    progress:
-      revision.progressPhase !== null && revision.progressFraction !== null
-        ? { phase: revision.progressPhase, fraction: revision.progressFraction }
-        : null,
-    error: revision.error,
-    schema: revision.schema,
-    lengthUnit: revision.lengthUnit,
-    counts: revision.counts,
-  };
 }
