@@ -125,7 +125,12 @@ export async function* xlsxRecordChunks(path: string, sheet: XlsxSheet, chunkSiz
     for await (const worksheet of workbook as AsyncIterable<unknown> as AsyncIterable<StreamedWorksheet>) {
       // exceljs names a sheet only when it has read xl/workbook.xml first; its id is then the part number.
       const isWanted = worksheet.name !== undefined ? worksheet.name === sheet.name : String(worksheet.id) === partNumber;
-      if (!isWanted) continue;
+      if (!isWanted) {
+        // exceljs parses sheets in order from one stream: a skipped sheet must still be read through, or the reader
+        // can trip over its half-read part when the machine is busy.
+        for await (const _row of worksheet) void _row;
+        continue;
+      }
       let chunk: RawRecord[] = [];
       for await (const row of worksheet) {
         chunk.push({ row: row.number, cells: rowCells(row) });
