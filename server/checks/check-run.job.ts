@@ -9,7 +9,7 @@ import { governingShearsByMember } from '../results/governing-shear';
 import type { MemberMatch } from '../results/member-matching';
 import type { CheckParameters } from './check-parameters';
 import { type CheckRunSummary, computeCheckRun } from './check-run-compute';
-import { type MemberResultRow, memberResultRow } from './member-result-row';
+import { memberResultRow, memberResultValues } from './member-result-row';
 
 /** What the worker reads of a member: what the check needs and what the results table shows. */
 export type CheckRunMember = Pick<MemberRecord, 'globalId' | 'status' | 'reason' | 'profile' | 'material' | 'flags' | 'tag' | 'name' | 'storey'>;
@@ -23,7 +23,8 @@ export interface CheckRunJobInput {
 }
 
 export interface CheckRunJobOutput {
-  rows: MemberResultRow[];
+  /** Per member, the stored row's values in MEMBER_RESULT_COLUMNS order: flat, so they cross the thread cheaply. */
+  rows: unknown[][];
   /** The combination names the rows refer to by index. */
   combinations: string[];
   summary: CheckRunSummary;
@@ -42,7 +43,7 @@ export default defineJob((input: CheckRunJobInput, report): CheckRunJobOutput =>
     onProgress: ({ done, total }) => report({ fraction: (COMPUTE_SHARE * done) / total }),
   });
   const combinationIndex = new Map(table.combinations.map((name, index) => [name, index]));
-  const rows = members.map((check, ordinal) => memberResultRow(ordinal, input.members[ordinal], check, combinationIndex));
+  const rows = members.map((check, ordinal) => memberResultValues(memberResultRow(ordinal, input.members[ordinal], check, combinationIndex)));
   report({ fraction: 1 });
   return { rows, combinations: table.combinations, summary };
 });

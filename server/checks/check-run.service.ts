@@ -3,6 +3,7 @@
  * its inputs, computed in a worker and stored; then `check-run.finished` tells other features. A run that fails
  * leaves no member rows and a message saying why. Nothing changes a run once it is done or failed.
  */
+import { randomUUID } from 'node:crypto';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import { runTransaction } from '../data-source';
@@ -11,6 +12,7 @@ import { DomainError, type FieldIssue, NotFoundError, ValidationError } from '..
 import type { JobRunner } from '../jobs/job-runner';
 import { workerFile } from '../jobs/job-runner';
 import { Project } from '../projects/project.entity';
+import { insertRows } from '../results/bulk-insert';
 import { readyRevision } from '../results/ready-revision';
 import type { Matching, ResultMatchingService } from '../results/result-matching.service';
 import type { FileStorage } from '../storage/file-storage';
@@ -21,12 +23,12 @@ import { CheckRun } from './check-run.entity';
 import type { CheckRunJobInput, CheckRunJobOutput, CheckRunMember } from './check-run.job';
 import { type CheckRunView, toRunView } from './check-run-view';
 import { engineVersion } from './engine-version';
-import type { MemberResultRow } from './member-result-row';
+import { MEMBER_RESULT_COLUMNS } from './member-result-row';
 import { runParameters } from './run-parameters';
 
 const CHECK_WORKER = workerFile(__filename, './check-run.job');
-/** 500 rows × 19 values per statement; each batch is its own short transaction, so other requests go on. */
-const ROWS_PER_INSERT = 500;
+/** Rows per short transaction, so other requests go on between them. */
+const ROWS_PER_TRANSACTION = 800;
 /** Progress shares: the worker's computation, then storing the rows. */
 const COMPUTED_AT = 0.85;
 
@@ -72,26 +74,28 @@ export class CheckRunService {
       throw new ValidationError(`${matching.summary.warning} Confirm to run the check anyway.`, { code: 'poor_match', details });
     }
     const runs = dataSource.getRepository(CheckRun);
-    const run = await runs.save(
-      runs.create({
-        projectId,
-        status: 'queued',
-        standard: parameters.standard,
-        parameters,
-        engineVersion: engineVersion(),
-        modelRevisionId: revision.id,
-        modelRevisionNumber: revision.number,
-        modelFileName: revision.fileName,
-        modelSha256: revision.sha256,
-        resultSetId: resultSet.id,
-        resultSetName: resultSet.name,
-        resultsSha256: resultSet.sha256,
-        combinations: [],
-        poorMatchConfirmed: matching.report.likelyOtherModel,
-        createdById: actor.id,
-        createdByName: actor.name,
-      }),
-    );
+    // insert, not save: save opens its own transaction, which would tangle with a queued one on the shared connection.
+    const id = randomUUID();
+    await runs.insert({
+      id,
+      projectId,
+      status: 'queued',
+      standard: parameters.standard,
+      parameters,
+      engineVersion: engineVersion(),
+      modelRevisionId: revision.id,
+      modelRevisionNumber: revision.number,
+      modelFileName: revision.fileName,
+      modelSha256: revision.sha256,
+      resultSetId: resultSet.id,
+      resultSetName: resultSet.name,
+      resultsSha256: resultSet.sha256,
+      combinations: [],
+      poorMatchConfirmed: matching.report.likelyOtherModel,
+      createdById: actor.id,
+      createdByName: actor.name,
+    });
+    const run = await runs.findOneByOrFail({ id });
     this.progress.set(run.id, 0);
     const finished = this.compute(run, resultSet.governingKey, matching, parameters);
     return { run: toRunView(run, 0), finished };
@@ -164,12 +168,11 @@ export class CheckRunService {
     return toRunView(finished ?? { ...run, status: 'failed', error: 'The check could not be recorded.' }, undefined);
   }
 
-  private async storeRows(runId: string, rows: readonly MemberResultRow[]): Promise<void> {
-    for (let start = 0; start < rows.length; start += ROWS_PER_INSERT) {
-      const batch = rows.slice(start, start + ROWS_PER_INSERT).map((row) => ({ ...row, runId }));
-      await runTransaction(this.deps.dataSource, (manager) =>
-        manager.createQueryBuilder().insert().into(CheckMemberResult).values(batch).updateEntity(false).execute(),
-      );
+  private async storeRows(runId: string, rows: readonly unknown[][]): Promise<void> {
+    const table = this.deps.dataSource.getMetadata(CheckMemberResult).tableName;
+    for (let start = 0; start < rows.length; start += ROWS_PER_TRANSACTION) {
+      const batch = rows.slice(start, start + ROWS_PER_TRANSACTION).map((values) => [runId, ...values]);
+      await runTransaction(this.deps.dataSource, (manager) => insertRows(manager, table, ['runId', ...MEMBER_RESULT_COLUMNS], batch));
       this.progress.set(runId, COMPUTED_AT + ((1 - COMPUTED_AT) * (start + batch.length)) / rows.length);
     }
   }

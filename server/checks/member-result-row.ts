@@ -21,6 +21,32 @@ interface CompactCombinations {
   k?: number[];
 }
 
+/** Column order of the stored row after its run id, for bulk inserts. */
+export const MEMBER_RESULT_COLUMNS = [
+  'ordinal',
+  'globalId',
+  'tag',
+  'name',
+  'storey',
+  'profileName',
+  'grade',
+  'status',
+  'governingCombination',
+  'VEd_kN',
+  'VRd_kN',
+  'utilisation',
+  'tauMax_MPa',
+  'tauAvgWeb_MPa',
+  'flags',
+  'detail',
+  'combinations',
+] as const satisfies readonly (keyof MemberResultRow)[];
+
+/** The row's values in MEMBER_RESULT_COLUMNS order, as the database stores them (simple-json columns as JSON text). */
+export function memberResultValues(row: MemberResultRow): unknown[] {
+  return MEMBER_RESULT_COLUMNS.map((column) => (column === 'flags' || column === 'detail' ? JSON.stringify(row[column]) : row[column]));
+}
+
 export function resultStatusOf(check: Pick<MemberCheck, 'status' | 'warning'>): ResultStatus {
   return check.status === 'pass' && check.warning ? 'warning' : check.status;
 }

@@ -1,4 +1,5 @@
 /** Column mappings a project saved under a name, for the next export of the same analysis program. */
+import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ConflictError, NotFoundError } from '../http/errors';
 import type { ColumnMapping } from './column-mapping';
@@ -22,9 +23,10 @@ export class MappingTemplateService {
   /** Saves a template; inside an import it joins the import's transaction (`manager`). */
   async create(projectId: string, name: string, mapping: ColumnMapping, actorId: string, manager: EntityManager = this.dataSource.manager): Promise<MappingTemplateView> {
     await assertNameFree(manager, projectId, name);
-    const repository = manager.getRepository(ResultMappingTemplate);
-    const saved = await repository.save(repository.create({ projectId, name, mapping, createdById: actorId }));
-    return toTemplateView(saved);
+    // insert, not save: save opens its own transaction, which would tangle with a queued one on the shared connection.
+    const id = randomUUID();
+    await manager.insert(ResultMappingTemplate, { id, projectId, name, mapping, createdById: actorId });
+    return toTemplateView(await manager.findOneByOrFail(ResultMappingTemplate, { id }));
   }
 
   async assertNameFree(projectId: string, name: string): Promise<void> {

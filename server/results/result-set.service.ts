@@ -11,6 +11,7 @@ import { workerFile } from '../jobs/job-runner';
 import type { JobRunner } from '../jobs/job-runner';
 import type { FileStorage } from '../storage/file-storage';
 import type { ColumnMapping } from './column-mapping';
+import { insertRows } from './bulk-insert';
 import { withLocalCopy, withScratchFile } from './local-copy';
 import { MappingTemplateService } from './mapping-template.service';
 import type { GeometryMatchOptions, MatchableKey } from './member-matching';
@@ -23,8 +24,7 @@ import type { ResultsImportJobInput, ResultsImportJobOutput } from './results-im
 import { ResultsUploadService } from './results-upload.service';
 
 const IMPORT_WORKER = workerFile(__filename, './results-import.job');
-/** 4,000 keys × 6 values stay below SQLite's 32,766 bound parameters per statement. */
-const KEYS_PER_INSERT = 4000;
+const KEY_COLUMNS = ['resultSetId', 'keyIndex', 'memberKey', 'rowCount', 'firstRow', 'ends'] as const satisfies readonly (keyof ResultKey)[];
 /** How far an analysis end point may lie from the model's member axis when the request does not say (our choice). */
 export const DEFAULT_GEOMETRY_TOLERANCE_MM = 250;
 
@@ -108,17 +108,15 @@ export class ResultSetService {
           matching: summary,
           createdById: actorId,
         });
-        for (let start = 0; start < imported.memberKeys.length; start += KEYS_PER_INSERT) {
-          const rows = imported.memberKeys.slice(start, start + KEYS_PER_INSERT).map((key, offset) => ({
-            resultSetId: id,
-            keyIndex: start + offset,
-            memberKey: key.memberKey,
-            rowCount: key.rows,
-            firstRow: key.firstRow,
-            ends: key.end1_mm && key.end2_mm ? ([key.end1_mm, key.end2_mm] as ResultKey['ends']) : null,
-          }));
-          await manager.createQueryBuilder().insert().into(ResultKey).values(rows).updateEntity(false).execute();
-        }
+        const keys = imported.memberKeys.map((key, keyIndex) => [
+          id,
+          keyIndex,
+          key.memberKey,
+          key.rows,
+          key.firstRow,
+          key.end1_mm && key.end2_mm ? JSON.stringify([key.end1_mm, key.end2_mm]) : null,
+        ]);
+        await insertRows(manager, manager.connection.getMetadata(ResultKey).tableName, KEY_COLUMNS, keys);
         if (request.saveTemplateAs) await this.templates.create(projectId, request.saveTemplateAs, request.mapping, actorId, manager);
       });
     } catch (error) {
