@@ -48,7 +48,7 @@ export const projectRoutes: Routes = [
   sectionRoute('models', { loadChildren: () => import('../models/models-routes').then((m) => m.modelsRoutes) }),
   sectionRoute('shear-results', { loadChildren: () => import('../results/results-routes').then((m) => m.resultsRoutes) }),
   sectionRoute('checks', { loadChildren: () => import('../checks/checks-routes').then((m) => m.checksRoutes) }),
-  placeholderRoute('3d-view', 'The model coloured by utilisation, with a legend.', []),
+  sectionRoute('3d-view', { loadComponent: () => import('../viewer/viewer-page').then((m) => m.ViewerPage) }),
   sectionRoute('findings', { loadChildren: () => import('../findings/findings-routes').then((m) => m.findingsRoutes) }),
   sectionRoute('members', {
     loadComponent: () => import('./project-members/project-members').then((m) => m.ProjectMembers),

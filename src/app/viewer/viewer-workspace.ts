@@ -54,6 +54,8 @@ export class ViewerWorkspace {
 
   readonly selected = output<readonly string[]>();
   readonly snapshot = output<Blob>();
+  /** A model has loaded and is drawn; viewpoints can be applied from now on. */
+  readonly loaded = output<ModelSummary>();
 
   protected readonly canvas = viewChild.required(ViewerCanvas);
   private readonly canvasElement = viewChild.required(ViewerCanvas, { read: ElementRef<HTMLElement> });
@@ -87,6 +89,11 @@ export class ViewerWorkspace {
     return this.canvas().engine()?.getViewpoint() ?? null;
   }
 
+  /** The view as a PNG, e.g. for a finding; null until WebGL has started. */
+  snapshotPng(): Promise<Blob> | null {
+    return this.canvas().engine()?.snapshotPng() ?? null;
+  }
+
   /** Restores a finding's view; a bad viewpoint throws a ViewpointError and leaves the view as it was. */
   applyViewpoint(viewpoint: ViewerViewpoint): void {
     const engine = this.canvas().engine();
@@ -114,6 +121,7 @@ export class ViewerWorkspace {
     this.hover.set(null);
     this.section.set(null);
     this.changeSelection([]);
+    this.loaded.emit(summary);
   }
 
   protected changeSelection(globalIds: readonly string[]): void {
