@@ -62,8 +62,7 @@ export function sortedPage(
 ): SelectQueryBuilder<Finding> {
   const order = dir === 'asc' ? 'ASC' : 'DESC';
   return query
-    .addSelect(SORT_EXPRESSIONS[sort], 'sort_key')
-    .orderBy('sort_key', order)
+    .orderBy(SORT_EXPRESSIONS[sort], order)
     .addOrderBy('f.number', order)
     .offset(page * pageSize)
     .limit(pageSize);

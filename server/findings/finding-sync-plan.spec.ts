@@ -31,7 +31,7 @@ const run = (revisionNumber: number) => ({ runId: `run-${revisionNumber}`, revis
 
 describe('planRunSync', () => {
   it('raises one finding per member and kind the run shows', () => {
-    const plan = planRunSync(run(1), [row(B12, 'fail', 1.124, ['assumed-grade']), row(B14, 'warning', 0.93), row(MEMBER_IDS.columnC3, 'pass', 0.4)], []);
+    const plan = planRunSync(run(1), [row(B12, 'fail', 1.124, ['assumed-grade', 'web-proportion-limit']), row(B14, 'warning', 0.93), row(MEMBER_IDS.columnC3, 'pass', 0.4)], []);
     expect(plan.update).toEqual([]);
     expect(plan.create.map((draft) => [draft.globalId, draft.kind, draft.priority])).toEqual([
       [B12, 'web-shear-fail', 'high'],
@@ -44,11 +44,11 @@ describe('planRunSync', () => {
       memberLabel: 'B-12 · IPE 300 · Level 2',
       utilisation: 1.124,
     });
-    expect(plan.create[1].description).toBe('The check of model revision 1 flagged: assumed-grade.');
+    expect(plan.create[1].description).toBe('The check of model revision 1 flagged: web-proportion-limit.');
   });
 
   it('raises nothing for members that were not checked, whatever their flags', () => {
-    expect(planRunSync(run(1), [row(B12, 'not-checked', null, ['assumed-grade']), row(B14, 'not-applicable', null)], [])).toEqual({ create: [], update: [] });
+    expect(planRunSync(run(1), [row(B12, 'not-checked', null, ['tapered']), row(B14, 'not-applicable', null)], [])).toEqual({ create: [], update: [] });
   });
 
   it('updates a finding that still fails rather than raising a second one', () => {
@@ -97,7 +97,7 @@ describe('planRunSync', () => {
   });
 
   it('clears a flag finding once the flags to review are gone', () => {
-    const [update] = planRunSync(run(2), [row(B12, 'pass', 0.5, ['catalogue-section'])], [finding('open', 1, 'flag')]).update;
+    const [update] = planRunSync(run(2), [row(B12, 'pass', 0.5, ['catalogue-section', 'assumed-grade', 'elastic-check-exceeded'])], [finding('open', 1, 'flag')]).update;
     expect(update.status).toEqual({ from: 'open', to: 'ready-to-verify' });
   });
 });

@@ -48,18 +48,13 @@ export interface SyncedFinding {
 }
 
 /**
- * Flags that ask for an engineer's judgement rather than describing where data came from: a web beyond the code's
- * proportion limit, the elastic check exceeded, a guessed grade or a section the reader had to interpret.
+ * Flags that put the check itself in doubt: a web beyond the code's proportion limit for unstiffened webs, or a
+ * section the reader had to interpret (tapered, curved, several profiles, a top flange taken to equal the bottom).
+ * Facts of where data came from (an assumed grade, a catalogue section) and the elastic check beside a passing
+ * plastic one are shown on the member lists and calculation sheets instead: a finding for each would bury the few
+ * that matter.
  */
-export const FLAGS_TO_REVIEW: ReadonlySet<string> = new Set([
-  'web-proportion-limit',
-  'elastic-check-exceeded',
-  'assumed-grade',
-  'tapered',
-  'top-flange-assumed',
-  'several-profiles',
-  'curved',
-]);
+export const FLAGS_TO_REVIEW: ReadonlySet<string> = new Set(['web-proportion-limit', 'tapered', 'top-flange-assumed', 'several-profiles', 'curved']);
 
 const GENERATED_KINDS: readonly GeneratedKind[] = ['web-shear-fail', 'web-shear-warning', 'flag'];
 

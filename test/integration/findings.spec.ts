@@ -305,6 +305,9 @@ describe('findings', () => {
 
     it('lists newest first by default', async () => {
       expect(await list('')).toEqual({ total: 3, titles: ['Charlie splice', 'Bravo 50% cope', 'Alpha web plate'] });
+      const engineer = await app.signIn(scene.engineer);
+      const numbers = (await engineer.get(findingsUrl(scene.project.id, '?sort=priority')).expect(200)).body.findings.map((f: { number: number }) => f.number);
+      expect(numbers).toEqual([2, 3, 1]);
     });
 
     it('sorts priorities by severity and statuses by workflow order', async () => {

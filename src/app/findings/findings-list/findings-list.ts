@@ -129,7 +129,6 @@ export class FindingsList {
     ...(this.canAssign() ? ['select'] : []),
     'number',
     'title',
-    'kind',
     'member',
     'status',
     'priority',
