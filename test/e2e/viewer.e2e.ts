@@ -1,0 +1,233 @@
+/**
+ * The engineer's 3D view of the demo project, in Debian's chromium (software WebGL) against the real server with the
+ * demo seed: the model draws, a failing and a passing member show their legend colours on screen, a click opens
+ * the clicked member's results, and "Only failing" takes the passing members off the screen.
+ *
+ * Which members fail or pass comes from the check run's own results API, not from this test.
+ */
+import { mkdtemp, rm } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
+import { BrowserContext, Page } from 'playwright-core';
+import { DEMO_PASSWORD } from '../../server/demo/seed';
+import { RunningServer, startServer } from '../../server/main';
+import type { ViewerTestHook } from '../../src/app/viewer/viewer-test-hook';
+import { launchChromium } from './chromium';
+
+const DEPOT = 'Brindlecote Riverside Depot and Offices';
+/** VIEWER_TEST_HOOK_KEY of src/app/viewer/viewer-test-hook.ts (a value import would load Angular into node). */
+const VIEWER_TEST_HOOK_KEY = 'taulens.viewerTestHook';
+// Screenshots for looking at the view by eye; nothing compares them.
+const SCREENSHOTS = os.tmpdir();
+/** Flat shading draws the legend colour itself; a channel may still differ by rounding in software WebGL. */
+const COLOUR_TOLERANCE = 3;
+/** Background with the see-through pale grey context possibly in front of it. */
+const BACKGROUND_TOLERANCE = 24;
+
+type Rgb = [number, number, number];
+
+interface RunRow {
+  globalId: string;
+  tag: string | null;
+  utilisation: number | null;
+  status: string;
+}
+
+let server: RunningServer;
+let context: BrowserContext;
+let page: Page;
+let dataDir: string;
+let profileDir: string;
+
+beforeAll(async () => {
+  dataDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-data-'));
+  profileDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-profile-'));
+  server = await startServer({
+    port: 0,
+    dataDir,
+    fakeSmtp: true,
+    fakeSmtpPort: 0,
+    seedDemo: true,
+    logLevel: 'error',
+    webRoot: path.resolve(__dirname, '../../dist/web/browser'),
+  });
+  context = await launchChromium(profileDir);
+  // The production build installs the viewer's test hook only when asked to.
+  await context.addInitScript(([key]) => localStorage.setItem(key, 'on'), [VIEWER_TEST_HOOK_KEY]);
+  page = context.pages()[0] ?? (await context.newPage());
+  page.setDefaultTimeout(60_000);
+});
+
+afterAll(async () => {
+  await context?.close();
+  await server?.close();
+  await rm(profileDir, { recursive: true, force: true });
+  await rm(dataDir, { recursive: true, force: true });
+});
+
+async function signIn(email: string): Promise<void> {
+  await page.goto(`${server.url}/sign-in`);
+  await page.getByLabel('E-mail address').fill(email);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${server.url}/projects`);
+}
+
+/** GET through the signed-in page, so the session cookie goes with it. */
+function apiGet<T>(url: string): Promise<T> {
+  return page.evaluate(async (path) => {
+    const response = await fetch(path, { credentials: 'same-origin' });
+    if (!response.ok) throw new Error(`GET ${path} answered ${response.status}`);
+    return (await response.json()) as T;
+  }, url);
+}
+
+/** The seeded run computes in the background after start-up; wait until it has finished. */
+async function finishedDemoRun(projectId: string): Promise<string> {
+  for (let tries = 0; tries < 240; tries++) {
+    const { runs } = await apiGet<{ runs: { id: string; status: string }[] }>(`/api/projects/${projectId}/checks`);
+    const done = runs.find((run) => run.status === 'done');
+    if (done) return done.id;
+    await page.waitForTimeout(500);
+  }
+  throw new Error('The demo check run did not finish.');
+}
+
+async function runRows(projectId: string, runId: string, status: string): Promise<RunRow[]> {
+  const url = `/api/projects/${projectId}/checks/${runId}/members?status=${status}&pageSize=50`;
+  return (await apiGet<{ rows: RunRow[] }>(url)).rows;
+}
+
+function closeTo(actual: Rgb, expected: Rgb, tolerance: number): boolean {
+  return actual.every((channel, i) => Math.abs(channel - expected[i]) <= tolerance);
+}
+
+/** The swatch colour the legend shows for a key, as sRGB bytes. */
+async function legendColour(key: string): Promise<Rgb> {
+  const css = await page.locator(`tl-viewer-legend li[data-legend-key="${key}"] .swatch`).evaluate((swatch) => getComputedStyle(swatch).backgroundColor);
+  const match = /rgb\((\d+), (\d+), (\d+)\)/.exec(css);
+  if (match === null) throw new Error(`The legend swatch ${key} has no rgb colour: ${css}`);
+  return [Number(match[1]), Number(match[2]), Number(match[3])];
+}
+
+/** Frames one member and reads its colour unshaded, polling until the view shows it (colours arrive after the model). */
+async function memberColourOnScreen(globalId: string, expected: Rgb): Promise<Rgb> {
+  const handle = await page.waitForFunction(
+    ([id, want, tolerance]) => {
+      const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer;
+      if (!hook) return null;
+      hook.fitTo([id]);
+      const colour = hook.memberColour(id);
+      if (colour === null) return null;
+      const rgb = colour.slice(0, 3);
+      return rgb.every((channel, i) => Math.abs(channel - want[i]) <= tolerance) ? rgb : null;
+    },
+    [globalId, expected, COLOUR_TOLERANCE] as const,
+    { polling: 250, timeout: 60_000 },
+  );
+  return (await handle.jsonValue()) as Rgb;
+}
+
+/** The bin of a utilisation ratio as the legend keys it: 0 for [0, 10 %), …, 9 for [90 %, 100 %]. */
+function binKey(utilisation: number): string {
+  return `bin-${Math.min(9, Math.floor(utilisation * 10 + 1e-9))}`;
+}
+
+test('the engineer sees the demo model coloured by utilisation, opens a failing member and filters to failing ones', async () => {
+  await signIn('engineer@taulens.test');
+  await page.getByRole('link', { name: new RegExp(DEPOT) }).click();
+  await page.getByRole('heading', { level: 1, name: DEPOT }).waitFor();
+  const projectId = /\/projects\/([0-9a-f-]{36})/.exec(page.url())![1];
+  const runId = await finishedDemoRun(projectId);
+
+  // Members from the run's own results: one over capacity, one passing away from a bin edge.
+  const failing = (await runRows(projectId, runId, 'fail')).find((row) => row.utilisation !== null && row.utilisation > 1);
+  const passing = (await runRows(projectId, runId, 'pass')).find((row) => {
+    const u = row.utilisation;
+    return u !== null && u > 0 && Math.abs(u * 10 - Math.round(u * 10)) > 0.05;
+  });
+  if (!failing || !passing) throw new Error('The demo run should have a member over capacity and a passing one.');
+
+  await page.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: '3D view' }).click();
+  await page.getByRole('heading', { level: 1, name: '3D view' }).waitFor();
+  await page.getByRole('heading', { name: 'Utilisation' }).waitFor();
+
+  // The model renders: members are in the view, drawn in a handful of calls, and the canvas is not blank.
+  await page.waitForFunction(
+    () => {
+      const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer;
+      return hook !== undefined && hook.stats().members > 0 && hook.stats().drawCalls > 0;
+    },
+    undefined,
+    { polling: 250, timeout: 90_000 },
+  );
+  const canvas = page.locator('tl-viewer-canvas canvas');
+  const box = (await canvas.boundingBox())!;
+  const background = await page.locator('tl-viewer-canvas').evaluate((host) => getComputedStyle(host).backgroundColor);
+  const drawn = await page.evaluate(
+    ([width, height]) => {
+      const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer!;
+      const corner = hook.readPixel(2, 2).slice(0, 3).join(',');
+      let differing = 0;
+      for (let x = 0.1; x < 1; x += 0.1) {
+        for (let y = 0.1; y < 1; y += 0.1) if (hook.readPixel(x * width, y * height).slice(0, 3).join(',') !== corner) differing++;
+      }
+      return differing;
+    },
+    [box.width, box.height] as const,
+  );
+  expect(drawn).toBeGreaterThan(3);
+  expect(background).toMatch(/^rgb/);
+
+  // The failing member shows the legend's over-capacity colour, the passing one its bin's colour.
+  const over = await legendColour('over');
+  expect(await memberColourOnScreen(failing.globalId, over)).toEqual(expect.any(Array));
+  const bin = await legendColour(binKey(passing.utilisation!));
+  expect(await memberColourOnScreen(passing.globalId, bin)).toEqual(expect.any(Array));
+  await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-3d-view.png') });
+
+  // A click on the failing member opens its results beside the model.
+  const failingPoint = await page.evaluate((id) => {
+    const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer!;
+    hook.fitTo([id]);
+    return hook.screenPositionOf(id);
+  }, failing.globalId);
+  expect(failingPoint).not.toBeNull();
+  await page.mouse.click(box.x + failingPoint!.x_px, box.y + failingPoint!.y_px);
+  const panel = page.getByRole('complementary', { name: failing.tag ?? failing.globalId });
+  await panel.waitFor();
+  await panel.getByText(failing.globalId).waitFor();
+  await panel.locator('.status', { hasText: 'Fail' }).waitFor();
+  await panel.getByRole('link', { name: 'Calculation sheet' }).waitFor();
+  expect(await panel.getByRole('link', { name: 'Calculation sheet' }).getAttribute('href')).toBe(
+    `/projects/${projectId}/checks/${runId}/members/${failing.globalId}`,
+  );
+
+  // "Only failing": where the passing member was drawn, the background (or a failing member) shows now.
+  const passingPoint = await page.evaluate((id) => {
+    const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer!;
+    hook.fitTo([id]);
+    return hook.screenPositionOf(id);
+  }, passing.globalId);
+  expect(passingPoint).not.toBeNull();
+  await page.getByRole('switch', { name: 'Only failing' }).click();
+  const after = await page.waitForFunction(
+    ([id, point]) => {
+      const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer!;
+      if (hook.screenPositionOf(id) !== null) return null;
+      return { pixel: hook.readPixel(point.x_px, point.y_px).slice(0, 3), picked: hook.pick(point.x_px, point.y_px) };
+    },
+    [passing.globalId, passingPoint!] as const,
+    { polling: 250, timeout: 30_000 },
+  );
+  const { pixel, picked } = (await after.jsonValue()) as { pixel: Rgb; picked: string | null };
+  expect(picked).not.toBe(passing.globalId);
+  if (picked === null) {
+    const [r, g, b] = /rgb\((\d+), (\d+), (\d+)\)/.exec(background)!.slice(1).map(Number);
+    expect(closeTo(pixel, [r, g, b], BACKGROUND_TOLERANCE)).toBe(true);
+  }
+  await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-3d-view-only-failing.png') });
+
+  // The cautions stay on screen with the results.
+  await page.locator('tl-viewer-workspace tl-cautions-notice').waitFor();
+});
