@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import pino from 'pino';
 import { type TestDataSource, openTestDataSource } from '../../test/fixtures/test-data-source';
 import { createJobRunner } from '../jobs/job-runner';
@@ -11,13 +14,16 @@ import { DEMO_PASSWORD, DEMO_STEPS, type DemoDeps, demoProject, seedDemo } from 
 describe('seedDemo', () => {
   let db: TestDataSource;
   let deps: DemoDeps;
+  let filesDir: string;
   beforeAll(async () => {
     db = await openTestDataSource();
-    deps = { dataSource: db.dataSource, storage: new LocalFileStorage('/nonexistent'), jobs: createJobRunner({ maxThreads: 1 }), logger: pino({ level: 'silent' }) };
+    filesDir = mkdtempSync(path.join(os.tmpdir(), 'taulens-seed-'));
+    deps = { dataSource: db.dataSource, storage: new LocalFileStorage(filesDir), jobs: createJobRunner({ maxThreads: 1 }), logger: pino({ level: 'silent' }) };
   });
   afterAll(async () => {
     await deps.jobs.close();
     await db.close();
+    rmSync(filesDir, { recursive: true, force: true });
   });
 
   it('creates one account per role and two projects once, and nothing more on later runs', async () => {
