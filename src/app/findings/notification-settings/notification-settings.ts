@@ -2,7 +2,7 @@ import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog, MatDialogModule } from '@angular/material/dialog';
-import { MatSlideToggleModule } from '@angular/material/slide-toggle';
+import { MatSlideToggleChange, MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { errorMessage } from '../../core/api-error';
 import { NotificationSettings as Settings } from '../finding';
 import { FindingsApi, NOTIFICATION_SETTINGS_URL } from '../findings-api';
@@ -34,10 +34,10 @@ export class NotificationSettings {
     return error ? errorMessage(error) : null;
   });
 
-  protected switchKind(key: keyof Settings, on: boolean): void {
+  protected switchKind(key: keyof Settings, change: MatSlideToggleChange): void {
     const current = this.settings();
     if (!current) return;
-    const next = { ...current, [key]: on };
+    const next = { ...current, [key]: change.checked };
     this.saved.set(next);
     this.notice.set(null);
     this.api.saveNotificationSettings(next).subscribe({
@@ -47,6 +47,8 @@ export class NotificationSettings {
       },
       error: (error: unknown) => {
         this.saved.set(current);
+        // The switch moved itself when clicked; the binding may not have seen the refused value, so put it back here.
+        change.source.checked = current[key];
         this.notice.set({ text: errorMessage(error), failed: true });
       },
     });
