@@ -3,54 +3,29 @@
  * server with the demo seed: the runs list, the results table filtered to failing members, and one member's
  * calculation sheet with its drawings and the cautions.
  */
-import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../server/demo/seed';
-import { RunningServer, startServer } from '../../server/main';
-import { launchChromium } from './chromium';
+import type { Page } from 'playwright-core';
+import { DEPOT, type DemoBrowser, startDemoBrowser } from './demo-browser';
 
-const DEPOT = 'Brindlecote Riverside Depot and Offices';
 // Screenshots for looking at the rendered pages by eye; nothing compares them.
 const SCREENSHOTS = os.tmpdir();
 
-let server: RunningServer;
-let context: BrowserContext;
+let demo: DemoBrowser;
 let page: Page;
-let dataDir: string;
-let profileDir: string;
+let server: DemoBrowser['server'];
 
 beforeAll(async () => {
-  dataDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-data-'));
-  profileDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-profile-'));
-  server = await startServer({
-    port: 0,
-    dataDir,
-    fakeSmtp: true,
-    fakeSmtpPort: 0,
-    seedDemo: true,
-    logLevel: 'error',
-    webRoot: path.resolve(__dirname, '../../dist/web/browser'),
-  });
-  context = await launchChromium(profileDir);
-  page = context.pages()[0] ?? (await context.newPage());
-  page.setDefaultTimeout(20_000);
+  demo = await startDemoBrowser({ timeout_ms: 20_000 });
+  ({ page, server } = demo);
 });
 
 afterAll(async () => {
-  await context?.close();
-  await server?.close();
-  await rm(profileDir, { recursive: true, force: true });
-  await rm(dataDir, { recursive: true, force: true });
+  await demo?.close();
 });
 
 async function signIn(email: string): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${server.url}/projects`);
+  await demo.signIn(email);
 }
 
 async function eventually(condition: () => Promise<boolean>, what: string): Promise<void> {

@@ -2,55 +2,30 @@
  * Each demo role signs in through the real client, served by the real server, in Debian's chromium,
  * and sees the navigation and actions its role allows on the demo project.
  */
-import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../server/demo/seed';
-import { RunningServer, startServer } from '../../server/main';
-import { launchChromium } from './chromium';
+import type { Page } from 'playwright-core';
+import { DEPOT, type DemoBrowser, startDemoBrowser } from './demo-browser';
 
-const DEPOT = 'Brindlecote Riverside Depot and Offices';
 const ALL_SECTIONS = ['Overview', 'Models', 'Shear results', 'Checks', '3D view', 'Findings', 'Members'];
 // Screenshots for looking at the rendered look by eye; nothing compares them.
 const SCREENSHOTS = os.tmpdir();
 
-let server: RunningServer;
-let context: BrowserContext;
+let demo: DemoBrowser;
 let page: Page;
-let dataDir: string;
-let profileDir: string;
+let server: DemoBrowser['server'];
 
 beforeAll(async () => {
-  dataDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-data-'));
-  profileDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-profile-'));
-  server = await startServer({
-    port: 0,
-    dataDir,
-    fakeSmtp: true,
-    fakeSmtpPort: 0,
-    seedDemo: true,
-    logLevel: 'error',
-    webRoot: path.resolve(__dirname, '../../dist/web/browser'),
-  });
-  context = await launchChromium(profileDir);
-  page = context.pages()[0] ?? (await context.newPage());
-  page.setDefaultTimeout(15_000);
+  demo = await startDemoBrowser({ timeout_ms: 15_000 });
+  ({ page, server } = demo);
 });
 
 afterAll(async () => {
-  await context?.close();
-  await server?.close();
-  await rm(profileDir, { recursive: true, force: true });
-  await rm(dataDir, { recursive: true, force: true });
+  await demo?.close();
 });
 
 async function signIn(email: string): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${server.url}/projects`);
+  await demo.signIn(email);
   await page.getByRole('link', { name: new RegExp(DEPOT) }).waitFor();
 }
 
