@@ -13,7 +13,7 @@ import type { FindingNotice, NoticeSink } from '../notifications/finding-notifie
 import type { FindingPageView, FindingPatch, NewFindingRequest } from './finding-api-types';
 import { FindingChange } from './finding-change.entity';
 import { FindingComment } from './finding-comment.entity';
-import { FINDING_LIMITS, type FindingPriority, type FindingStatus } from './finding-fields';
+import { FINDING_LIMITS, type FindingStatus } from './finding-fields';
 import { type ChangeActor, type ChangeEntry, recordChanges } from './finding-history';
 import { mentionedMembers } from './finding-mentions';
 import { filteredFindings, sortedPage } from './finding-query';
