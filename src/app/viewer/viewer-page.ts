@@ -82,9 +82,9 @@ export class ViewerPage {
   protected readonly canCreateFindings = computed(() => this.context.can('finding.create'));
 
   protected readonly revisionsResource = httpResource<{ revisions: RevisionView[] }>(() => modelsUrl(this.projectId()));
-  protected readonly runsResource = httpResource<{ runs: CheckRun[] }>(() =>
-    this.context.can('check.read') ? checksUrl(this.projectId()) : undefined,
-  );
+  // A boolean signal, so the runs are not asked again when the project answer replaces the session's permissions.
+  private readonly canReadChecks = computed(() => this.context.can('check.read'));
+  protected readonly runsResource = httpResource<{ runs: CheckRun[] }>(() => (this.canReadChecks() ? checksUrl(this.projectId()) : undefined));
   private readonly findingResource = httpResource<FindingDetail>(() => {
     const findingId = this.viewpoint();
     return findingId ? findingUrl(this.projectId(), findingId) : undefined;
