@@ -2,54 +2,28 @@
  * The reviewer's journey through the demo project's findings, in Debian's chromium against the real server with the
  * demo seed: the findings list, accepting one open finding with a written justification, and a BCF download.
  */
-import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../server/demo/seed';
-import { RunningServer, startServer } from '../../server/main';
-import { launchChromium } from './chromium';
+import type { Page } from 'playwright-core';
+import { DEPOT, type DemoBrowser, startDemoBrowser } from './demo-browser';
 
-const DEPOT = 'Brindlecote Riverside Depot and Offices';
 // Screenshots for looking at the rendered pages by eye; nothing compares them.
 const SCREENSHOTS = os.tmpdir();
 
-let server: RunningServer;
-let context: BrowserContext;
+let demo: DemoBrowser;
 let page: Page;
-let dataDir: string;
-let profileDir: string;
 
 beforeAll(async () => {
-  dataDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-data-'));
-  profileDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-profile-'));
-  server = await startServer({
-    port: 0,
-    dataDir,
-    fakeSmtp: true,
-    fakeSmtpPort: 0,
-    seedDemo: true,
-    logLevel: 'error',
-    webRoot: path.resolve(__dirname, '../../dist/web/browser'),
-  });
-  context = await launchChromium(profileDir);
-  page = context.pages()[0] ?? (await context.newPage());
-  page.setDefaultTimeout(20_000);
+  demo = await startDemoBrowser();
+  ({ page } = demo);
 });
 
 afterAll(async () => {
-  await context?.close();
-  await server?.close();
-  await rm(profileDir, { recursive: true, force: true });
-  await rm(dataDir, { recursive: true, force: true });
+  await demo?.close();
 });
 
 test('a reviewer accepts a finding with a justification and exports the findings as BCF', async () => {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail address').fill('reviewer@taulens.test');
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${server.url}/projects`);
+  await demo.signIn('reviewer@taulens.test');
   await page.getByRole('link', { name: new RegExp(DEPOT) }).click();
   await page.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: 'Findings' }).click();
   await page.getByRole('heading', { level: 1, name: 'Findings' }).waitFor();
