@@ -231,3 +231,66 @@ test('the engineer sees the demo model coloured by utilisation, opens a failing 
   // The cautions stay on screen with the results.
   await page.locator('tl-viewer-workspace tl-cautions-notice').waitFor();
 });
+
+test('links open the view on a member or a finding, and a finding raised from the selection keeps the view and its picture', async () => {
+  // The first test signed in and the run has finished; the project is the one open in the page.
+  const projectId = /\/projects\/([0-9a-f-]{36})/.exec(page.url())![1];
+  const runId = await finishedDemoRun(projectId);
+  const [failing] = await runRows(projectId, runId, 'fail');
+
+  // "Show in 3D" from the results table: the member is selected, framed and its results open.
+  await page.goto(`${server.url}/projects/${projectId}/3d-view?run=${runId}&member=${encodeURIComponent(failing.globalId)}`);
+  const panel = page.getByRole('complementary', { name: failing.tag ?? failing.globalId });
+  await panel.getByText(failing.globalId).waitFor();
+  await page.waitForFunction(
+    (id) => {
+      const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer;
+      return hook !== undefined && hook.getViewpoint().selectedGlobalIds.join() === id && hook.screenPositionOf(id) !== null;
+    },
+    failing.globalId,
+    { polling: 250, timeout: 60_000 },
+  );
+
+  // A finding raised from the selection, with a title and a note.
+  await page.getByRole('button', { name: 'Create finding from selection' }).click();
+  const dialog = page.getByRole('dialog');
+  await dialog.getByLabel('Title').fill('Web of the end bay girder to review on site');
+  await dialog.getByLabel('Note').fill('Raised from the 3D view in a browser test.');
+  await dialog.getByRole('button', { name: 'Create finding' }).click();
+  const created = page.getByRole('status').filter({ hasText: /Finding F-\d{4} created\./ });
+  await created.waitFor();
+  const findingPath = await created.getByRole('link').getAttribute('href');
+  const findingId = findingPath!.split('/').pop()!;
+  type SavedCamera = { viewPoint_m: [number, number, number] };
+  const { finding } = await apiGet<{ finding: { memberGlobalIds: string[]; hasSnapshot: boolean; kind: string; viewpoint: { camera?: SavedCamera; selectedGlobalIds: string[] } | null } }>(
+    `/api/projects/${projectId}/findings/${findingId}`,
+  );
+  expect(finding.kind).toBe('manual');
+  expect(finding.memberGlobalIds).toEqual([failing.globalId]);
+  expect(finding.hasSnapshot).toBe(true);
+  expect(finding.viewpoint?.camera).toBeDefined();
+  expect(finding.viewpoint?.selectedGlobalIds).toEqual([failing.globalId]);
+  const snapshot = await page.evaluate(async (url) => {
+    const response = await fetch(url, { credentials: 'same-origin' });
+    const bytes = new Uint8Array(await response.arrayBuffer());
+    return { type: response.headers.get('content-type'), signature: [...bytes.slice(0, 8)] };
+  }, `/api/projects/${projectId}/findings/${findingId}/snapshot.png`);
+  expect(snapshot.type).toMatch(/^image\/png/);
+  // The PNG file signature (ISO/IEC 15948 §5.2).
+  expect(snapshot.signature).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+
+  // Opened from a finding: its view comes back, camera where it was and its member selected.
+  await page.goto(`${server.url}/projects/${projectId}/3d-view?viewpoint=${findingId}`);
+  await page.getByRole('complementary', { name: failing.tag ?? failing.globalId }).waitFor();
+  await page.waitForFunction(
+    ([id, saved]) => {
+      const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer;
+      const now = hook?.getViewpoint();
+      if (!now?.camera || now.selectedGlobalIds.join() !== id) return false;
+      return now.camera.viewPoint_m.every((coordinate, i) => Math.abs(coordinate - saved[i]) < 1e-3);
+    },
+    [failing.globalId, finding.viewpoint!.camera!.viewPoint_m] as const,
+    { polling: 250, timeout: 60_000 },
+  );
+  await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-3d-view-finding.png') });
+});
