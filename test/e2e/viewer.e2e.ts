@@ -5,16 +5,12 @@
  *
  * Which members fail or pass comes from the check run's own results API, not from this test.
  */
-import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../server/demo/seed';
-import { RunningServer, startServer } from '../../server/main';
+import type { Page } from 'playwright-core';
 import type { ViewerTestHook } from '../../src/app/viewer/viewer-test-hook';
-import { launchChromium } from './chromium';
+import { DEPOT, type DemoBrowser, startDemoBrowser } from './demo-browser';
 
-const DEPOT = 'Brindlecote Riverside Depot and Offices';
 /** VIEWER_TEST_HOOK_KEY of src/app/viewer/viewer-test-hook.ts (a value import would load Angular into node). */
 const VIEWER_TEST_HOOK_KEY = 'taulens.viewerTestHook';
 // Screenshots for looking at the view by eye; nothing compares them.
@@ -23,6 +19,10 @@ const SCREENSHOTS = os.tmpdir();
 const COLOUR_TOLERANCE = 3;
 /** Background with the see-through pale grey context possibly in front of it. */
 const BACKGROUND_TOLERANCE = 24;
+/** Software WebGL on a busy two-core machine can take a while to draw a frame. */
+const VIEW_TIMEOUT_MS = 60_000;
+/** How `waitForFunction` asks the view: every quarter second, for as long as a frame may take. */
+const POLL_VIEW = { polling: 250, timeout: VIEW_TIMEOUT_MS };
 
 type Rgb = [number, number, number];
 
@@ -33,45 +33,19 @@ interface RunRow {
   status: string;
 }
 
-let server: RunningServer;
-let context: BrowserContext;
+let demo: DemoBrowser;
 let page: Page;
-let dataDir: string;
-let profileDir: string;
 
 beforeAll(async () => {
-  dataDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-data-'));
-  profileDir = await mkdtemp(path.join(os.tmpdir(), 'taulens-e2e-profile-'));
-  server = await startServer({
-    port: 0,
-    dataDir,
-    fakeSmtp: true,
-    fakeSmtpPort: 0,
-    seedDemo: true,
-    logLevel: 'error',
-    webRoot: path.resolve(__dirname, '../../dist/web/browser'),
-  });
-  context = await launchChromium(profileDir);
+  demo = await startDemoBrowser({ timeout_ms: VIEW_TIMEOUT_MS });
   // The production build installs the viewer's test hook only when asked to.
-  await context.addInitScript(([key]) => localStorage.setItem(key, 'on'), [VIEWER_TEST_HOOK_KEY]);
-  page = context.pages()[0] ?? (await context.newPage());
-  page.setDefaultTimeout(60_000);
+  await demo.context.addInitScript(([key]) => localStorage.setItem(key, 'on'), [VIEWER_TEST_HOOK_KEY]);
+  page = demo.page;
 });
 
 afterAll(async () => {
-  await context?.close();
-  await server?.close();
-  await rm(profileDir, { recursive: true, force: true });
-  await rm(dataDir, { recursive: true, force: true });
+  await demo?.close();
 });
-
-async function signIn(email: string): Promise<void> {
-  await page.goto(`${server.url}/sign-in`);
-  await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${server.url}/projects`);
-}
 
 /** GET through the signed-in page, so the session cookie goes with it. */
 function apiGet<T>(url: string): Promise<T> {
@@ -123,7 +97,7 @@ async function memberColourOnScreen(globalId: string, expected: Rgb): Promise<Rg
       return rgb.every((channel, i) => Math.abs(channel - want[i]) <= tolerance) ? rgb : null;
     },
     [globalId, expected, COLOUR_TOLERANCE] as const,
-    { polling: 250, timeout: 60_000 },
+    POLL_VIEW,
   );
   return (await handle.jsonValue()) as Rgb;
 }
@@ -134,7 +108,7 @@ function binKey(utilisation: number): string {
 }
 
 test('the engineer sees the demo model coloured by utilisation, opens a failing member and filters to failing ones', async () => {
-  await signIn('engineer@taulens.test');
+  await demo.signIn('engineer@taulens.test');
   await page.getByRole('link', { name: new RegExp(DEPOT) }).click();
   await page.getByRole('heading', { level: 1, name: DEPOT }).waitFor();
   const projectId = /\/projects\/([0-9a-f-]{36})/.exec(page.url())![1];
@@ -159,7 +133,7 @@ test('the engineer sees the demo model coloured by utilisation, opens a failing 
       return hook !== undefined && hook.stats().members > 0 && hook.stats().drawCalls > 0;
     },
     undefined,
-    { polling: 250, timeout: 90_000 },
+    POLL_VIEW,
   );
   const canvas = page.locator('tl-viewer-canvas canvas');
   const box = (await canvas.boundingBox())!;
@@ -218,7 +192,7 @@ test('the engineer sees the demo model coloured by utilisation, opens a failing 
       return { pixel: hook.readPixel(point.x_px, point.y_px).slice(0, 3), picked: hook.pick(point.x_px, point.y_px) };
     },
     [passing.globalId, passingPoint!] as const,
-    { polling: 250, timeout: 30_000 },
+    POLL_VIEW,
   );
   const { pixel, picked } = (await after.jsonValue()) as { pixel: Rgb; picked: string | null };
   expect(picked).not.toBe(passing.globalId);
@@ -239,7 +213,7 @@ test('links open the view on a member or a finding, and a finding raised from th
   const [failing] = await runRows(projectId, runId, 'fail');
 
   // "Show in 3D" from the results table: the member is selected, framed and its results open.
-  await page.goto(`${server.url}/projects/${projectId}/3d-view?run=${runId}&member=${encodeURIComponent(failing.globalId)}`);
+  await page.goto(`${demo.server.url}/projects/${projectId}/3d-view?run=${runId}&member=${encodeURIComponent(failing.globalId)}`);
   const panel = page.getByRole('complementary', { name: failing.tag ?? failing.globalId });
   await panel.getByText(failing.globalId).waitFor();
   await page.waitForFunction(
@@ -248,7 +222,7 @@ test('links open the view on a member or a finding, and a finding raised from th
       return hook !== undefined && hook.getViewpoint().selectedGlobalIds.join() === id && hook.screenPositionOf(id) !== null;
     },
     failing.globalId,
-    { polling: 250, timeout: 60_000 },
+    POLL_VIEW,
   );
 
   // A finding raised from the selection, with a title and a note.
@@ -280,7 +254,7 @@ test('links open the view on a member or a finding, and a finding raised from th
   expect(snapshot.signature).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
 
   // Opened from a finding: its view comes back, camera where it was and its member selected.
-  await page.goto(`${server.url}/projects/${projectId}/3d-view?viewpoint=${findingId}`);
+  await page.goto(`${demo.server.url}/projects/${projectId}/3d-view?viewpoint=${findingId}`);
   await page.getByRole('complementary', { name: failing.tag ?? failing.globalId }).waitFor();
   await page.waitForFunction(
     ([id, saved]) => {
@@ -290,7 +264,7 @@ test('links open the view on a member or a finding, and a finding raised from th
       return now.camera.viewPoint_m.every((coordinate, i) => Math.abs(coordinate - saved[i]) < 1e-3);
     },
     [failing.globalId, finding.viewpoint!.camera!.viewPoint_m] as const,
-    { polling: 250, timeout: 60_000 },
+    POLL_VIEW,
   );
   await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-3d-view-finding.png') });
 });
