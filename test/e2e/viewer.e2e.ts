@@ -84,22 +84,36 @@ async function legendColour(key: string): Promise<Rgb> {
   return [Number(match[1]), Number(match[2]), Number(match[3])];
 }
 
-/** Frames one member and reads its colour unshaded, polling until the view shows it (colours arrive after the model). */
-async function memberColourOnScreen(globalId: string, expected: Rgb): Promise<Rgb> {
-  const handle = await page.waitForFunction(
-    ([id, want, tolerance]) => {
-      const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer;
-      if (!hook) return null;
-      hook.fitTo([id]);
-      const colour = hook.memberColour(id);
-      if (colour === null) return null;
-      const rgb = colour.slice(0, 3);
-      return rgb.every((channel, i) => Math.abs(channel - want[i]) <= tolerance) ? rgb : null;
-    },
-    [globalId, expected, COLOUR_TOLERANCE] as const,
-    POLL_VIEW,
-  );
-  return (await handle.jsonValue()) as Rgb;
+/**
+ * Frames one member and reads its colour unshaded, polling until it matches (colours arrive after the model);
+ * fails naming the colour last seen.
+ */
+async function expectMemberColour(globalId: string, expected: Rgb): Promise<void> {
+  const matches = ([id, want, tolerance]: readonly [string, Rgb, number]) => {
+    const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer;
+    hook?.fitTo([id]);
+    const rgb = hook?.memberColour(id)?.slice(0, 3) ?? null;
+    (globalThis as { lastMemberColour?: number[] | null }).lastMemberColour = rgb;
+    return rgb !== null && rgb.every((channel, i) => Math.abs(channel - want[i]) <= tolerance);
+  };
+  try {
+    await page.waitForFunction(matches, [globalId, expected, COLOUR_TOLERANCE] as const, POLL_VIEW);
+  } catch (error) {
+    const seen = await page.evaluate(() => (globalThis as { lastMemberColour?: number[] | null }).lastMemberColour ?? null);
+    const shown = seen ? `rgb(${seen.join(', ')})` : 'nowhere';
+    throw new Error(`Member ${globalId} should show rgb(${expected.join(', ')}) but shows ${shown}. ${String(error)}`);
+  }
+}
+
+/** Frames one member and returns a canvas point where it is drawn. */
+async function framedPoint(globalId: string): Promise<{ x_px: number; y_px: number }> {
+  const point = await page.evaluate((id) => {
+    const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer!;
+    hook.fitTo([id]);
+    return hook.screenPositionOf(id);
+  }, globalId);
+  if (point === null) throw new Error(`Member ${globalId} is not visible after framing it.`);
+  return point;
 }
 
 /** The bin of a utilisation ratio as the legend keys it: 0 for [0, 10 %), …, 9 for [90 %, 100 %]. */
@@ -155,19 +169,14 @@ test('the engineer sees the demo model coloured by utilisation, opens a failing 
 
   // The failing member shows the legend's over-capacity colour, the passing one its bin's colour.
   const over = await legendColour('over');
-  expect(await memberColourOnScreen(failing.globalId, over)).toEqual(expect.any(Array));
+  await expectMemberColour(failing.globalId, over);
   const bin = await legendColour(binKey(passing.utilisation!));
-  expect(await memberColourOnScreen(passing.globalId, bin)).toEqual(expect.any(Array));
+  await expectMemberColour(passing.globalId, bin);
   await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-3d-view.png') });
 
   // A click on the failing member opens its results beside the model.
-  const failingPoint = await page.evaluate((id) => {
-    const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer!;
-    hook.fitTo([id]);
-    return hook.screenPositionOf(id);
-  }, failing.globalId);
-  expect(failingPoint).not.toBeNull();
-  await page.mouse.click(box.x + failingPoint!.x_px, box.y + failingPoint!.y_px);
+  const failingPoint = await framedPoint(failing.globalId);
+  await page.mouse.click(box.x + failingPoint.x_px, box.y + failingPoint.y_px);
   const panel = page.getByRole('complementary', { name: failing.tag ?? failing.globalId });
   await panel.waitFor();
   await panel.getByText(failing.globalId).waitFor();
@@ -178,12 +187,7 @@ test('the engineer sees the demo model coloured by utilisation, opens a failing 
   );
 
   // "Only failing": where the passing member was drawn, the background (or a failing member) shows now.
-  const passingPoint = await page.evaluate((id) => {
-    const hook = (globalThis as { __taulensViewer?: ViewerTestHook }).__taulensViewer!;
-    hook.fitTo([id]);
-    return hook.screenPositionOf(id);
-  }, passing.globalId);
-  expect(passingPoint).not.toBeNull();
+  const passingPoint = await framedPoint(passing.globalId);
   await page.getByRole('switch', { name: 'Only failing' }).click();
   const after = await page.waitForFunction(
     ([id, point]) => {
@@ -191,7 +195,7 @@ test('the engineer sees the demo model coloured by utilisation, opens a failing 
       if (hook.screenPositionOf(id) !== null) return null;
       return { pixel: hook.readPixel(point.x_px, point.y_px).slice(0, 3), picked: hook.pick(point.x_px, point.y_px) };
     },
-    [passing.globalId, passingPoint!] as const,
+    [passing.globalId, passingPoint] as const,
     POLL_VIEW,
   );
   const { pixel, picked } = (await after.jsonValue()) as { pixel: Rgb; picked: string | null };
