@@ -98,7 +98,11 @@ export class ViewerPage {
   private readonly linkedFinding = computed(() => (this.findingResource.hasValue() ? this.findingResource.value().finding : null));
   private readonly linkedRunId = computed(() => this.run() ?? this.linkedFinding()?.runId ?? null);
 
-  protected readonly revisionId = linkedSignal(() => revisionToOpen(this.revisions(), this.runs(), this.linkedRunId())?.id ?? null);
+  /** Runs and the linked finding can name another revision than the newest; waiting for them saves loading two models. */
+  private readonly linksSettled = computed(() => !this.runsResource.isLoading() && !this.findingResource.isLoading());
+  protected readonly revisionId = linkedSignal(() =>
+    this.linksSettled() ? (revisionToOpen(this.revisions(), this.runs(), this.linkedRunId())?.id ?? null) : null,
+  );
   protected readonly revision = computed(() => this.revisions().find((revision) => revision.id === this.revisionId()) ?? null);
   protected readonly runsOnRevision = computed(() => finishedRunsOn(this.runs(), this.revisionId()));
   protected readonly runId = linkedSignal(() => runToShow(this.runs(), this.revisionId(), this.linkedRunId())?.id ?? null);
@@ -159,7 +163,8 @@ export class ViewerPage {
   constructor() {
     effect(() => {
       const finding = this.linkedFinding();
-      if (finding === null || this.loadedRevisionId() === null || untracked(this.appliedFindingId) === finding.id) return;
+      const loaded = this.loadedRevisionId();
+      if (finding === null || loaded === null || loaded !== this.revisionId() || untracked(this.appliedFindingId) === finding.id) return;
       this.appliedFindingId.set(finding.id);
       untracked(() => this.applyView(viewpointOfFinding(finding), `${findingReference(finding.number)}'s view`));
     });
