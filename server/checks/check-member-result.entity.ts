@@ -1,23 +1,26 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { CheckRun } from './check-run.entity';
-import type { MemberCheck, RunFlag } from './check-run-compute';
+import type { RunFlag } from './check-run-compute';
 
 export const RESULT_STATUSES = ['pass', 'warning', 'fail', 'not-checked', 'not-applicable'] as const;
 /** As the results table shows it: a passing member at or above the warning ratio is a 'warning'. */
 export type ResultStatus = (typeof RESULT_STATUSES)[number];
 
 /**
- * One member's outcome in a check run: the columns the results table sorts and filters on (indexed per run), the
- * engine's result without its per-combination list, and that list in compact form (see member-result-row.ts).
- * Written once when the run finishes; never updated.
+ * One member's outcome in a check run: the columns the results table sorts and filters on, indexed per run. Kept
+ * narrow (the engine's full result lives in check_member_detail) so a sort or filter over 50,000 rows reads few
+ * pages. Written once when the run finishes; never updated.
  */
 @Entity({ name: 'check_member_result' })
 @Index(['runId', 'globalId'])
 @Index(['runId', 'utilisation'])
 @Index(['runId', 'status', 'utilisation'])
-@Index(['runId', 'storey'])
-@Index(['runId', 'profileName'])
+@Index(['runId', 'storey', 'utilisation'])
+@Index(['runId', 'profileName', 'utilisation'])
 @Index(['runId', 'tag'])
+@Index(['runId', 'VEd_kN'])
+@Index(['runId', 'search'])
+@Index(['runId', 'status', 'profileName', 'storey', 'utilisation'])
 export class CheckMemberResult {
   @PrimaryColumn({ type: String })
   runId: string;
@@ -68,13 +71,9 @@ export class CheckMemberResult {
   @Column({ type: 'simple-json' })
   flags: RunFlag[];
 
-  /** The engine's MemberCheck without `combinations`. */
-  @Column({ type: 'simple-json' })
-  detail: Omit<MemberCheck, 'combinations'>;
-
-  /** Per-combination values, compact (member-result-row.ts). */
+  /** GlobalId, tag, name and profile in lower case, for the table's text filter: one column to scan, not four. */
   @Column({ type: 'text' })
-  combinations: string;
+  search: string;
 
   @ManyToOne(() => CheckRun, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'runId' })

@@ -7,6 +7,7 @@ import { ConflictError, NotFoundError } from '../http/errors';
 import type { AppContext } from '../http/app-context';
 import type { MemberRecord } from '../ifc/model-read-result';
 import { revisionMembers } from '../results/ready-revision';
+import { CheckMemberDetail } from './check-member-detail.entity';
 import { CheckMemberResult } from './check-member-result.entity';
 import { CheckRun } from './check-run.entity';
 import { type CheckRunView, toRunView } from './check-run-view';
@@ -50,12 +51,13 @@ export async function listRunMemberResults(dataSource: DataSource, runId: string
 export async function memberSheet(ctx: Pick<AppContext, 'dataSource'>, projectId: string, runId: string, globalId: string): Promise<MemberSheet> {
   const { dataSource } = ctx;
   const run = await finishedRun(dataSource, projectId, runId);
-  const row = await dataSource.getRepository(CheckMemberResult).findOne({ where: { runId, globalId }, order: { ordinal: 'ASC' } });
+  const row = await dataSource.getRepository(CheckMemberResult).findOne({ where: { runId, globalId }, select: { ordinal: true }, order: { ordinal: 'ASC' } });
   if (!row) throw new NotFoundError(`This check run has no member with GlobalId ${globalId}.`, { code: 'member_not_found' });
+  const detail = await dataSource.getRepository(CheckMemberDetail).findOneByOrFail({ runId, ordinal: row.ordinal });
   const member = await memberRecord(dataSource, run.modelRevisionId, globalId);
   return buildMemberSheet({
     member,
-    check: memberCheckOf(row, run.combinations),
+    check: memberCheckOf(detail, run.combinations),
     standard: run.standard,
     parameters: run.parameters,
     runEngineVersion: run.engineVersion,

@@ -23,8 +23,9 @@ export interface CheckRunJobInput {
 }
 
 export interface CheckRunJobOutput {
-  /** Per member, the stored row's values in MEMBER_RESULT_COLUMNS order: flat, so they cross the thread cheaply. */
-  rows: unknown[][];
+  /** Per member, the stored rows' values in MEMBER_RESULT_COLUMNS and MEMBER_DETAIL_COLUMNS order: flat, so they cross the thread cheaply. */
+  results: unknown[][];
+  details: unknown[][];
   /** The combination names the rows refer to by index. */
   combinations: string[];
   summary: CheckRunSummary;
@@ -43,7 +44,13 @@ export default defineJob((input: CheckRunJobInput, report): CheckRunJobOutput =>
     onProgress: ({ done, total }) => report({ fraction: (COMPUTE_SHARE * done) / total }),
   });
   const combinationIndex = new Map(table.combinations.map((name, index) => [name, index]));
-  const rows = members.map((check, ordinal) => memberResultValues(memberResultRow(ordinal, input.members[ordinal], check, combinationIndex)));
+  const results: unknown[][] = [];
+  const details: unknown[][] = [];
+  members.forEach((check, ordinal) => {
+    const values = memberResultValues(memberResultRow(ordinal, input.members[ordinal], check, combinationIndex));
+    results.push(values.result);
+    details.push(values.detail);
+  });
   report({ fraction: 1 });
-  return { rows, combinations: table.combinations, summary };
+  return { results, details, combinations: table.combinations, summary };
 });

@@ -18,12 +18,13 @@ import type { Matching, ResultMatchingService } from '../results/result-matching
 import type { FileStorage } from '../storage/file-storage';
 import type { Standard } from '../engine/check';
 import type { CheckParameters } from './check-parameters';
+import { CheckMemberDetail } from './check-member-detail.entity';
 import { CheckMemberResult } from './check-member-result.entity';
 import { CheckRun } from './check-run.entity';
 import type { CheckRunJobInput, CheckRunJobOutput, CheckRunMember } from './check-run.job';
 import { type CheckRunView, toRunView } from './check-run-view';
 import { engineVersion } from './engine-version';
-import { MEMBER_RESULT_COLUMNS } from './member-result-row';
+import { MEMBER_DETAIL_COLUMNS, MEMBER_RESULT_COLUMNS } from './member-result-row';
 import { runParameters } from './run-parameters';
 
 const CHECK_WORKER = workerFile(__filename, './check-run.job');
@@ -123,7 +124,7 @@ export class CheckRunService {
     const runs = this.deps.dataSource.getRepository(CheckRun);
     for (const run of await runs.find({ where: [{ status: 'queued' }, { status: 'running' }] })) {
       if (this.progress.has(run.id)) continue;
-      await this.deps.dataSource.getRepository(CheckMemberResult).delete({ runId: run.id });
+      await this.deleteRows(run.id);
       await runs.update({ id: run.id }, { status: 'failed', error: 'The server stopped before this run finished. Start the check again.', finishedAt: new Date() });
     }
   }
@@ -146,7 +147,7 @@ export class CheckRunService {
       const output = await this.deps.jobs.run<CheckRunJobInput, CheckRunJobOutput>(CHECK_WORKER, input, {
         onProgress: ({ fraction }) => this.progress.set(run.id, COMPUTED_AT * fraction),
       });
-      await this.storeRows(run.id, output.rows);
+      await this.storeRows(run.id, output);
       const { counts } = matching.report;
       await runs.update(
         { id: run.id },
@@ -168,23 +169,35 @@ export class CheckRunService {
     return toRunView(finished ?? { ...run, status: 'failed', error: 'The check could not be recorded.' }, undefined);
   }
 
-  private async storeRows(runId: string, rows: readonly unknown[][]): Promise<void> {
-    const table = this.deps.dataSource.getMetadata(CheckMemberResult).tableName;
-    for (let start = 0; start < rows.length; start += ROWS_PER_TRANSACTION) {
-      const batch = rows.slice(start, start + ROWS_PER_TRANSACTION).map((values) => [runId, ...values]);
-      await runTransaction(this.deps.dataSource, (manager) => insertRows(manager, table, ['runId', ...MEMBER_RESULT_COLUMNS], batch));
-      this.progress.set(runId, COMPUTED_AT + ((1 - COMPUTED_AT) * (start + batch.length)) / rows.length);
+  private async storeRows(runId: string, rows: Pick<CheckRunJobOutput, 'results' | 'details'>): Promise<void> {
+    const { dataSource } = this.deps;
+    const resultTable = dataSource.getMetadata(CheckMemberResult).tableName;
+    const detailTable = dataSource.getMetadata(CheckMemberDetail).tableName;
+    const count = rows.results.length;
+    for (let start = 0; start < count; start += ROWS_PER_TRANSACTION) {
+      const end = Math.min(count, start + ROWS_PER_TRANSACTION);
+      const withRun = (values: unknown[]) => [runId, ...values];
+      await runTransaction(dataSource, async (manager) => {
+        await insertRows(manager, resultTable, ['runId', ...MEMBER_RESULT_COLUMNS], rows.results.slice(start, end).map(withRun));
+        await insertRows(manager, detailTable, ['runId', ...MEMBER_DETAIL_COLUMNS], rows.details.slice(start, end).map(withRun));
+      });
+      this.progress.set(runId, COMPUTED_AT + ((1 - COMPUTED_AT) * end) / count);
     }
   }
 
   private async markFailed(runId: string, error: unknown): Promise<void> {
     const message = error instanceof DomainError ? error.message : 'The check could not be computed. The error has been logged.';
     try {
-      await this.deps.dataSource.getRepository(CheckMemberResult).delete({ runId });
+      await this.deleteRows(runId);
       await this.deps.dataSource.getRepository(CheckRun).update({ id: runId }, { status: 'failed', error: message, finishedAt: new Date() });
     } catch (secondary) {
       this.deps.logger.error({ err: secondary, runId }, 'could not record the failure of a check run');
     }
+  }
+
+  private async deleteRows(runId: string): Promise<void> {
+    await this.deps.dataSource.getRepository(CheckMemberDetail).delete({ runId });
+    await this.deps.dataSource.getRepository(CheckMemberResult).delete({ runId });
   }
 
   /** A listener's failure is its own: the run stays done. */

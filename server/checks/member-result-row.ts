@@ -1,14 +1,16 @@
 /**
- * A member's outcome in a check run as the check_member_result row holds it: the table's columns, the engine result
- * without its per-combination list, and that list in a compact form (combinations by index into the run's list,
- * the analysis member keys listed once). Utilisations are not stored per combination: |VEd| / VRd gives them back.
+ * A member's outcome in a check run as it is stored: the table's columns (check_member_result), and the engine result
+ * without its per-combination list plus that list in a compact form (check_member_detail: combinations by index into
+ * the run's list, the analysis member keys listed once). Utilisations are not stored per combination: |VEd| / VRd
+ * gives them back.
  */
 import type { MemberRecord } from '../ifc/model-read-result';
 import type { CombinationCheck, MemberCheck } from './check-run-compute';
+import type { CheckMemberDetail } from './check-member-detail.entity';
 import type { CheckMemberResult, ResultStatus } from './check-member-result.entity';
 
-/** check_member_result without its run id: what the run worker hands back per member. */
-export type MemberResultRow = Omit<CheckMemberResult, 'runId' | 'run'>;
+/** A member's two stored rows without their run id. */
+export type MemberResultRow = Omit<CheckMemberResult, 'runId' | 'run'> & Pick<CheckMemberDetail, 'detail' | 'combinations'>;
 
 interface CompactCombinations {
   /** Combination index, signed VEd in N, station in mm (null when none) and file row, per combination. */
@@ -21,7 +23,7 @@ interface CompactCombinations {
   k?: number[];
 }
 
-/** Column order of the stored row after its run id, for bulk inserts. */
+/** Column order of the two stored rows after their run id, for bulk inserts. */
 export const MEMBER_RESULT_COLUMNS = [
   'ordinal',
   'globalId',
@@ -38,13 +40,14 @@ export const MEMBER_RESULT_COLUMNS = [
   'tauMax_MPa',
   'tauAvgWeb_MPa',
   'flags',
-  'detail',
-  'combinations',
-] as const satisfies readonly (keyof MemberResultRow)[];
+  'search',
+] as const satisfies readonly (keyof CheckMemberResult)[];
+export const MEMBER_DETAIL_COLUMNS = ['ordinal', 'detail', 'combinations'] as const satisfies readonly (keyof CheckMemberDetail)[];
 
-/** The row's values in MEMBER_RESULT_COLUMNS order, as the database stores them (simple-json columns as JSON text). */
-export function memberResultValues(row: MemberResultRow): unknown[] {
-  return MEMBER_RESULT_COLUMNS.map((column) => (column === 'flags' || column === 'detail' ? JSON.stringify(row[column]) : row[column]));
+/** The values of both rows in column order, as the database stores them (simple-json columns as JSON text). */
+export function memberResultValues(row: MemberResultRow): { result: unknown[]; detail: unknown[] } {
+  const stored = (column: keyof MemberResultRow) => (column === 'flags' || column === 'detail' ? JSON.stringify(row[column]) : row[column]);
+  return { result: MEMBER_RESULT_COLUMNS.map(stored), detail: MEMBER_DETAIL_COLUMNS.map(stored) };
 }
 
 export function resultStatusOf(check: Pick<MemberCheck, 'status' | 'warning'>): ResultStatus {
@@ -75,9 +78,18 @@ export function memberResultRow(
     tauMax_MPa: governing?.tauMax_MPa ?? null,
     tauAvgWeb_MPa: governing?.tauAvgWeb_MPa ?? null,
     flags: check.flags,
+    search: searchTextOf([check.globalId, member.tag, member.name, member.profile?.name ?? null]),
     detail,
     combinations: JSON.stringify(compactCombinations(combinations, combinationIndex)),
   };
+}
+
+/** What the text filter looks in: the words joined, lower case (the filter lower-cases its text the same way). */
+export function searchTextOf(parts: readonly (string | null)[]): string {
+  return parts
+    .filter((part): part is string => !!part)
+    .join('\n')
+    .toLowerCase();
 }
 
 function compactCombinations(combinations: readonly CombinationCheck[], combinationIndex: ReadonlyMap<string, number>): CompactCombinations {
@@ -94,7 +106,7 @@ function compactCombinations(combinations: readonly CombinationCheck[], combinat
 }
 
 /** The per-combination list of a stored row, as the run computed it. */
-export function combinationsOf(row: Pick<CheckMemberResult, 'combinations' | 'detail'>, runCombinations: readonly string[]): CombinationCheck[] {
+export function combinationsOf(row: Pick<CheckMemberDetail, 'combinations' | 'detail'>, runCombinations: readonly string[]): CombinationCheck[] {
   const compact = JSON.parse(row.combinations) as CompactCombinations;
   const VRd_N = row.detail.governing?.VRd_N;
   if (VRd_N === undefined) return [];
@@ -109,6 +121,6 @@ export function combinationsOf(row: Pick<CheckMemberResult, 'combinations' | 'de
 }
 
 /** The engine's MemberCheck back from a stored row. */
-export function memberCheckOf(row: Pick<CheckMemberResult, 'combinations' | 'detail'>, runCombinations: readonly string[]): MemberCheck {
+export function memberCheckOf(row: Pick<CheckMemberDetail, 'combinations' | 'detail'>, runCombinations: readonly string[]): MemberCheck {
   return { ...row.detail, combinations: combinationsOf(row, runCombinations) };
 }

@@ -91,6 +91,9 @@ const ROW_COLUMNS: readonly (keyof RunMemberRow)[] = [
   'flags',
 ];
 
+/** Sorts with few distinct values, whose ties are ordered by utilisation. */
+const GROUPING_SORTS: ReadonlySet<RunMemberSort> = new Set(['storey', 'profileName', 'status', 'grade', 'governingCombination']);
+
 /** Finished runs whose facets and colours are kept; each costs about a megabyte at 50,000 members. */
 const KEPT_RUNS = 8;
 
@@ -163,21 +166,25 @@ export class RunMembersQueries {
     if (filter.profile) query.andWhere('m.profileName = :profile', { profile: filter.profile });
     if (filter.minUtil !== undefined) query.andWhere('m.utilisation >= :minUtil', { minUtil: filter.minUtil });
     if (filter.maxUtil !== undefined) query.andWhere('m.utilisation <= :maxUtil', { maxUtil: filter.maxUtil });
-    const text = filter.q?.trim();
+    const text = filter.q?.trim().toLowerCase();
     if (text) {
+      // Case was folded when the row was written (searchTextOf); only the wildcards need escaping.
       const pattern = `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-      query.andWhere(
-        "(m.globalId LIKE :pattern ESCAPE '\\' OR m.tag LIKE :pattern ESCAPE '\\' OR m.name LIKE :pattern ESCAPE '\\' OR m.profileName LIKE :pattern ESCAPE '\\')",
-        { pattern },
-      );
+      query.andWhere("m.search LIKE :pattern ESCAPE '\\'", { pattern });
     }
     return query;
   }
 
-  /** Members without a value (not checked) come last either way; the model's order breaks ties. */
+  /**
+   * Members without a value (not checked) come last either way. Within a storey, profile or status the members follow
+   * their utilisation in the same direction, which the (run, column, utilisation) indexes give without sorting (so
+   * ascending, unchecked ones lead their group); the model's order breaks the remaining ties.
+   */
   private ordered(query: SelectQueryBuilder<CheckMemberResult>, order: Pick<RunMembersQuery, 'sort' | 'dir'>): SelectQueryBuilder<CheckMemberResult> {
     const dir = order.dir === 'asc' ? 'ASC' : 'DESC';
-    return query.orderBy(`m.${order.sort}`, dir, 'NULLS LAST').addOrderBy('m.ordinal', 'ASC');
+    query.orderBy(`m.${order.sort}`, dir, 'NULLS LAST');
+    if (GROUPING_SORTS.has(order.sort)) query.addOrderBy('m.utilisation', dir);
+    return query.addOrderBy('m.ordinal', 'ASC');
   }
 }
 

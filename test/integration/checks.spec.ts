@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { findSection, seriesOf, toSectionInput } from '../../server/catalogue/catalogue';
+import { CheckMemberDetail } from '../../server/checks/check-member-detail.entity';
 import { CheckMemberResult } from '../../server/checks/check-member-result.entity';
 import { CheckRun } from '../../server/checks/check-run.entity';
 import { fromNewtons, toNewtons } from '../../server/engine/units';
@@ -169,6 +170,7 @@ describe('check runs', () => {
       expect(failed).toMatchObject({ status: 'failed', summary: null });
       expect(failed.error).toMatch(/^The stored file .*governing\.bin is missing\.$/);
       expect(await app.dataSource.getRepository(CheckMemberResult).countBy({ runId: failed.id })).toBe(0);
+      expect(await app.dataSource.getRepository(CheckMemberDetail).countBy({ runId: failed.id })).toBe(0);
       const members = await engineer.get(`${runUrl(failed.id)}/members`).expect(409);
       expect(members.body.error.code).toBe('run_not_finished');
     });
@@ -192,6 +194,7 @@ describe('check runs', () => {
       }
       await expect(app.dataSource.getRepository(CheckRun).update({ id: run.id }, { engineVersion: 'something else' })).rejects.toThrow(/immutable record/);
       await expect(app.dataSource.getRepository(CheckMemberResult).update({ runId: run.id }, { utilisation: 0 })).rejects.toThrow(/immutable record/);
+      await expect(app.dataSource.getRepository(CheckMemberDetail).update({ runId: run.id }, { combinations: '{}' })).rejects.toThrow(/immutable record/);
       const again = await engineer.get(runUrl()).expect(200);
       expect(again.body.run).toMatchObject({ engineVersion: run.engineVersion, summary: run.summary });
     });

@@ -5,6 +5,7 @@
  */
 import { readdirSync } from 'node:fs';
 import path from 'node:path';
+import { CheckMemberDetail } from '../../server/checks/check-member-detail.entity';
 import { CheckMemberResult } from '../../server/checks/check-member-result.entity';
 import { CheckRun } from '../../server/checks/check-run.entity';
 import type { MemberRecord } from '../../server/ifc/model-read-result';
@@ -131,6 +132,7 @@ export async function resultsFootprint(app: TestApp, projectId: string): Promise
     templates: await ds.getRepository(ResultMappingTemplate).countBy({ projectId }),
     runs: await ds.getRepository(CheckRun).countBy({ projectId }),
     memberResults: await count(CheckMemberResult),
+    memberDetails: await count(CheckMemberDetail),
     files: storedResultFiles(app, projectId),
   };
 }
