@@ -1,3 +1,4 @@
+/// <reference lib="dom" />
 /**
  * The engineer's 3D view of the demo project, in Debian's chromium (software WebGL) against the real server with the
  * demo seed: the model draws, a failing and a passing member show their legend colours on screen, a click opens
@@ -8,11 +9,9 @@
 import os from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import type { ViewerTestHook } from '../../src/app/viewer/viewer-test-hook';
+import { VIEWER_TEST_HOOK_KEY, type ViewerTestHook } from '../../src/app/viewer/viewer-probe';
 import { DEPOT, type DemoBrowser, startDemoBrowser } from './demo-browser';
 
-/** VIEWER_TEST_HOOK_KEY of src/app/viewer/viewer-test-hook.ts (a value import would load Angular into node). */
-const VIEWER_TEST_HOOK_KEY = 'taulens.viewerTestHook';
 // Screenshots for looking at the view by eye; nothing compares them.
 const SCREENSHOTS = os.tmpdir();
 /** Flat shading draws the legend colour itself; a channel may still differ by rounding in software WebGL. */

@@ -4,6 +4,7 @@
  * batch each, picks through an id buffer and disposes everything it created. It knows nothing of Angular; the host
  * hears about hover and selection through the callbacks given to the constructor.
  */
+import type { ViewerStats } from './viewer-probe';
 import {
   AmbientLight,
   Box3,
@@ -66,15 +67,6 @@ export interface ViewerHit {
   y_px: number;
 }
 
-export interface ViewerStats {
-  drawCalls: number;
-  triangles: number;
-  geometries: number;
-  textures: number;
-  programs: number;
-  members: number;
-  contextElements: number;
-}
 
 export interface ColourResult {
   /** Members given a colour from the map. */

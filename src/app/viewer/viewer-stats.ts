@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, effect, input, signal } from '@angular/core';
-import type { ViewerEngine, ViewerStats as EngineStats } from './viewer-engine';
+import type { ViewerEngine } from './viewer-engine';
+import type { ViewerStats as EngineStats } from './viewer-probe';
 
 const REFRESH_MS = 1000;
 
