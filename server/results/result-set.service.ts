@@ -7,6 +7,7 @@ import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import type { DataSource } from 'typeorm';
 import { runTransaction } from '../data-source';
+import { NotFoundError } from '../http/errors';
 import { workerFile } from '../jobs/job-runner';
 import type { JobRunner } from '../jobs/job-runner';
 import type { FileStorage } from '../storage/file-storage';
@@ -63,8 +64,9 @@ export class ResultSetService {
   }
 
   async get(projectId: string, resultSetId: string): Promise<ResultSetView> {
-    await this.deps.matching.findResultSet(projectId, resultSetId);
-    return toResultSetView(await this.deps.dataSource.getRepository(ResultSet).findOneOrFail({ where: { id: resultSetId }, relations: WITH_CREATOR }));
+    const resultSet = await this.deps.dataSource.getRepository(ResultSet).findOne({ where: { id: resultSetId, projectId }, relations: WITH_CREATOR });
+    if (!resultSet) throw new NotFoundError('Result set not found.', { code: 'result_set_not_found' });
+    return toResultSetView(resultSet);
   }
 
   async importResults(projectId: string, actorId: string, request: ImportRequest): Promise<ResultSetView> {

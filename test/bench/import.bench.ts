@@ -240,6 +240,9 @@ async function throughServer(file: string, bareMs: number): Promise<void> {
     const [coordinator, engineer] = await Promise.all([app.signIn(team.coordinator), app.signIn(team.engineer)]);
     const revisionId = await readyRevision(app, projectId, 1, model());
 
+    // One import and run first, unmeasured: the worker threads start and load their code once per server.
+    const warm = await importThroughApi(coordinator, projectId, revisionId, file, 'bench warm-up');
+    await runThroughApi(engineer, projectId, revisionId, warm.id);
     const uploads: number[] = [];
     const imports: number[] = [];
     const checks: number[] = [];
