@@ -253,8 +253,7 @@ async function throughServer(file: string, bareMs: number): Promise<void> {
       checks.push((await runThroughApi(engineer, projectId, revisionId, imported.id)).ms);
     }
     const rows = MEMBERS * COMBINATIONS;
-    console.log(`
-through the server (real SQLite, worker threads, file storage), median of ${runs} after a warm-up; load average ${os.loadavg()[0].toFixed(1)} on ${os.availableParallelism()} cores`);
+    console.log(`\nthrough the server (real SQLite, worker threads, file storage), median of ${runs} after a warm-up; load average ${os.loadavg()[0].toFixed(1)} on ${os.availableParallelism()} cores`);
     console.log(`upload (stream to disk, preview, store)                 ${(median(uploads) / 1000).toFixed(2).padStart(6)} s`);
     console.log(
       `import + match incl. storing (result set, keys, file)   ${(median(imports) / 1000).toFixed(2).padStart(6)} s  ${((rows / median(imports)) * 1000 / 1e6).toFixed(2)} M rows/s` +
