@@ -7,6 +7,7 @@ import type { DataSource, SelectQueryBuilder } from 'typeorm';
 import { LruPromiseCache } from '../results/lru-promise-cache';
 import { CheckMemberResult, type ResultStatus } from './check-member-result.entity';
 import type { RunFlag } from './check-run-compute';
+import { MEMBER_RESULT_COLUMNS } from './member-result-row';
 
 export const RUN_MEMBER_SORTS = [
   'utilisation',
@@ -74,22 +75,8 @@ export interface RunFacets {
 /** `{[globalId]: {u, s}}` for the 3D view: utilisation (null when not checked) and status. */
 export type RunColours = Record<string, { u: number | null; s: ResultStatus }>;
 
-const ROW_COLUMNS: readonly (keyof RunMemberRow)[] = [
-  'globalId',
-  'tag',
-  'name',
-  'storey',
-  'profileName',
-  'grade',
-  'governingCombination',
-  'VEd_kN',
-  'VRd_kN',
-  'utilisation',
-  'tauMax_MPa',
-  'tauAvgWeb_MPa',
-  'status',
-  'flags',
-];
+/** The stored columns a table row shows: all but the ordinal and the search text. */
+const ROW_COLUMNS = MEMBER_RESULT_COLUMNS.filter((column): column is keyof RunMemberRow & (typeof MEMBER_RESULT_COLUMNS)[number] => column !== 'ordinal' && column !== 'search');
 
 /** Sorts with few distinct values, whose ties are ordered by utilisation. */
 const GROUPING_SORTS: ReadonlySet<RunMemberSort> = new Set(['storey', 'profileName', 'status', 'grade', 'governingCombination']);
