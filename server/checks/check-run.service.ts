@@ -8,7 +8,7 @@ import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import { runTransaction } from '../data-source';
 import type { DomainEvents } from '../http/domain-events';
-import { DomainError, type FieldIssue, NotFoundError, ValidationError } from '../http/errors';
+import { DomainError, NotFoundError, UnprocessableError } from '../http/errors';
 import type { JobRunner } from '../jobs/job-runner';
 import { workerFile } from '../jobs/job-runner';
 import { Project } from '../projects/project.entity';
@@ -70,9 +70,8 @@ export class CheckRunService {
     const parameters = runParameters(project.settings, request.standard, request.parameters);
     const matching = await this.deps.matching.matchingOf(projectId, resultSet.id, revision.id);
     if (matching.report.likelyOtherModel && !request.confirmPoorMatch) {
-      // ValidationError's details are typed for request fields; this one carries the matching summary.
-      const details = { summary: matching.summary } as unknown as FieldIssue[];
-      throw new ValidationError(`${matching.summary.warning} Confirm to run the check anyway.`, { code: 'poor_match', details });
+      const details = { summary: matching.summary };
+      throw new UnprocessableError(`${matching.summary.warning} Confirm to run the check anyway.`, { code: 'poor_match', details });
     }
     const runs = dataSource.getRepository(CheckRun);
     // insert, not save: save opens its own transaction, which would tangle with a queued one on the shared connection.

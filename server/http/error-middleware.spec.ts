@@ -11,6 +11,7 @@ import {
   PayloadTooLargeError,
   RateLimitedError,
   UnauthenticatedError,
+  UnprocessableError,
   UnsupportedMediaError,
   ValidationError,
 } from './errors';
@@ -43,6 +44,7 @@ describe('httpStatusOf', () => {
     [new GoneError('g'), 410],
     [new PayloadTooLargeError(), 413],
     [new UnsupportedMediaError(), 415],
+    [new UnprocessableError('u'), 422],
     [new RateLimitedError(), 429],
     [new DependencyFailedError('d'), 502],
   ])('maps %s to %i', (error, status) => {

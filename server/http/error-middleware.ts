@@ -10,6 +10,7 @@ import {
   PayloadTooLargeError,
   RateLimitedError,
   UnauthenticatedError,
+  UnprocessableError,
   UnsupportedMediaError,
   ValidationError,
 } from './errors';
@@ -28,6 +29,7 @@ export function httpStatusOf(error: DomainError): number {
   if (error instanceof GoneError) return 410;
   if (error instanceof PayloadTooLargeError) return 413;
   if (error instanceof UnsupportedMediaError) return 415;
+  if (error instanceof UnprocessableError) return 422;
   if (error instanceof RateLimitedError) return 429;
   if (error instanceof DependencyFailedError) return 502;
   return 500;

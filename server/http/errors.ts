@@ -42,6 +42,16 @@ export class ValidationError extends DomainError {
   }
 }
 
+/**
+ * A well-formed request whose content cannot be used as it stands: rows of an uploaded file that fail validation, or
+ * a check that needs the user's confirmation first.
+ */
+export class UnprocessableError extends DomainError {
+  constructor(message: string, options?: DomainErrorOptions) {
+    super(message, 'unprocessable', options);
+  }
+}
+
 export class ConflictError extends DomainError {
   constructor(message: string, options?: DomainErrorOptions) {
     super(message, 'conflict', options);

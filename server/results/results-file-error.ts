@@ -1,8 +1,9 @@
-import { type FieldIssue, ValidationError } from '../http/errors';
+import { type FieldIssue, UnprocessableError, ValidationError } from '../http/errors';
 
 /**
  * The one error the results import throws for a file or mapping it cannot use. Like the IFC reader's error it is not an
- * HTTP error: the results service maps it (an upload answers 400 with `code` and `details`, the CLI exits 2).
+ * HTTP error: the results service maps it (an upload answers 400, or 422 for bad rows, with `code` and `details`; the
+ * CLI exits 2).
  * `message` is written for the person who chose the file: what is wrong, where, and what to do.
  */
 export type ResultsFileErrorCode =
@@ -59,14 +60,15 @@ export class ResultsFileError extends Error {
 }
 
 /**
- * The error as the API and the job runner carry it (a ValidationError keeps its code and details across the worker
- * boundary). Bad rows become `invalid_rows` with `details.errors:[{row, column, message}]`, nothing stored.
+ * The error as the API and the job runner carry it (a domain error keeps its code and details across the worker
+ * boundary). A file that cannot be read is a ValidationError; bad rows in a readable file become the
+ * UnprocessableError `invalid_rows` with `details.errors:[{row, column, message}]`. Nothing is stored either way.
  */
-export function asValidationError(error: ResultsFileError): ValidationError {
+export function asDomainError(error: ResultsFileError): ValidationError | UnprocessableError {
   if (error.code !== 'rows_invalid') return fileValidationError(error.message, error.code, error.details);
   const { issues = [], stoppedEarly = false, lastRow } = error.details;
   const errors = issues.map((issue) => ({ row: issue.row, column: issue.column ?? null, code: issue.code, message: issue.message }));
-  return fileValidationError(error.message, 'invalid_rows', { errors, stoppedEarly, lastRow });
+  return new UnprocessableError(error.message, { code: 'invalid_rows', details: { errors, stoppedEarly, lastRow } });
 }
 
 function fileValidationError(message: string, code: string, details: unknown): ValidationError {

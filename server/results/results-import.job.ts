@@ -6,7 +6,7 @@ import { writeFile } from 'node:fs/promises';
 import { defineJob } from '../jobs/job-worker';
 import type { ColumnMapping } from './column-mapping';
 import { encodeGoverningTable } from './governing-file';
-import { ResultsFileError, asValidationError } from './results-file-error';
+import { ResultsFileError, asDomainError } from './results-file-error';
 import { importResultsFile } from './results-import';
 import type { ResultsReadSummary } from './results-reader';
 
@@ -26,6 +26,6 @@ export default defineJob(async (input: ResultsImportJobInput): Promise<ResultsIm
     await writeFile(input.governingFile, encodeGoverningTable(governing));
     return { kind: summary.kind, sheet: summary.sheet, rowCount: summary.rowCount, memberKeys: summary.memberKeys, combinations: summary.combinations };
   } catch (error) {
-    throw error instanceof ResultsFileError ? asValidationError(error) : error;
+    throw error instanceof ResultsFileError ? asDomainError(error) : error;
   }
 });

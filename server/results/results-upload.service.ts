@@ -10,7 +10,7 @@ import { NotFoundError } from '../http/errors';
 import type { ReceivedFile } from '../models/model-upload';
 import type { FileStorage } from '../storage/file-storage';
 import { withLocalCopy } from './local-copy';
-import { ResultsFileError, asValidationError } from './results-file-error';
+import { ResultsFileError, asDomainError } from './results-file-error';
 import { previewResultsFile } from './results-preview';
 import type { ResultsUploadView } from './result-views';
 import { ResultsUpload } from './results-upload.entity';
@@ -92,7 +92,7 @@ async function previewOf(path: string, sheet?: string): Promise<Preview> {
     if (error.code === 'sheet_required' && sheet === undefined) {
       return { format: 'xlsx', sheets: error.details.sheets ?? [], sheet: null, delimiter: null, decimalSeparator: '.', headerRow: null, headers: [], rows: [], guessedMapping: {}, missingMapping: [] };
     }
-    throw asValidationError(error);
+    throw asDomainError(error);
   }
 }
 

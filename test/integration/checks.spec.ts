@@ -136,7 +136,7 @@ describe('check runs', () => {
         mapping: KIP_MAPPING,
       });
       const before = await resultsFootprint(app, projectId);
-      const refused = await engineer.post(checksUrl(projectId)).send(runBody({ resultSetId: stranger.id })).expect(400);
+      const refused = await engineer.post(checksUrl(projectId)).send(runBody({ resultSetId: stranger.id })).expect(422);
       expect(refused.body.error.code).toBe('poor_match');
       expect(refused.body.error.message).toMatch(/^Only 1 of 6 result keys \(17 %\) match a member of revision 1 \(canteen-frame\.ifc\)\. .* Confirm to run the check anyway\.$/);
       expect(refused.body.error.details.summary).toMatchObject({ matched: 1, unmatchedResults: 5, likelyOtherModel: true });

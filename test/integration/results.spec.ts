@@ -180,7 +180,7 @@ describe('shear results', () => {
     it('refuses a file with bad rows, naming each row, and stores nothing', async () => {
       const uploadId = await upload(readFileSync(fixturePath('bad-rows.csv')));
       const before = await resultsFootprint(app, projectId);
-      const response = await coordinator.post(resultsUrl(projectId)).send(importBody(uploadId)).expect(400);
+      const response = await coordinator.post(resultsUrl(projectId)).send(importBody(uploadId)).expect(422);
       expect(response.body.error.code).toBe('invalid_rows');
       expect(response.body.error.details.errors).toEqual([
         { row: 3, column: 'member', code: 'member_missing', message: "Row 3 (column 'member'): the member key is empty." },
