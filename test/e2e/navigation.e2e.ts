@@ -86,7 +86,8 @@ test('a coordinator edits the project, uploads models and manages members, but h
   await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-overview-coordinator.png'), fullPage: true });
 
   await openSection('Models', 'Models');
-  await page.getByRole('button', { name: 'Upload IFC revision' }).waitFor();
+  await page.getByRole('button', { name: 'Choose IFC file' }).waitFor();
+  expect(await count('button', 'Upload revision')).toBe(1);
 
   await openSection('Members', 'Members');
   await page.getByRole('cell', { name: 'engineer@taulens.test' }).waitFor();
@@ -112,8 +113,9 @@ test('an engineer runs checks but neither edits the project nor uploads', async 
   await page.getByRole('button', { name: 'Start a check' }).waitFor();
 
   await openSection('Models', 'Models');
-  await page.getByRole('button', { name: 'Compare revisions' }).waitFor();
-  expect(await count('button', 'Upload IFC revision')).toBe(0);
+  await page.getByRole('link', { name: 'Compare revisions' }).waitFor();
+  expect(await count('button', 'Choose IFC file')).toBe(0);
+  expect(await count('button', 'Upload revision')).toBe(0);
 
   await openSection('Members', 'Members');
   await page.getByRole('cell', { name: 'coordinator@taulens.test' }).waitFor();
@@ -130,12 +132,15 @@ test('a reviewer verifies findings and sees no upload button', async () => {
   expect(await count('button', 'Edit details')).toBe(0);
 
   await openSection('Findings', 'Findings');
-  await page.getByRole('button', { name: 'Verify findings' }).waitFor();
-  expect(await count('button', 'Create finding')).toBe(0);
+  await page.getByRole('button', { name: 'Export' }).waitFor();
+  // Assigning is the coordinator's: no selection column, no bulk assign.
+  await page.getByRole('table', { name: 'Findings' }).waitFor();
+  expect(await page.getByRole('checkbox', { name: 'Select all findings on this page' }).count()).toBe(0);
 
   await openSection('Models', 'Models');
-  await page.getByRole('button', { name: 'Compare revisions' }).waitFor();
-  expect(await count('button', 'Upload IFC revision')).toBe(0);
+  await page.getByRole('link', { name: 'Compare revisions' }).waitFor();
+  expect(await count('button', 'Choose IFC file')).toBe(0);
+  expect(await count('button', 'Upload revision')).toBe(0);
 
   // On a phone-sized screen the sections move behind a button.
   await page.setViewportSize({ width: 390, height: 800 });
