@@ -3,6 +3,7 @@
  * `GET …/checks/:runId/members` (utilisation as a ratio) and the page's own URL query (utilisation in percent, defaults
  * left out) so a filtered table survives a reload and a trip to a calculation sheet and back.
  */
+import { wholeNumber } from '../core/url-query';
 import type { MemberCheckStatus } from './checks-api';
 
 export const RUN_MEMBER_SORTS = ['utilisation', 'tag', 'storey', 'profileName', 'grade', 'governingCombination', 'VEd_kN', 'VRd_kN', 'status'] as const;
@@ -89,12 +90,6 @@ function percentOrNull(text: string | undefined): number | null {
   if (text === undefined || text.trim() === '') return null;
   const value = Number(text);
   return Number.isFinite(value) && value >= 0 ? value : null;
-}
-
-function wholeNumber(text: string | undefined, fallback: number, allowed?: readonly number[]): number {
-  const value = Number(text);
-  if (text === undefined || !Number.isInteger(value) || value < 0) return fallback;
-  return allowed && !allowed.includes(value) ? fallback : value;
 }
 
 /** Reads the page's URL query back; anything unknown or malformed falls back to the default. */

@@ -3,6 +3,7 @@
  * `GET …/findings` (also used for the export links, so a file holds what the list shows) and the page's own URL
  * query, defaults left out, so a filtered list survives a reload and a trip to a finding and back.
  */
+import { wholeNumber } from '../core/url-query';
 import { FINDING_KINDS, FINDING_STATUSES, FindingKind, FindingPriority, FindingStatus, PRIORITIES } from './finding';
 
 export const FINDING_SORTS = ['number', 'title', 'status', 'priority', 'utilisation', 'dueDate', 'updatedAt', 'assignee'] as const;
@@ -68,12 +69,6 @@ export function findingsUrlParams(query: FindingsQuery): Params {
 
 function oneOf<T extends string>(values: readonly T[], text: string | undefined): T | null {
   return values.find((value) => value === text) ?? null;
-}
-
-function wholeNumber(text: string | undefined, fallback: number, allowed?: readonly number[]): number {
-  const value = Number(text);
-  if (text === undefined || !Number.isInteger(value) || value < 0) return fallback;
-  return allowed && !allowed.includes(value) ? fallback : value;
 }
 
 /** Reads the page's URL query back; anything unknown falls back to the default. */
