@@ -11,7 +11,8 @@ import { Project } from '../projects/project.entity';
 import { ResultMappingTemplate } from '../results/result-mapping-template.entity';
 import { ResultSet } from '../results/result-set.entity';
 import { LocalFileStorage } from '../storage/local-file-storage';
-import { DEMO_STEPS, type DemoDeps, seedDemo } from './seed';
+import type { DemoDeps } from './demo-context';
+import { DEMO_STEPS, seedDemo } from './seed';
 
 describe('demo shear results and check run steps', () => {
   let db: TestDataSource;

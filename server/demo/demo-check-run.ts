@@ -13,7 +13,7 @@ import { latestReadyRevision } from '../models/model-queries';
 import { ResultMatchingService } from '../results/result-matching.service';
 import { ResultSet } from '../results/result-set.entity';
 import { DEMO_RESULTS_NAME } from './demo-results';
-import { type DemoStep, demoProject, demoUser } from './seed';
+import { type DemoStep, demoProject, demoUser } from './demo-context';
 
 export const demoCheckRunStep: DemoStep = {
   name: 'demo check run',

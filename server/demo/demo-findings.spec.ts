@@ -8,7 +8,8 @@ import { Finding } from '../findings/finding.entity';
 import { createJobRunner } from '../jobs/job-runner';
 import { Project } from '../projects/project.entity';
 import { LocalFileStorage } from '../storage/local-file-storage';
-import { DEMO_STEPS, type DemoDeps, seedDemo } from './seed';
+import type { DemoDeps } from './demo-context';
+import { DEMO_STEPS, seedDemo } from './seed';
 
 describe('demo findings step', () => {
   let db: TestDataSource;

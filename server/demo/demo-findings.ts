@@ -10,7 +10,7 @@ import { syncFindingsForRun } from '../findings/finding-run-listener';
 import { type FindingAccess, type FindingActor, FindingService } from '../findings/finding.service';
 import { Finding } from '../findings/finding.entity';
 import type { ProjectRole } from '../projects/project-role';
-import { type DemoContext, type DemoStep, type DemoUserKey, demoProject, demoUser } from './seed';
+import { type DemoContext, type DemoStep, type DemoUserKey, demoProject, demoUser } from './demo-context';
 
 const NO_EMAIL = { deliver: async () => undefined };
 

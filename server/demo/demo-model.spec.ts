@@ -9,7 +9,8 @@ import { latestReadyRevision, previousRevision } from '../models/model-queries';
 import { ModelRevision } from '../models/model-revision.entity';
 import { Project } from '../projects/project.entity';
 import { LocalFileStorage } from '../storage/local-file-storage';
-import { DEMO_STEPS, type DemoDeps, seedDemo } from './seed';
+import type { DemoDeps } from './demo-context';
+import { DEMO_STEPS, seedDemo } from './seed';
 
 describe('demo model step', () => {
   let db: TestDataSource;

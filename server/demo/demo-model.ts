@@ -13,7 +13,7 @@ import path from 'node:path';
 import { ConflictError } from '../http/errors';
 import { checkIfcFile } from '../models/model-upload';
 import { ModelService } from '../models/model.service';
-import { type DemoStep, demoProject, demoUser } from './seed';
+import { type DemoStep, demoProject, demoUser } from './demo-context';
 
 export const DEMO_MODEL_FILES = [
   { fileName: 'brindlecote-frame-rev-C.ifc', note: 'Revision C: issued for coordination.' },

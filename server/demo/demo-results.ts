@@ -20,7 +20,7 @@ import { ResultMatchingService } from '../results/result-matching.service';
 import { ResultSet } from '../results/result-set.entity';
 import { ResultSetService } from '../results/result-set.service';
 import { ResultsUploadService } from '../results/results-upload.service';
-import { type DemoStep, demoProject, demoUser } from './seed';
+import { type DemoStep, demoProject, demoUser } from './demo-context';
 
 export const DEMO_FORCES_FILE = 'brindlecote-frame-shear-forces.csv';
 export const DEMO_RESULTS_NAME = 'Frame analysis, ULS shear (revision D sections)';

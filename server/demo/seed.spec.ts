@@ -9,7 +9,8 @@ import { ProjectMember } from '../projects/project-member.entity';
 import { LocalFileStorage } from '../storage/local-file-storage';
 import { verifyPassword } from '../users/password';
 import { User } from '../users/user.entity';
-import { DEMO_PASSWORD, DEMO_STEPS, type DemoDeps, demoProject, seedDemo } from './seed';
+import { type DemoDeps, demoProject } from './demo-context';
+import { DEMO_PASSWORD, DEMO_STEPS, seedDemo } from './seed';
 
 describe('seedDemo', () => {
   let db: TestDataSource;

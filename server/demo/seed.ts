@@ -1,14 +1,11 @@
-import type { Logger } from 'pino';
-import type { DataSource } from 'typeorm';
-import type { JobRunner } from '../jobs/job-runner';
 import type { DesignStandard } from '../projects/design-standard';
 import { Project } from '../projects/project.entity';
 import { ProjectMember } from '../projects/project-member.entity';
 import type { ProjectRole } from '../projects/project-role';
 import { defaultSettingsFor } from '../projects/project-settings';
-import type { FileStorage } from '../storage/file-storage';
 import { hashPassword } from '../users/password';
 import { User } from '../users/user.entity';
+import { type DemoContext, type DemoDeps, type DemoProjectKey, type DemoStep, type DemoUserKey, demoUser } from './demo-context';
 import { demoCheckRunStep } from './demo-check-run';
 import { demoFindingsStep } from './demo-findings';
 import { demoModelStep } from './demo-model';
@@ -16,28 +13,6 @@ import { demoResultsStep } from './demo-results';
 
 /** Shared by every demo account; printed once, on the first seeding. */
 export const DEMO_PASSWORD = 'taulens-demo';
-
-export type DemoUserKey = 'admin' | 'coordinator' | 'engineer' | 'reviewer';
-export type DemoProjectKey = 'depot' | 'canteen';
-
-export interface DemoDeps {
-  dataSource: DataSource;
-  storage: FileStorage;
-  jobs: JobRunner;
-  logger: Logger;
-}
-
-/** What the steps share: the dependencies, and the users and projects the first steps made or found. */
-export interface DemoContext extends DemoDeps {
-  users: Map<DemoUserKey, User>;
-  projects: Map<DemoProjectKey, Project>;
-}
-
-/** One idempotent seeding step: it must skip what already exists. */
-export interface DemoStep {
-  name: string;
-  run(ctx: DemoContext): Promise<void>;
-}
 
 export interface DemoSeedResult {
   /** True when the demo accounts were created by this call (so credentials are worth printing). */
@@ -146,16 +121,4 @@ export async function seedDemo(deps: DemoDeps, steps: readonly DemoStep[] = DEMO
     accounts: DEMO_USERS.map((u) => ({ email: u.email, role: u.key })),
     password: DEMO_PASSWORD,
   };
-}
-
-export function demoUser(ctx: DemoContext, key: DemoUserKey): User {
-  const user = ctx.users.get(key);
-  if (!user) throw new Error(`demo user "${key}" is missing: the demo users step must run first`);
-  return user;
-}
-
-export function demoProject(ctx: DemoContext, key: DemoProjectKey): Project {
-  const project = ctx.projects.get(key);
-  if (!project) throw new Error(`demo project "${key}" is missing: the demo projects step must run first`);
-  return project;
 }
