@@ -21,7 +21,7 @@ import { FORCE_UNITS, type ForceUnit, LENGTH_UNITS, type LengthUnit } from '../e
 import { exportBcf } from '../findings/bcf/bcf-export';
 import { nameBasedUuid } from '../findings/bcf/bcf-guid';
 import type { FindingExport } from '../findings/export/finding-export';
-import { memberLabelOf, memberTagOf, planRunSync } from '../findings/finding-sync-plan';
+import { memberLabelOf, planRunSync } from '../findings/finding-sync-plan';
 import { DomainError } from '../http/errors';
 import { extractIfcFromZip } from '../ifc/ifc-archive';
 import type { MemberRecord, ModelInfo } from '../ifc/model-read-result';

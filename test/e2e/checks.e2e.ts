@@ -13,11 +13,10 @@ const SCREENSHOTS = os.tmpdir();
 
 let demo: DemoBrowser;
 let page: Page;
-let server: DemoBrowser['server'];
 
 beforeAll(async () => {
   demo = await startDemoBrowser({ timeout_ms: 20_000 });
-  ({ page, server } = demo);
+  ({ page } = demo);
 });
 
 afterAll(async () => {

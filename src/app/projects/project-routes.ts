@@ -1,7 +1,6 @@
 import { Route, Routes } from '@angular/router';
 import { projectPermissionGuard } from '../core/access-guards';
 import { ProjectAction } from '../core/permissions';
-import { PlannedAction } from './section-placeholder/section-placeholder';
 
 /** One entry of the project navigation; the same permission guards its route. */
 export interface ProjectSection {
@@ -30,16 +29,7 @@ function sectionRoute(path: string, route: Omit<Route, 'path'>): Route {
   return { path, title: entry.label, canActivate: [projectPermissionGuard(entry.permission)], ...route };
 }
 
-// Until a section's feature lands, its page says what it will offer and which of those actions
-// this user's role allows.
-function placeholderRoute(path: string, summary: string, plannedActions: PlannedAction[]): Route {
-  return sectionRoute(path, {
-    loadComponent: () => import('./section-placeholder/section-placeholder').then((m) => m.SectionPlaceholder),
-    data: { heading: section(path).label, summary, plannedActions },
-  });
-}
-
-/** Child routes of `/projects/:projectId`; feature work replaces a placeholder with its page. */
+/** Child routes of `/projects/:projectId`: the overview and one lazy route per section. */
 export const projectRoutes: Routes = [
   sectionRoute('', {
     pathMatch: 'full',
