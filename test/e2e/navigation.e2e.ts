@@ -117,6 +117,10 @@ test('an engineer runs checks but neither edits the project nor uploads', async 
   expect(await count('button', 'Choose IFC file')).toBe(0);
   expect(await count('button', 'Upload revision')).toBe(0);
 
+  await openSection('Findings', 'Findings');
+  await page.getByRole('table', { name: 'Findings' }).waitFor();
+  expect(await page.getByRole('checkbox', { name: 'Select all findings on this page' }).count()).toBe(0);
+
   await openSection('Members', 'Members');
   await page.getByRole('cell', { name: 'coordinator@taulens.test' }).waitFor();
   expect(await count('button', 'Add member')).toBe(0);
@@ -133,9 +137,8 @@ test('a reviewer verifies findings and sees no upload button', async () => {
 
   await openSection('Findings', 'Findings');
   await page.getByRole('button', { name: 'Export' }).waitFor();
-  // Assigning is the coordinator's: no selection column, no bulk assign.
-  await page.getByRole('table', { name: 'Findings' }).waitFor();
-  expect(await page.getByRole('checkbox', { name: 'Select all findings on this page' }).count()).toBe(0);
+  // Reviewers assign findings (back to an engineer, say): the list offers the selection for bulk assigning.
+  await page.getByRole('checkbox', { name: 'Select all findings on this page' }).waitFor();
 
   await openSection('Models', 'Models');
   await page.getByRole('link', { name: 'Compare revisions' }).waitFor();
