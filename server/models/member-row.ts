@@ -7,6 +7,14 @@ import type { MemberFlag, MemberProfile, MemberRecord, MemberStatus } from '../i
 
 export const MEMBER_STATUSES: readonly MemberStatus[] = ['ok', 'not-applicable', 'flagged'];
 
+/** `GET …/members/labels`: every member's GlobalId, tag, section and storey as rows of `columns`, compact enough to
+ * send 50,000 members in one answer. */
+export interface MemberLabels {
+  columns: ['globalId', 'tag', 'profileName', 'storey'];
+  members: MemberLabelRow[];
+}
+export type MemberLabelRow = [globalId: string, tag: string | null, profileName: string | null, storey: string | null];
+
 export interface MemberRow {
   globalId: string;
   expressId: number;

@@ -2,7 +2,7 @@ import type { DataSource, SelectQueryBuilder } from 'typeorm';
 import { NotFoundError, ValidationError } from '../http/errors';
 import type { MemberRecord } from '../ifc/model-read-result';
 import type { MemberListQuery } from './member-list-query';
-import { MEMBER_ROW_COLUMNS, type MemberRow } from './member-row';
+import { MEMBER_ROW_COLUMNS, type MemberLabels, type MemberRow } from './member-row';
 import { ModelMember } from './model-member.entity';
 import { ModelMemberRecord } from './model-member-record.entity';
 import { loadMemberRecords, toRevisionView } from './model-queries';
@@ -73,6 +73,18 @@ export class ModelMembersService {
     };
     const [storeys, profiles] = await Promise.all([distinct('storey'), distinct('profileName')]);
     return { storeys, profiles };
+  }
+
+  /** The labels of every member in file order, in one answer: the 3D view names and filters all of them at once. */
+  async labels(projectId: string, revisionId: string): Promise<MemberLabels> {
+    await this.readyRevision(projectId, revisionId);
+    const rows = await this.members()
+      .createQueryBuilder('m')
+      .select(['m.globalId AS globalId', 'm.tag AS tag', 'm.profileName AS profileName', 'm.storey AS storey'])
+      .where('m.revisionId = :revisionId', { revisionId })
+      .orderBy('m.expressId', 'ASC')
+      .getRawMany<{ globalId: string; tag: string | null; profileName: string | null; storey: string | null }>();
+    return { columns: ['globalId', 'tag', 'profileName', 'storey'], members: rows.map((r) => [r.globalId, r.tag, r.profileName, r.storey]) };
   }
 
   /** The whole record; a GlobalId written twice in one file gives its first member. */

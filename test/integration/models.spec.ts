@@ -381,6 +381,13 @@ describe('models', () => {
         expect(onStorey.body.total).toBe(count((m) => m.storey === storey && m.profileName === 'IPE400'));
         expect(onStorey.body.total).toBeGreaterThan(0);
 
+        // The 3D view's compact list: every member once, in file order, with the table's labels.
+        const labels = (await coordinator.get(`${membersUrl()}/labels`).expect(200)).body;
+        expect(labels.columns).toEqual(['globalId', 'tag', 'profileName', 'storey']);
+        expect(labels.members).toHaveLength(everyone.length);
+        const labelOf = new Map(everyone.map((m) => [m.globalId, [m.globalId, m.tag, m.profileName, m.storey]]));
+        expect(labels.members.every((row: unknown[]) => JSON.stringify(row) === JSON.stringify(labelOf.get(row[0] as string)))).toBe(true);
+
         const tag = everyone[17].tag as string;
         const found = await coordinator.get(`${membersUrl()}?q=${encodeURIComponent(tag.toLowerCase())}`).expect(200);
         expect(found.body.members.map((m: Row) => m.tag)).toContain(tag);
@@ -450,7 +457,7 @@ describe('models', () => {
 
     describe('who may do what', () => {
       it('lets engineers and reviewers read but not upload; hides the project from outsiders and anonymous callers', async () => {
-        const urls = [modelsUrl(team), `${modelsUrl(team)}/${revision.id}`, membersUrl(), `${membersUrl()}/facets`, `${modelsUrl(team)}/${revision.id}/geometry.glb`];
+        const urls = [modelsUrl(team), `${modelsUrl(team)}/${revision.id}`, membersUrl(), `${membersUrl()}/facets`, `${membersUrl()}/labels`, `${modelsUrl(team)}/${revision.id}/geometry.glb`];
         for (const role of ['engineer', 'reviewer', 'admin'] as const) {
           const agent = await app.signIn(team[role]);
           for (const url of urls) await agent.get(url).expect(200);

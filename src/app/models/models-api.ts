@@ -2,12 +2,12 @@ import { HttpClient, HttpEventType } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { filter, map, Observable } from 'rxjs';
 import type { MemberFlag, MemberRecord, MemberStatus } from '../../../server/ifc/model-read-result';
-import type { MemberRow } from '../../../server/models/member-row';
+import type { MemberLabelRow, MemberLabels, MemberRow } from '../../../server/models/member-row';
 import type { ChangedField, ChangedMember, FieldChange, RevisionComparison } from '../../../server/models/revision-compare';
 import type { RevisionCounts, RevisionStatus, RevisionView } from '../../../server/models/revision-view';
 
 // The API's own types (plain, entity-free server modules), so client and server cannot drift apart.
-export type { ChangedField, ChangedMember, FieldChange, MemberFlag, MemberRecord, MemberRow, MemberStatus, RevisionCounts, RevisionStatus, RevisionView };
+export type { ChangedField, ChangedMember, FieldChange, MemberFlag, MemberLabelRow, MemberLabels, MemberRecord, MemberRow, MemberStatus, RevisionCounts, RevisionStatus, RevisionView };
 
 export interface MemberPage {
   total: number;

@@ -2,12 +2,12 @@
 import { TEST_RUN } from '../checks/checks.testing';
 import type { CheckRun } from '../checks/checks-api';
 import { testFinding } from '../findings/findings.testing';
-import { memberRow, revision } from '../models/models.testing';
+import type { MemberLabelRow } from '../models/models-api';
+import { revision } from '../models/models.testing';
 import {
   base64OfBytes,
   defaultRevision,
   finishedRunsOn,
-  remainingPages,
   revisionToOpen,
   runToShow,
   savedViewpointRequest,
@@ -88,14 +88,14 @@ describe('revisionToOpen', () => {
 });
 
 describe('viewerMembers', () => {
-  const girder = memberRow({ globalId: '0aaaaaaaaaaaaaaaaaaaaa', tag: 'G-1', storey: 'Level 1', profileName: 'IPE 300' });
-  const beam = memberRow({ globalId: '0bbbbbbbbbbbbbbbbbbbbb', tag: 'B-2', storey: 'Level 2', profileName: 'IPE 200' });
+  const girder: MemberLabelRow = ['0aaaaaaaaaaaaaaaaaaaaa', 'G-1', 'IPE 300', 'Level 1'];
+  const beam: MemberLabelRow = ['0bbbbbbbbbbbbbbbbbbbbb', 'B-2', 'IPE 200', 'Level 2'];
 
-  it('takes names from the rows and results from the colours', () => {
-    const colours = { members: { [girder.globalId]: { u: 1.12, s: 'fail' as const } } };
+  it('takes names from the labels and results from the colours', () => {
+    const colours = { members: { [girder[0]]: { u: 1.12, s: 'fail' as const } } };
     expect(viewerMembers([girder, beam], colours)).toEqual([
-      { globalId: girder.globalId, tag: 'G-1', section: 'IPE 300', storey: 'Level 1', utilisationRatio: 1.12, status: 'fail' },
-      { globalId: beam.globalId, tag: 'B-2', section: 'IPE 200', storey: 'Level 2', utilisationRatio: null, status: 'not-checked' },
+      { globalId: girder[0], tag: 'G-1', section: 'IPE 300', storey: 'Level 1', utilisationRatio: 1.12, status: 'fail' },
+      { globalId: beam[0], tag: 'B-2', section: 'IPE 200', storey: 'Level 2', utilisationRatio: null, status: 'not-checked' },
     ]);
   });
 
@@ -103,7 +103,7 @@ describe('viewerMembers', () => {
     expect(viewerMembers([girder], null).map((m) => [m.status, m.utilisationRatio])).toEqual([['not-checked', null]]);
   });
 
-  it('still colours results whose member rows have not arrived', () => {
+  it('still colours results whose member labels have not arrived', () => {
     const colours = { members: { '0ccccccccccccccccccccc': { u: 0.4, s: 'pass' as const } } };
     expect(viewerMembers([], colours)).toEqual([
       { globalId: '0ccccccccccccccccccccc', tag: null, section: null, storey: null, utilisationRatio: 0.4, status: 'pass' },
@@ -111,13 +111,6 @@ describe('viewerMembers', () => {
   });
 });
 
-describe('remainingPages', () => {
-  it('lists the pages after the first', () => {
-    expect(remainingPages(0, 500)).toEqual([]);
-    expect(remainingPages(500, 500)).toEqual([]);
-    expect(remainingPages(501, 500)).toEqual([1]);
-    expect(remainingPages(1600, 500)).toEqual([1, 2, 3]);
-  });
 });
 
 describe('viewpointOfFinding', () => {

@@ -4,7 +4,7 @@
  */
 import type { CheckRun } from '../checks/checks-api';
 import type { Finding } from '../findings/finding';
-import type { MemberRow, RevisionView } from '../models/models-api';
+import type { MemberLabelRow, RevisionView } from '../models/models-api';
 import type { SavedViewpointView } from '../../../server/findings/finding-api-types';
 import type { MemberCheckStatus, ViewerMember } from './viewer-member';
 import type { ViewerCamera, ViewerClippingPlane, ViewerViewpoint } from './viewpoint';
@@ -66,34 +66,21 @@ export function runToShow(runs: readonly CheckRun[], revisionId: string | null, 
 }
 
 /**
- * The members as the viewer takes them: names from the revision's member rows, results from the run's colours.
- * Without a run every member is "not checked". Results for members the rows do not (yet) name still colour.
+ * The members as the viewer takes them: names from the revision's member labels, results from the run's colours.
+ * Without a run every member is "not checked". Results for members the labels do not (yet) name still colour.
  */
-export function viewerMembers(rows: readonly MemberRow[], colours: RunColours | null): ViewerMember[] {
+export function viewerMembers(labels: readonly MemberLabelRow[], colours: RunColours | null): ViewerMember[] {
   const results = colours?.members ?? {};
-  const members: ViewerMember[] = rows.map((row) => {
-    const result = results[row.globalId];
-    return {
-      globalId: row.globalId,
-      tag: row.tag,
-      section: row.profileName,
-      storey: row.storey,
-      utilisationRatio: result?.u ?? null,
-      status: result?.s ?? 'not-checked',
-    };
+  const members: ViewerMember[] = labels.map(([globalId, tag, section, storey]) => {
+    const result = results[globalId];
+    return { globalId, tag, section, storey, utilisationRatio: result?.u ?? null, status: result?.s ?? 'not-checked' };
   });
-  const named = new Set(rows.map((row) => row.globalId));
+  const named = new Set(labels.map(([globalId]) => globalId));
   for (const [globalId, result] of Object.entries(results)) {
     if (named.has(globalId)) continue;
     members.push({ globalId, tag: null, section: null, storey: null, utilisationRatio: result.u, status: result.s });
   }
   return members;
-}
-
-/** Page numbers still to fetch after the first page, for `total` rows. */
-export function remainingPages(total: number, pageSize: number): number[] {
-  const pages = Math.ceil(total / pageSize);
-  return Array.from({ length: Math.max(0, pages - 1) }, (_, i) => i + 1);
 }
 
 /**

@@ -5,14 +5,15 @@ import { TEST_RUN } from '../checks/checks.testing';
 import { nextRequest, settle } from '../core/http.testing';
 import { TEST_PROJECT_ID } from '../core/session.testing';
 import { testDetail, testFinding } from '../findings/findings.testing';
-import { memberRow, revision } from '../models/models.testing';
+import { revision } from '../models/models.testing';
 import { configureProjectPagesForTests, openProjectSection } from '../projects/project.testing';
 
 // Invented project data; the page's own choices are specified in viewer-page-data.spec.ts.
 const api = `/api/projects/${TEST_PROJECT_ID}`;
 const REV_1 = revision({ id: 'rev-1', number: 1 });
 const REV_2 = revision({ id: 'rev-2', number: 2, fileName: 'canopy-rev-B.ifc' });
-const GIRDER = memberRow({ globalId: '2O2Fr$t4X7Zf8NOew3FLOH', tag: 'G-101', storey: 'Level 2', profileName: 'IPE 300' });
+const GIRDER = { globalId: '2O2Fr$t4X7Zf8NOew3FLOH', tag: 'G-101', storey: 'Level 2', profileName: 'IPE 300' };
+const LABELS = { columns: ['globalId', 'tag', 'profileName', 'storey'], members: [[GIRDER.globalId, GIRDER.tag, GIRDER.profileName, GIRDER.storey]] };
 
 describe('ViewerPage', () => {
   let backend: HttpTestingController;
@@ -35,7 +36,7 @@ describe('ViewerPage', () => {
     (await nextRequest(backend, `${api}/checks`)).flush({ runs });
     (await nextRequest(backend, `${api}/viewpoints`)).flush({ viewpoints: [] });
     await settle();
-    (await nextRequest(backend, (r) => r.url === `${api}/models/rev-2/members`)).flush({ total: 1, members: [GIRDER] });
+    (await nextRequest(backend, (r) => r.url === `${api}/models/rev-2/members/labels`)).flush(LABELS);
     await settle();
     return harness.routeNativeElement!.querySelector<HTMLElement>('tl-viewer-page')!;
   }
@@ -81,8 +82,8 @@ describe('ViewerPage', () => {
     (await nextRequest(backend, `${api}/findings/finding-1`)).flush(testDetail({ finding: testFinding({ runId: 'run-rev-1' }) }));
     await settle();
     // The page waits for the finding before it chooses, so the newest revision is never loaded for nothing.
-    backend.expectNone((r) => r.url === `${api}/models/rev-2/members` || r.url.endsWith('/run-1/colours'));
-    (await nextRequest(backend, (r) => r.url === `${api}/models/rev-1/members`)).flush({ total: 1, members: [GIRDER] });
+    backend.expectNone((r) => r.url === `${api}/models/rev-2/members/labels` || r.url.endsWith('/run-1/colours'));
+    (await nextRequest(backend, (r) => r.url === `${api}/models/rev-1/members/labels`)).flush(LABELS);
     (await nextRequest(backend, `${api}/checks/run-rev-1/colours`)).flush({ members: {} });
     await settle();
     const page = harness.routeNativeElement!.querySelector<HTMLElement>('tl-viewer-page')!;
@@ -97,7 +98,7 @@ describe('ViewerPage', () => {
     await settle();
     expect(text(page)).toContain("The finding's view could not be opened: No such finding in this project.");
     // Without the finding's run to go by, the view falls back to the newest revision and its latest run.
-    (await nextRequest(backend, (r) => r.url === `${api}/models/rev-2/members`)).flush({ total: 1, members: [GIRDER] });
+    (await nextRequest(backend, (r) => r.url === `${api}/models/rev-2/members/labels`)).flush(LABELS);
     (await nextRequest(backend, `${api}/checks/run-1/colours`)).flush({ members: {} });
     await settle();
     expect(text(page)).toContain('Revision 2 · canopy-rev-B.ifc');

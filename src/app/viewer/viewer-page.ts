@@ -117,16 +117,16 @@ export class ViewerPage {
     const runId = this.runId();
     return runId === null ? undefined : `${runUrl(this.projectId(), runId)}/colours`;
   });
-  private readonly rowsResource = resource({
+  private readonly labelsResource = resource({
     params: () => {
       const revisionId = this.revisionId();
       return revisionId === null ? undefined : { projectId: this.projectId(), revisionId };
     },
-    loader: ({ params, abortSignal }) => this.api.allMemberRows(params.projectId, params.revisionId, abortSignal),
+    loader: ({ params }) => this.api.memberLabels(params.projectId, params.revisionId),
   });
   protected readonly members = computed(() =>
     viewerMembers(
-      this.rowsResource.hasValue() ? this.rowsResource.value() : [],
+      this.labelsResource.hasValue() ? this.labelsResource.value() : [],
       this.runId() !== null && this.coloursResource.hasValue() ? this.coloursResource.value() : null,
     ),
   );
@@ -150,7 +150,7 @@ export class ViewerPage {
   private readonly appliedFindingId = signal<string | null>(null);
 
   protected readonly loadError = computed(() => {
-    const error = this.revisionsResource.error() ?? this.runsResource.error() ?? this.coloursResource.error() ?? this.rowsResource.error();
+    const error = this.revisionsResource.error() ?? this.runsResource.error() ?? this.coloursResource.error() ?? this.labelsResource.error();
     return error ? errorMessage(error) : null;
   });
   protected readonly findingError = computed(() => {
