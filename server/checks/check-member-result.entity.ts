@@ -1,10 +1,8 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { CheckRun } from './check-run.entity';
 import type { RunFlag } from './check-run-compute';
+import { RESULT_STATUSES, type ResultStatus } from './checks-api-types';
 
-export const RESULT_STATUSES = ['pass', 'warning', 'fail', 'not-checked', 'not-applicable'] as const;
-/** As the results table shows it: a passing member at or above the warning ratio is a 'warning'. */
-export type ResultStatus = (typeof RESULT_STATUSES)[number];
 
 /**
  * One member's outcome in a check run: the columns the results table sorts and filters on, indexed per run. Kept

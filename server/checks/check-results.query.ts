@@ -10,11 +10,11 @@ import { revisionMembers } from '../results/ready-revision';
 import { CheckMemberDetail } from './check-member-detail.entity';
 import { CheckMemberResult } from './check-member-result.entity';
 import { CheckRun } from './check-run.entity';
-import { type CheckRunView, toRunView } from './check-run-view';
+import { toRunView } from './check-run-view';
+import type { CheckRunView, MemberSheet, RunMemberRow } from './checks-api-types';
 import { engineVersion } from './engine-version';
 import { memberCheckOf } from './member-result-row';
-import { buildMemberSheet, type MemberSheet } from './member-sheet';
-import type { RunMemberRow } from './run-members.query';
+import { buildMemberSheet } from './member-sheet';
 
 export type RunMemberResult = Pick<
   RunMemberRow,

@@ -1,26 +1,7 @@
 /** A check run as the API shows it: the record of its inputs, its state and its outcome. */
-import type { Standard } from '../engine/check';
-import type { CheckParameters } from './check-parameters';
-import type { CheckRun, CheckRunStatus } from './check-run.entity';
-import { type RunSummaryView, toSummaryView } from './run-summary';
-
-export interface CheckRunView {
-  id: string;
-  status: CheckRunStatus;
-  /** While queued or running. */
-  progress: { fraction: number } | null;
-  error: string | null;
-  standard: Standard;
-  parameters: CheckParameters;
-  modelRevision: { id: string; number: number; sha256: string; fileName: string };
-  resultSet: { id: string; name: string; sha256: string };
-  engineVersion: string;
-  createdBy: { id: string; name: string };
-  createdAt: string;
-  finishedAt: string | null;
-  poorMatchConfirmed: boolean;
-  summary: RunSummaryView | null;
-}
+import type { CheckRun } from './check-run.entity';
+import type { CheckRunView } from './checks-api-types';
+import { toSummaryView } from './run-summary';
 
 export function toRunView(run: CheckRun, fraction: number | undefined): CheckRunView {
   const active = run.status === 'queued' || run.status === 'running';

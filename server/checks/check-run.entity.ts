@@ -2,10 +2,9 @@ import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, Primary
 import { Project } from '../projects/project.entity';
 import { STANDARDS, type Standard } from '../engine/check';
 import type { CheckParameters } from './check-parameters';
+import { CHECK_RUN_STATUSES, type CheckRunStatus } from './checks-api-types';
 import type { RunSummary } from './run-summary';
 
-export const CHECK_RUN_STATUSES = ['queued', 'running', 'done', 'failed'] as const;
-export type CheckRunStatus = (typeof CHECK_RUN_STATUSES)[number];
 
 /**
  * One check of a model revision against a result set: the record of its inputs (who, when, file hashes, parameters,

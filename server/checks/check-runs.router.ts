@@ -5,7 +5,7 @@ import { STANDARDS } from '../engine/check';
 import type { AppContext } from '../http/app-context';
 import { inputOf, validate } from '../http/validate';
 import { ResultMatchingService } from '../results/result-matching.service';
-import { RESULT_STATUSES } from './check-member-result.entity';
+import { RESULT_STATUSES } from './checks-api-types';
 import { CheckRunService } from './check-run.service';
 import { finishedRun, memberSheet } from './check-results.query';
 import { toRunView } from './check-run-view';

@@ -7,7 +7,8 @@
 import type { MemberRecord } from '../ifc/model-read-result';
 import type { CombinationCheck, MemberCheck } from './check-run-compute';
 import type { CheckMemberDetail } from './check-member-detail.entity';
-import type { CheckMemberResult, ResultStatus } from './check-member-result.entity';
+import type { CheckMemberResult } from './check-member-result.entity';
+import type { ResultStatus } from './checks-api-types';
 
 /** A member's two stored rows without their run id. */
 export type MemberResultRow = Omit<CheckMemberResult, 'runId' | 'run'> & Pick<CheckMemberDetail, 'detail' | 'combinations'>;

@@ -11,63 +11,15 @@ import { lightestPassingSection } from '../catalogue/section-selection';
 import type { Standard } from '../engine/check';
 import { type GradeId, yieldRuleLabel } from '../engine/grades';
 import type { ISectionInput } from '../engine/section';
-import type { SectionProperties } from '../engine/section-properties';
-import { shearStressProfile, type JunctionStress } from '../engine/shear-stress';
-import type { TraceStep } from '../engine/trace';
+import { sectionPropertyValues } from '../engine/section-properties';
+import { shearStressProfile } from '../engine/shear-stress';
 import { requiredWebThickness_mm } from '../engine/web-thickness';
 import type { MemberRecord } from '../ifc/model-read-result';
 import { REPORT_CAUTIONS } from '../reports/report-cautions';
 import type { CheckParameters } from './check-parameters';
-import { engineParamsOf, evaluateMember, type MemberCheck, type RunFlag } from './check-run-compute';
-import type { ResultStatus } from './check-member-result.entity';
+import { engineParamsOf, evaluateMember, type MemberCheck } from './check-run-compute';
+import type { MemberSheet } from './checks-api-types';
 import { resultStatusOf } from './member-result-row';
-
-export type SectionPropertyValues = Omit<SectionProperties, 'input' | 'levels_mm' | 'firstMoment_mm3' | 'widthAt_mm'>;
-
-export interface MemberSheet {
-  member: MemberRecord;
-  standard: Standard;
-  parameters: CheckParameters;
-  status: ResultStatus;
-  /** Why the member was not checked or is not applicable. */
-  reason: string | null;
-  /** The member's result as the run recorded it (with its per-combination list). */
-  check: MemberCheck;
-  section: { input: ISectionInput; properties: SectionPropertyValues } | null;
-  grade: GradeId | null;
-  fy_MPa: number | null;
-  gradeRule: string | null;
-  stress: {
-    shear_kN: number;
-    samples: { y_mm: number; tau_MPa: number }[];
-    tauMax_MPa: number;
-    at_mm: number;
-    junctions: { top: JunctionStress; bottom: JunctionStress };
-    webAverageClear_MPa: number;
-    webAverageFullDepth_MPa: number;
-    /** EN 1993-1-1 (6.19): fy/(√3·γM0); absent for AISC, whose check is not a stress check. */
-    elasticLimit_MPa?: number;
-  } | null;
-  governing: {
-    combination: string;
-    station_mm: number | null;
-    VEd_kN: number;
-    VRd_kN: number;
-    utilisation: number;
-    status: ResultStatus;
-    flags: RunFlag[];
-  } | null;
-  trace: TraceStep[];
-  combinations: { combination: string; station_mm: number | null; VEd_kN: number; utilisation: number; memberKey: string; row: number }[];
-  suggestion: {
-    /** The lightest section of the same catalogue series that carries the governing shear (null: none, or not a catalogue section). */
-    lighterPassing: { name: string; utilisation: number } | null;
-    /** Web thickness that would bring the utilisation to 1.0, other dimensions kept; null when no web that fits would. */
-    requiredWebThickness_mm: number | null;
-  } | null;
-  engineVersion: { run: string; sheet: string };
-  cautions: string[];
-}
 
 export interface SheetInput {
   member: MemberRecord;
@@ -111,7 +63,7 @@ export function buildMemberSheet(input: SheetInput): MemberSheet {
   const toKN = (value_N: number) => value_N / 1000;
   return {
     ...base,
-    section: { input: section, properties: propertyValues(capacity.section) },
+    section: { input: section, properties: sectionPropertyValues(capacity.section) },
     // The engine reads EN grades by the run's yield rule (EN 10025-2 bands unless an EN run says otherwise).
     gradeRule: yieldRuleLabel(grade, parameters.standard === 'en1993-1-1' ? parameters.yieldRule : 'en10025-2'),
     stress: {
@@ -148,11 +100,6 @@ export function buildMemberSheet(input: SheetInput): MemberSheet {
 
 function cautionsFor(input: SheetInput): string[] {
   return input.runEngineVersion === input.currentEngineVersion ? [...REPORT_CAUTIONS] : [ENGINE_CHANGED, ...REPORT_CAUTIONS];
-}
-
-function propertyValues(props: SectionProperties): SectionPropertyValues {
-  const { input: _input, levels_mm: _levels, firstMoment_mm3: _q, widthAt_mm: _b, ...values } = props;
-  return values;
 }
 
 function suggestionFor(

@@ -1,7 +1,6 @@
 import { REPORT_CAUTIONS_TEXT } from '../reports/report-cautions';
-import type { CheckRunView } from './check-run-view';
+import type { CheckRunView, RunMemberRow } from './checks-api-types';
 import { formulaSafe, runMembersCsv } from './run-members-csv';
-import type { RunMemberRow } from './run-members.query';
 
 const run = {
   id: 'run-1',

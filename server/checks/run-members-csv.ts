@@ -6,8 +6,7 @@
 import { stringify } from 'csv-stringify/sync';
 import { REPORT_CAUTIONS_TEXT } from '../reports/report-cautions';
 import { STANDARD_LABELS } from '../reports/report-format';
-import type { CheckRunView } from './check-run-view';
-import type { RunMemberRow } from './run-members.query';
+import type { CheckRunView, RunMemberRow } from './checks-api-types';
 
 export const RUN_MEMBERS_CSV_COLUMNS = [
   'GlobalId',

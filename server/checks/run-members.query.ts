@@ -5,8 +5,8 @@
  */
 import type { DataSource, SelectQueryBuilder } from 'typeorm';
 import { LruPromiseCache } from '../results/lru-promise-cache';
-import { CheckMemberResult, type ResultStatus } from './check-member-result.entity';
-import type { RunFlag } from './check-run-compute';
+import { CheckMemberResult } from './check-member-result.entity';
+import type { ResultStatus, RunFacets, RunMemberRow, RunMembersPage } from './checks-api-types';
 import { MEMBER_RESULT_COLUMNS } from './member-result-row';
 
 export const RUN_MEMBER_SORTS = [
@@ -42,34 +42,6 @@ export interface RunMembersQuery extends RunMemberFilter {
   dir: 'asc' | 'desc';
   page: number;
   pageSize: number;
-}
-
-export interface RunMemberRow {
-  globalId: string;
-  tag: string | null;
-  name: string | null;
-  storey: string | null;
-  profileName: string | null;
-  grade: string | null;
-  governingCombination: string | null;
-  VEd_kN: number | null;
-  VRd_kN: number | null;
-  utilisation: number | null;
-  tauMax_MPa: number | null;
-  tauAvgWeb_MPa: number | null;
-  status: ResultStatus;
-  flags: RunFlag[];
-}
-
-export interface RunMembersPage {
-  total: number;
-  rows: RunMemberRow[];
-  facets: RunFacets;
-}
-
-export interface RunFacets {
-  storeys: string[];
-  profiles: string[];
 }
 
 /** `{[globalId]: {u, s}}` for the 3D view: utilisation (null when not checked) and status. */

@@ -58,6 +58,14 @@ export interface SectionProperties {
   widthAt_mm(y_mm: number, side?: 'below' | 'above'): number;
 }
 
+/** The section's properties as plain numbers, without the input and the sampling functions (what an API sends). */
+export type SectionPropertyValues = Omit<SectionProperties, 'input' | 'levels_mm' | 'firstMoment_mm3' | 'widthAt_mm'>;
+
+export function sectionPropertyValues(props: SectionProperties): SectionPropertyValues {
+  const { input: _input, levels_mm: _levels, firstMoment_mm3: _q, widthAt_mm: _b, ...values } = props;
+  return values;
+}
+
 const square = (x: number): number => x * x;
 
 function clampUnit(x: number): number {

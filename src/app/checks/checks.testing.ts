@@ -1,6 +1,6 @@
 // Invented check runs and results for client specs. Not imported by the app.
 import { recommendedParameters } from '../../../server/checks/check-parameters';
-import { sectionProperties } from '../../../server/engine/section-properties';
+import { sectionProperties, sectionPropertyValues } from '../../../server/engine/section-properties';
 import { shearStressProfile } from '../../../server/engine/shear-stress';
 import { iSection } from '../../../server/engine/test-sections';
 import { CAUTIONS } from '../core/cautions';
@@ -92,7 +92,7 @@ export function memberSheet(overrides: Partial<MemberSheet> = {}): MemberSheet {
       combinations: [],
       flags: ['assumed-grade'],
     },
-    section: { input, properties: {} },
+    section: { input, properties: sectionPropertyValues(sectionProperties(input)) },
     grade: 'S355',
     fy_MPa: 355,
     gradeRule: 'EN 10025-2 by nominal thickness',
