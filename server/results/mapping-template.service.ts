@@ -3,14 +3,8 @@ import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ConflictError, NotFoundError } from '../http/errors';
 import type { ColumnMapping } from './column-mapping';
+import type { MappingTemplateView } from './results-api-types';
 import { ResultMappingTemplate } from './result-mapping-template.entity';
-
-export interface MappingTemplateView {
-  id: string;
-  name: string;
-  mapping: ColumnMapping;
-  createdAt: string;
-}
 
 export class MappingTemplateService {
   constructor(private readonly dataSource: DataSource) {}

@@ -12,42 +12,17 @@ import {
   type AmbiguousMatch,
   type GeometryMatchOptions,
   type MatchableKey,
-  type MatchMethod,
   type MatchReport,
   type MemberMatch,
   matchResultsToMembers,
 } from './member-matching';
 import type { MemberKeyKind } from './column-mapping';
+import type { MatchingFilter, MatchingItem, MatchingPage, MemberCandidate } from './results-api-types';
 import { LruPromiseCache } from './lru-promise-cache';
 import { readyRevision, revisionLabel, revisionMembers } from './ready-revision';
 import { ResultKey } from './result-key.entity';
 import { ResultManualMatch } from './result-manual-match.entity';
 import { ResultSet } from './result-set.entity';
-
-export const MATCHING_FILTERS = ['all', 'matched', 'ambiguous', 'unmatched', 'members-without-results'] as const;
-export type MatchingFilter = (typeof MATCHING_FILTERS)[number];
-
-export interface MemberCandidate {
-  globalId: string;
-  tag: string | null;
-  name: string | null;
-}
-
-export interface MatchingItem {
-  /** Null on a members-without-results row. */
-  resultKey: string | null;
-  globalId: string | null;
-  tag: string | null;
-  name: string | null;
-  method: MatchMethod | null;
-  candidates: MemberCandidate[];
-}
-
-export interface MatchingPage {
-  summary: MatchingSummary;
-  total: number;
-  items: MatchingItem[];
-}
 
 /** What matching a set of keys needs besides the keys. */
 export interface MatchSettings {

@@ -5,7 +5,7 @@ import { User } from '../users/user.entity';
 import type { ColumnMapping } from './column-mapping';
 import type { MatchingSummary } from './matching-summary';
 import type { GeometryMatchOptions } from './member-matching';
-import { RESULTS_FILE_KINDS, type ResultsFileKind } from './results-table';
+import { RESULTS_FILE_KINDS, type ResultsFileKind } from './results-api-types';
 
 /**
  * An imported results file: never changed after the import, so a check run can name it by its hash. The governing

@@ -20,7 +20,8 @@ import { readyRevision } from './ready-revision';
 import { ResultKey } from './result-key.entity';
 import { ResultMatchingService } from './result-matching.service';
 import { ResultSet } from './result-set.entity';
-import { type ResultSetView, toResultSetView } from './result-views';
+import { toResultSetView } from './result-views';
+import type { ResultSetView } from './results-api-types';
 import type { ResultsImportJobInput, ResultsImportJobOutput } from './results-import.job';
 import { ResultsUploadService } from './results-upload.service';
 

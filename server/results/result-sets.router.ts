@@ -6,7 +6,8 @@ import { currentUser, projectAccessOf, requireProjectPermission } from '../auth/
 import type { AppContext } from '../http/app-context';
 import { inputOf, validate } from '../http/validate';
 import { columnMappingSchema } from './column-mapping';
-import { MATCHING_FILTERS, ResultMatchingService } from './result-matching.service';
+import { ResultMatchingService } from './result-matching.service';
+import { MATCHING_FILTERS } from './results-api-types';
 import { ResultSetService } from './result-set.service';
 
 const projectParams = z.object({ projectId: z.uuid() });

@@ -6,11 +6,10 @@ import fs from 'node:fs/promises';
 import { type Cell, cellText, type DecimalSeparator, isBlankCell, type RawRecord } from './cell-values';
 import { csvRecordChunks } from './csv-records';
 import { type CsvFormat, detectEncoding, firstRecordIsHeader, sniffCsvFormat } from './csv-format';
+import type { ResultsFileKind } from './results-api-types';
 import { ResultsFileError } from './results-file-error';
 import { listXlsxSheets, type XlsxSheet, xlsxRecordChunks } from './xlsx-workbook';
 
-export const RESULTS_FILE_KINDS = ['csv', 'xlsx'] as const;
-export type ResultsFileKind = (typeof RESULTS_FILE_KINDS)[number];
 
 export interface ResultsTableOptions {
   /** XLSX: the sheet to read; required when the workbook has several. */

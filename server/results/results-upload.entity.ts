@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
-import { RESULTS_FILE_KINDS, type ResultsFileKind } from './results-table';
+import { RESULTS_FILE_KINDS, type ResultsFileKind } from './results-api-types';
 
 /** A results file uploaded for preview and mapping; importing it makes a result set that keeps the same file. */
 @Entity({ name: 'results_upload' })

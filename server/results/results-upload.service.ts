@@ -12,7 +12,7 @@ import type { FileStorage } from '../storage/file-storage';
 import { withLocalCopy } from './local-copy';
 import { ResultsFileError, asDomainError } from './results-file-error';
 import { previewResultsFile } from './results-preview';
-import type { ResultsUploadView } from './result-views';
+import type { ResultsUploadView } from './results-api-types';
 import { ResultsUpload } from './results-upload.entity';
 
 export interface ResultsUploadDeps {

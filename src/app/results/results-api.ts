@@ -4,93 +4,26 @@ import { Observable } from 'rxjs';
 import type { ColumnMapping, MemberKeyKind } from '../../../server/results/column-mapping';
 import type { MatchingSummary } from '../../../server/results/matching-summary';
 import type { MatchMethod } from '../../../server/results/member-matching';
+import type {
+  MappingTemplateView,
+  MatchingFilter,
+  MatchingItem,
+  MatchingPage,
+  MemberCandidate,
+  ResultSetView,
+  ResultsUploadView,
+} from '../../../server/results/results-api-types';
+import type { RevisionView } from '../models/models-api';
 
-export type { ColumnMapping, MatchingSummary, MatchMethod, MemberKeyKind };
-
-// Client mirrors of the results API's views (server/results/result-views.ts, result-matching.service.ts,
-// mapping-template.service.ts, server/models/revision-view.ts): those files reach entity classes, which the client
-// build must not compile.
-
+// The API's own types (plain, entity-free server modules), so client and server cannot drift apart.
+export type { ColumnMapping, MatchingFilter, MatchingItem, MatchingPage, MatchingSummary, MatchMethod, MemberCandidate, MemberKeyKind };
 /** `POST …/results/uploads`: a stored file waiting for its mapping, with the head of the chosen sheet. */
-export interface ResultsUpload {
-  id: string;
-  fileName: string;
-  format: 'csv' | 'xlsx';
-  sizeBytes: number;
-  sha256: string;
-  /** Sheet names of a workbook; null for CSV. */
-  sheets: string[] | null;
-  /** The sheet previewed; null when a workbook has several and the user must pick one. */
-  sheet: string | null;
-  delimiter: string | null;
-  decimalSeparator: '.' | ',';
-  headerRow: number | null;
-  headers: string[];
-  /** The first rows, as text. */
-  rows: string[][];
-  guessedMapping: Partial<ColumnMapping>;
-  /** Required mapping fields the header did not reveal. */
-  missingMapping: string[];
-}
-
-export interface ResultSet {
-  id: string;
-  name: string;
-  fileName: string;
-  format: 'csv' | 'xlsx';
-  sheet: string | null;
-  sha256: string;
-  rowCount: number;
-  /** Distinct member keys. */
-  memberKeys: number;
-  combinations: string[];
-  forceUnit: string;
-  mapping: ColumnMapping;
-  createdBy: { id: string; name: string } | null;
-  createdAt: string;
-  modelRevisionId: string;
-  matching: MatchingSummary;
-}
-
-export type MatchingFilter = 'all' | 'matched' | 'ambiguous' | 'unmatched' | 'members-without-results';
-
-export interface MemberCandidate {
-  globalId: string;
-  tag: string | null;
-  name: string | null;
-}
-
-export interface MatchingItem {
-  /** Null on a row of the members-without-results list. */
-  resultKey: string | null;
-  globalId: string | null;
-  tag: string | null;
-  name: string | null;
-  method: MatchMethod | null;
-  candidates: MemberCandidate[];
-}
-
-export interface MatchingPage {
-  summary: MatchingSummary;
-  total: number;
-  items: MatchingItem[];
-}
-
-export interface MappingTemplate {
-  id: string;
-  name: string;
-  mapping: ColumnMapping;
-  createdAt: string;
-}
+export type ResultsUpload = ResultsUploadView;
+export type ResultSet = ResultSetView;
+export type MappingTemplate = MappingTemplateView;
 
 /** What the import form and the check dialog read of a model revision (`GET …/models`). */
-export interface RevisionChoice {
-  id: string;
-  number: number;
-  fileName: string;
-  status: 'queued' | 'ingesting' | 'ready' | 'failed';
-  uploadedAt: string;
-}
+export type RevisionChoice = Pick<RevisionView, 'id' | 'number' | 'fileName' | 'status' | 'uploadedAt'>;
 
 /** One refused row of an import (`422 invalid_rows`): the row number a spreadsheet shows, the file's column. */
 export interface RowError {
@@ -115,8 +48,6 @@ export interface RowErrors {
   errors: RowError[];
   stoppedEarly: boolean;
 }
-
-
 
 /** Writes to `/api/projects/:projectId/results…`; pages read with httpResource. */
 @Injectable({ providedIn: 'root' })
