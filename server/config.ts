@@ -22,6 +22,7 @@ const envSchema = z.object({
   FAKE_SMTP: z.stringbool().optional(),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   UPLOAD_LIMIT_MB: z.coerce.number().int().min(1).max(10240).default(1024),
+  RESULTS_UPLOAD_KEEP_HOURS: z.coerce.number().int().min(1).max(24 * 365).default(72),
   TRUST_PROXY: z.string().min(1).default('false'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEED_DEMO: z.stringbool().optional(),
@@ -47,6 +48,7 @@ export const configDocs: Record<EnvKey, { default: string; description: string }
   FAKE_SMTP: { default: 'true unless NODE_ENV=production', description: 'run the built-in loopback SMTP server that keeps every message in the dev outbox' },
   FAKE_SMTP_PORT: { default: '0', description: 'loopback port of the built-in SMTP server (0 picks a free port)' },
   UPLOAD_LIMIT_MB: { default: '1024', description: 'largest accepted upload (IFC models, result files) in MB' },
+  RESULTS_UPLOAD_KEEP_HOURS: { default: '72', description: 'a shear-results upload not imported by then is removed (its file too, unless a result set uses it)' },
   TRUST_PROXY: { default: 'false', description: 'Express trust proxy: true, false, a hop count or a list of addresses; set it behind a TLS proxy' },
   LOG_LEVEL: { default: 'info', description: 'fatal, error, warn, info, debug, trace or silent' },
   SEED_DEMO: { default: 'true when NODE_ENV=development', description: 'create the demo users and projects at start (skipped when they exist)' },
@@ -80,6 +82,8 @@ export interface Config {
   fakeSmtp: boolean;
   fakeSmtpPort: number;
   uploadLimitMb: number;
+  /** How long a results upload waits to be imported (or imported again) before it is removed. */
+  resultsUploadKeepHours: number;
   trustProxy: boolean | number | string;
   logLevel: LogLevel;
   seedDemo: boolean;
@@ -112,6 +116,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     fakeSmtp: e.FAKE_SMTP ?? nodeEnv !== 'production',
     fakeSmtpPort: e.FAKE_SMTP_PORT,
     uploadLimitMb: e.UPLOAD_LIMIT_MB,
+    resultsUploadKeepHours: e.RESULTS_UPLOAD_KEEP_HOURS,
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
     logLevel: e.LOG_LEVEL,
     seedDemo: e.SEED_DEMO ?? nodeEnv === 'development',

@@ -17,6 +17,7 @@ import { createDomainEvents } from './http/domain-events';
 import { createJobRunner } from './jobs/job-runner';
 import { createMailer } from './mail/mailer';
 import { startFakeSmtpServer } from './outbox/fake-smtp-server';
+import { sweepStaleUploads } from './results/stale-uploads';
 import { LocalFileStorage } from './storage/local-file-storage';
 
 export interface RunningServer {
@@ -81,6 +82,7 @@ export async function startServer(overrides: Partial<Config> = {}): Promise<Runn
       events: createDomainEvents(),
     };
     const demo = config.seedDemo ? await seedDemo({ dataSource, storage, jobs, logger }) : undefined;
+    closers.push(sweepStaleUploads({ dataSource, storage, logger }, config.resultsUploadKeepHours));
     const app = createApp(context);
     const server = await listen(app, config.port, config.host);
     closers.push(() => closeServer(server));

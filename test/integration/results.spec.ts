@@ -5,6 +5,8 @@ import ExcelJS from 'exceljs';
 import type { MemberRecord } from '../../server/ifc/model-read-result';
 import { ResultKey } from '../../server/results/result-key.entity';
 import { ResultSet } from '../../server/results/result-set.entity';
+import { ResultsUpload } from '../../server/results/results-upload.entity';
+import { removeStaleUploads } from '../../server/results/stale-uploads';
 import type { ApiAgent } from '../fixtures/api-agent';
 import { fixturePath } from '../fixtures/results/result-files';
 import { type TestApp, startTestApp } from '../fixtures/test-app';
@@ -347,6 +349,35 @@ describe('shear results', () => {
     it('refuses a mapping with a station column but no length unit', async () => {
       const response = await coordinator.post(mappingsUrl(projectId)).send({ name: 'Broken', mapping: { ...DEFAULT_MAPPING, stationColumn: 'x' } }).expect(400);
       expect(response.body.error.details).toEqual([{ location: 'body', field: 'mapping.lengthUnit', message: 'choose the length unit of the station and coordinate columns' }]);
+    });
+  });
+
+  describe('uploads never imported', () => {
+    const HOUR_MS = 3_600_000;
+
+    it('go after the keep time with their file; the file of an imported set stays with the set', async () => {
+      const uploads = app.dataSource.getRepository(ResultsUpload);
+      const csv = resultsCsv([[members[0].tag!, 'ULS-1', 12]]);
+      const abandoned = (await uploadResults(coordinator, projectId, csv, 'abandoned.csv').expect(201)).body.upload;
+      const kept = await importResults(coordinator, projectId, revision.id, resultsCsv([[members[1].tag!, 'ULS-1', 14]]), { name: 'Kept after the sweep' });
+      const keptFile = (await app.dataSource.getRepository(ResultSet).findOneByOrFail({ id: kept.id })).fileKey;
+      const keptUpload = await uploads.findOneByOrFail({ fileKey: keptFile });
+      const fresh = (await uploadResults(coordinator, projectId, csv, 'fresh.csv').expect(201)).body.upload;
+      for (const id of [abandoned.id, keptUpload.id]) await uploads.update({ id }, { createdAt: new Date(Date.now() - 100 * HOUR_MS) });
+
+      const removed = await removeStaleUploads({ dataSource: app.dataSource, storage: app.server.context.storage }, new Date(Date.now() - 72 * HOUR_MS));
+
+      expect(removed).toBe(2);
+      expect(await uploads.existsBy({ id: abandoned.id })).toBe(false);
+      expect(await uploads.existsBy({ id: keptUpload.id })).toBe(false);
+      expect(await uploads.existsBy({ id: fresh.id })).toBe(true);
+      const files = storedResultFiles(app, projectId);
+      expect(files).not.toContain(`uploads/${abandoned.id}.csv`);
+      expect(files).toContain(`uploads/${keptUpload.id}.csv`);
+      expect(files).toContain(`uploads/${fresh.id}.csv`);
+      const gone = await coordinator.get(`${resultsUrl(projectId)}/uploads/${abandoned.id}/preview`).expect(404);
+      expect(gone.body.error.code).toBe('upload_not_found');
+      await coordinator.get(`${resultsUrl(projectId)}/${kept.id}`).expect(200);
     });
   });
 });
