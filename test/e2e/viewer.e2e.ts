@@ -205,8 +205,9 @@ test('the engineer sees the demo model coloured by utilisation, opens a failing 
   }
   await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-3d-view-only-failing.png') });
 
-  // The cautions stay on screen with the results.
-  await page.locator('tl-viewer-workspace tl-cautions-notice').waitFor();
+  // The cautions stay on screen with the results (the frame's footer, under every page).
+  await page.locator('footer.frame-footer tl-cautions-notice').waitFor();
+  expect(await page.locator('footer.frame-footer tl-cautions-notice').isVisible()).toBe(true);
 });
 
 test('links open the view on a member or a finding, and a finding raised from the selection keeps the view and its picture', async () => {

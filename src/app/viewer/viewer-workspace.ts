@@ -13,7 +13,6 @@ import {
   untracked,
   viewChild,
 } from '@angular/core';
-import { CautionsNotice } from '../core/cautions-notice/cautions-notice';
 import { BlobDownload } from './blob-download';
 import type { Projection } from './camera-rig';
 import type { ColourMode } from './member-colouring';
@@ -36,7 +35,7 @@ const TOOLTIP_ROOM_PX = { x: 240, y: 140 };
  */
 @Component({
   selector: 'tl-viewer-workspace',
-  imports: [CautionsNotice, ViewerCanvas, ViewerLegend, ViewerStats, ViewerToolbar, ViewerTooltip],
+  imports: [ViewerCanvas, ViewerLegend, ViewerStats, ViewerToolbar, ViewerTooltip],
   templateUrl: './viewer-workspace.html',
   styleUrl: './viewer-workspace.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
