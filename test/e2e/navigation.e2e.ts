@@ -85,6 +85,15 @@ test('a coordinator edits the project, uploads models and manages members, but h
   await page.getByRole('heading', { name: 'Before you rely on a result' }).waitFor();
   await page.screenshot({ path: path.join(SCREENSHOTS, 'taulens-overview-coordinator.png'), fullPage: true });
 
+  // The national annex of the project: γM0 kept with the project for every later check run.
+  await page.getByRole('button', { name: 'Edit check defaults' }).click();
+  const defaults = page.getByRole('form', { name: 'Edit check defaults' });
+  await defaults.getByLabel('γM0').fill('1.05');
+  await defaults.getByRole('button', { name: 'Save check defaults' }).click();
+  await page.getByRole('button', { name: 'Edit check defaults' }).waitFor();
+  await page.reload();
+  await page.getByRole('region', { name: 'Check defaults' }).getByText('1.05').waitFor();
+
   await openSection('Models', 'Models');
   await page.getByRole('button', { name: 'Choose IFC file' }).waitFor();
   expect(await count('button', 'Upload revision')).toBe(1);
@@ -108,6 +117,8 @@ test('an engineer runs checks but neither edits the project nor uploads', async 
   expect(await linkLabels('Project sections')).toEqual(ALL_SECTIONS);
   expect(await count('button', 'Edit details')).toBe(0);
   expect(await count('button', 'Archive project')).toBe(0);
+  await page.getByRole('region', { name: 'Check defaults' }).waitFor();
+  expect(await count('button', 'Edit check defaults')).toBe(0);
 
   await openSection('Checks', 'Checks');
   await page.getByRole('button', { name: 'Start a check' }).waitFor();

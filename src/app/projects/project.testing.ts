@@ -18,6 +18,7 @@ export const TEST_PROJECT: Project = {
   client: 'Port authority',
   location: 'Pier 2',
   standard: 'en1993-1-1',
+  settings: { defaultGrade: 'S355', gammaM0: 1, gammaM1: 1, eta: 1.2, warningBand: 0.9 },
   archived: false,
   createdAt: '2026-03-02T08:00:00Z',
 };

@@ -1,4 +1,7 @@
+import type { ProjectSettings } from '../../../server/projects/project-settings';
 import { ProjectAction, ProjectRole } from '../core/permissions';
+
+export type { ProjectSettings };
 
 export type StandardId = 'aisc360-22-lrfd' | 'aisc360-22-asd' | 'en1993-1-1';
 
@@ -27,6 +30,8 @@ export interface Project {
   client: string;
   location: string;
   standard: StandardId;
+  /** Starting values of every new check run (national-annex factors, default grade, warning band). */
+  settings: ProjectSettings;
   archived: boolean;
   createdAt: string;
   role?: ProjectRole | null;
@@ -48,6 +53,9 @@ export interface ProjectDraft {
   location?: string;
   standard?: StandardId;
 }
+
+/** Body of `PATCH /api/projects/:projectId`: changed details and check defaults. */
+export type ProjectChanges = Partial<ProjectDraft> & { settings?: Partial<ProjectSettings> };
 
 export interface Member {
   userId: string;

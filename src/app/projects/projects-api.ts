@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { map, Observable } from 'rxjs';
-import { Project, ProjectDraft } from './project';
+import { Project, ProjectChanges, ProjectDraft } from './project';
 
 /** Writes to `/api/projects`; screens read with httpResource. */
 @Injectable({ providedIn: 'root' })
@@ -12,7 +12,7 @@ export class ProjectsApi {
     return this.http.post<{ project: Project }>('/api/projects', draft).pipe(map((body) => body.project));
   }
 
-  update(projectId: string, changes: Partial<ProjectDraft>): Observable<Project> {
+  update(projectId: string, changes: ProjectChanges): Observable<Project> {
     return this.http
       .patch<{ project: Project }>(`/api/projects/${encodeURIComponent(projectId)}`, changes)
       .pipe(map((body) => body.project));

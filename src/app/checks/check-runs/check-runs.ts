@@ -12,7 +12,6 @@ import { errorMessage } from '../../core/api-error';
 import { CautionsNotice } from '../../core/cautions-notice/cautions-notice';
 import { ProjectContext } from '../../projects/project-context';
 import { CheckRun, checksUrl, isActive, RUN_STATUS_NAMES } from '../checks-api';
-import type { ProjectSettings } from '../check-parameter-fields';
 import { backgroundContext, reloadWhile } from '../reload-while';
 import { StartCheckData, StartCheckDialog } from '../start-check-dialog/start-check-dialog';
 
@@ -58,8 +57,7 @@ export class CheckRuns {
   protected startCheck(): void {
     const project = this.context.project();
     if (!project) return;
-    // The project answer carries the check defaults (server/projects/project-views.ts); the client type does not yet.
-    const settings = (project as { settings?: Partial<ProjectSettings> }).settings;
+    const settings = project.settings;
     this.dialog
       .open<StartCheckDialog, StartCheckData, CheckRun>(StartCheckDialog, {
         data: { projectId: project.id, standard: project.standard, settings },

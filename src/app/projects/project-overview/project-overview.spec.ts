@@ -65,4 +65,61 @@ describe('ProjectOverview', () => {
     expect(page.querySelector('h1')?.textContent).toBe('Ferry terminal canopy, east');
     expect(page.querySelector('.edit-form')).toBeNull();
   });
+
+  describe('check defaults', () => {
+    const values = (page: HTMLElement) =>
+      [...page.querySelectorAll('tl-project-check-defaults dl div')].map((d) => [d.querySelector('dt')!.textContent!.trim(), d.querySelector('dd')!.textContent!.trim()]);
+    const setField = (page: HTMLElement, name: string, value: string) => {
+      const field = page.querySelector<HTMLInputElement>(`tl-project-check-defaults input[formcontrolname=${name}]`)!;
+      field.value = value;
+      field.dispatchEvent(new Event('input'));
+    };
+
+    it('shows every member the defaults of new check runs, with the EN factors for an EN project', async () => {
+      const page = await open('engineer');
+      expect(values(page)).toEqual([
+        ['Default grade', 'S355'],
+        ['γM0', '1.00'],
+        ['γM1', '1.00'],
+        ['η', '1.20'],
+        ['Near the limit from', '90 %'],
+      ]);
+      expect(page.querySelector('tl-project-check-defaults button')).toBeNull();
+    });
+
+    it('leaves out the EN factors for an AISC project', async () => {
+      const page = await open('engineer', ROLE_ACTIONS.engineer, { ...project, standard: 'aisc360-22-lrfd', settings: { ...project.settings, defaultGrade: 'A992' } });
+      expect(values(page)).toEqual([
+        ['Default grade', 'A992'],
+        ['Near the limit from', '90 %'],
+      ]);
+    });
+
+    it('lets a coordinator set national-annex factors, refusing values out of range', async () => {
+      const page = await open('coordinator');
+      page.querySelector<HTMLButtonElement>('tl-project-check-defaults button')!.click();
+      await settle();
+      setField(page, 'gammaM0', '1.6');
+      page.querySelector<HTMLButtonElement>('tl-project-check-defaults button[type=submit]')!.click();
+      await settle();
+      // Nothing sent: γM0 above 1.5 is refused in the form, as the server would.
+      backend.expectNone({ method: 'PATCH' });
+      expect(page.querySelector('tl-project-check-defaults mat-error')?.textContent).toContain('Between 1 and 1.5');
+
+      setField(page, 'gammaM0', '1.05');
+      setField(page, 'gammaM1', '1.1');
+      setField(page, 'warningPercent', '85');
+      page.querySelector<HTMLButtonElement>('tl-project-check-defaults button[type=submit]')!.click();
+      (await nextRequest(backend, CSRF_TOKEN_URL)).flush({ token: 't' });
+      const patch = await nextRequest(backend, { method: 'PATCH', url: `/api/projects/${TEST_PROJECT_ID}` });
+      expect(patch.request.body).toEqual({ settings: { defaultGrade: 'S355', warningBand: 0.85, gammaM0: 1.05, gammaM1: 1.1, eta: 1.2 } });
+      const saved = { ...project, settings: { ...project.settings, gammaM0: 1.05, gammaM1: 1.1, warningBand: 0.85 } };
+      patch.flush({ project: saved });
+      (await nextRequest(backend, `/api/projects/${TEST_PROJECT_ID}`)).flush({ project: saved, role: 'coordinator', permissions: ROLE_ACTIONS.coordinator });
+      (await nextRequest(backend, '/api/auth/me')).flush(meFor('coordinator'));
+      await settle();
+      expect(values(page)).toContainEqual(['γM0', '1.05']);
+      expect(values(page)).toContainEqual(['Near the limit from', '85 %']);
+    });
+  });
 });

@@ -10,14 +10,15 @@ import { CautionsNotice } from '../../core/cautions-notice/cautions-notice';
 import { askToConfirm } from '../../core/confirm-dialog/confirm-dialog';
 import { ROLE_LABELS } from '../../core/permissions';
 import { Project, standardLabel } from '../project';
+import { ProjectCheckDefaults } from '../project-check-defaults/project-check-defaults';
 import { ProjectContext } from '../project-context';
 import { createProjectForm, ProjectFields, ProjectForm, projectDraftOf } from '../project-fields/project-fields';
 import { ProjectsApi } from '../projects-api';
 
-/** The project's details, editable by coordinators, with archiving and the cautions. */
+/** The project's details and check defaults, editable by coordinators, with archiving and the cautions. */
 @Component({
   selector: 'tl-project-overview',
-  imports: [DatePipe, ReactiveFormsModule, MatButtonModule, MatIconModule, CautionsNotice, ProjectFields],
+  imports: [DatePipe, ReactiveFormsModule, MatButtonModule, MatIconModule, CautionsNotice, ProjectCheckDefaults, ProjectFields],
   templateUrl: './project-overview.html',
   styleUrl: './project-overview.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
