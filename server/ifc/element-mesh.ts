@@ -23,7 +23,10 @@ const ARENA_ELEMENTS = 4 * 1024 * 1024;
 
 type TypedArrayOf<T> = T extends Float32Array ? Float32ArrayConstructor : T extends Uint16Array ? Uint16ArrayConstructor : Uint32ArrayConstructor;
 
-/** Hands out views into large arrays of one element type. */
+/**
+ * Hands out views into large arrays of one element type. The element being built is written in place at the arena's
+ * tail (`reserve`, then `close`), so finishing it copies nothing.
+ */
 class Arena<T extends Float32Array | Uint16Array | Uint32Array> {
   private current: T;
   private used = 0;
@@ -32,14 +35,35 @@ class Arena<T extends Float32Array | Uint16Array | Uint32Array> {
     this.current = new make(ARENA_ELEMENTS) as T;
   }
 
-  take(length: number): T {
-    if (this.used + length > this.current.length) {
-      this.current = new this.make(Math.max(ARENA_ELEMENTS, length)) as T;
+  /** Where the open element starts in the array `reserve` returns. */
+  get start(): number {
+    return this.used;
+  }
+
+  /**
+   * The array to write the open element into, with room for `total` elements from `start`; when the current array is
+   * too short, the `kept` elements already written move to a fresh one.
+   */
+  reserve(kept: number, total: number): T {
+    if (this.used + total > this.current.length) {
+      const fresh = new this.make(Math.max(ARENA_ELEMENTS, 2 * total)) as T;
+      fresh.set(this.current.subarray(this.used, this.used + kept));
+      this.current = fresh;
       this.used = 0;
     }
+    return this.current;
+  }
+
+  /** Ends the open element at `length` elements and returns it. */
+  close(length: number): T {
     const view = this.current.subarray(this.used, this.used + length) as T;
     this.used += length;
     return view;
+  }
+
+  take(length: number): T {
+    this.reserve(0, length);
+    return this.close(length);
   }
 }
 
@@ -67,9 +91,11 @@ function isRotationWithUniformScale(m: Mat4): boolean {
   );
 }
 
-/** Accumulates the pieces of one element at a time in reused scratch arrays. */
+/**
+ * Accumulates the pieces of one element at a time: vertices straight into the store's arena, indices in a reused
+ * scratch array (whether they fit 16 bits is known only when the element is complete).
+ */
 export class ElementMeshBuilder {
-  private vertices = new Float32Array(64 * 1024);
   private indices = new Uint32Array(64 * 1024);
   private vertexCount = 0;
   private indexCount = 0;
@@ -81,12 +107,7 @@ export class ElementMeshBuilder {
     private readonly store: MeshStore,
   ) {}
 
-  private reserve(floats: number, indices: number): void {
-    if (floats > this.vertices.length) {
-      const grown = new Float32Array(Math.max(floats, 2 * this.vertices.length));
-      grown.set(this.vertices.subarray(0, this.vertexCount * FLOATS_PER_VERTEX));
-      this.vertices = grown;
-    }
+  private reserveIndices(indices: number): void {
     if (indices > this.indices.length) {
       const grown = new Uint32Array(Math.max(indices, 2 * this.indices.length));
       grown.set(this.indices.subarray(0, this.indexCount));
@@ -102,20 +123,19 @@ export class ElementMeshBuilder {
     const count = source.length / FLOATS_PER_VERTEX;
     if (count === 0 || sourceIndices.length === 0) return;
     const base = this.vertexCount;
-    this.reserve((base + count) * FLOATS_PER_VERTEX, this.indexCount + sourceIndices.length);
+    const out = this.store.vertices.reserve(base * FLOATS_PER_VERTEX, (base + count) * FLOATS_PER_VERTEX);
+    this.reserveIndices(this.indexCount + sourceIndices.length);
     const m = transform as Mat4;
     const [m0, m1, m2, m4, m5, m6, m8, m9, m10] = [m[0], m[1], m[2], m[4], m[5], m[6], m[8], m[9], m[10]];
     const tx = m[12] - this.offset[0];
     const ty = m[13] - this.offset[1];
     const tz = m[14] - this.offset[2];
-    const n = normalMatrix(m);
     // A rotation with a uniform scale (nearly every placement) keeps unit normals unit after the scale is divided out.
     const uniform = isRotationWithUniformScale(m);
     const unitScale = uniform ? 1 / Math.hypot(m0, m1, m2) : 1;
-    const [n0, n1, n2, n3, n4, n5, n6, n7, n8] = uniform ? [m0, m1, m2, m4, m5, m6, m8, m9, m10].map((v) => v * unitScale) : Array.from(n);
-    const out = this.vertices;
+    const [n0, n1, n2, n3, n4, n5, n6, n7, n8] = uniform ? [m0, m1, m2, m4, m5, m6, m8, m9, m10].map((v) => v * unitScale) : Array.from(normalMatrix(m));
     let [minX, minY, minZ, maxX, maxY, maxZ] = this.bounds;
-    let o = base * FLOATS_PER_VERTEX;
+    let o = this.store.vertices.start + base * FLOATS_PER_VERTEX;
     for (let v = 0; v < source.length; v += FLOATS_PER_VERTEX, o += FLOATS_PER_VERTEX) {
       const x = source[v];
       const y = source[v + 1];
@@ -159,8 +179,7 @@ export class ElementMeshBuilder {
   take(expressId: number): ElementMesh | undefined {
     const floats = this.vertexCount * FLOATS_PER_VERTEX;
     if (floats === 0) return undefined;
-    const vertices = this.store.vertices.take(floats);
-    vertices.set(this.vertices.subarray(0, floats));
+    const vertices = this.store.vertices.close(floats);
     const indices = this.vertexCount <= 0xffff ? this.store.shortIndices.take(this.indexCount) : this.store.longIndices.take(this.indexCount);
     indices.set(this.indices.subarray(0, this.indexCount));
     const [minX, minY, minZ, maxX, maxY, maxZ] = this.bounds;
