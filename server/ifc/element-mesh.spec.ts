@@ -43,6 +43,33 @@ describe('element mesh builder', () => {
     expect(nz).toBeCloseTo(0, 12);
   });
 
+
+  it('carries normals through a non-uniform scale by the inverse transpose and renormalises them', () => {
+    // Stretching X by 2 tilts a face's normal (1, 1, 0)/√2 to (1/2, 1, 0)/|…| = (1, 2, 0)/√5 (normals transform by
+    // the inverse transpose; common practice, no source).
+    const builder = new ElementMeshBuilder([0, 0, 0], new MeshStore());
+    const piece = triangle();
+    piece.vertices.set([Math.SQRT1_2, Math.SQRT1_2, 0], 3);
+    builder.add(piece.vertices, piece.indices, Float64Array.of(2, 0, 0, 0, 0, 1, 0, 0, 0, 0, 1, 0, 0, 0, 0, 1));
+    const mesh = builder.take(2)!;
+    expect(vertex(mesh, 1).slice(0, 3)).toEqual([2, 0, 0]);
+    const [nx, ny, nz] = vertex(mesh, 0).slice(3);
+    expect(nx).toBeCloseTo(1 / Math.sqrt(5), 6);
+    expect(ny).toBeCloseTo(2 / Math.sqrt(5), 6);
+    expect(nz).toBe(0);
+    expect(vertex(mesh, 2).slice(3)).toEqual([0, 0, 1]);
+  });
+
+  it('gives the same vertices for a transform as a plain array (web-ifc) and as a Float64Array (our own meshes)', () => {
+    const piece = triangle();
+    const place = (transform: number[] | Float64Array) => {
+      const builder = new ElementMeshBuilder([1, 0, 0], new MeshStore());
+      builder.add(piece.vertices, piece.indices, transform);
+      return Array.from(builder.take(1)!.vertices);
+    };
+    const turnAndShift = QUARTER_TURN_Z.map((v, i) => (i >= 12 && i < 15 ? 3 + i : v));
+    expect(place(Float64Array.from(turnAndShift))).toEqual(place(turnAndShift));
+  });
   it('merges the pieces of one element, indices shifted to each piece’s vertices', () => {
     const builder = new ElementMeshBuilder([0, 0, 0], new MeshStore());
     const piece = triangle();

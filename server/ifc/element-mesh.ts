@@ -99,7 +99,9 @@ export class ElementMeshBuilder {
   private indices = new Uint32Array(64 * 1024);
   private vertexCount = 0;
   private indexCount = 0;
-  private bounds = EMPTY_BOUNDS;
+  private readonly bounds = Float64Array.from(EMPTY_BOUNDS);
+  private readonly transform: Mat4 = new Float64Array(16);
+  private readonly normals = new Float64Array(9);
 
   /** `offset` is subtracted after transforming (glTF axes, metres). */
   constructor(
@@ -125,43 +127,19 @@ export class ElementMeshBuilder {
     const base = this.vertexCount;
     const out = this.store.vertices.reserve(base * FLOATS_PER_VERTEX, (base + count) * FLOATS_PER_VERTEX);
     this.reserveIndices(this.indexCount + sourceIndices.length);
-    const m = transform as Mat4;
-    const [m0, m1, m2, m4, m5, m6, m8, m9, m10] = [m[0], m[1], m[2], m[4], m[5], m[6], m[8], m[9], m[10]];
-    const tx = m[12] - this.offset[0];
-    const ty = m[13] - this.offset[1];
-    const tz = m[14] - this.offset[2];
+    // One array type from here on: web-ifc hands plain arrays, our own meshes Float64Arrays, and mixing the two in
+    // the loops below made every call slower.
+    const m = this.transform;
+    for (let i = 0; i < 16; i++) m[i] = transform[i];
     // A rotation with a uniform scale (nearly every placement) keeps unit normals unit after the scale is divided out.
+    const normals = this.normals;
     const uniform = isRotationWithUniformScale(m);
-    const unitScale = uniform ? 1 / Math.hypot(m0, m1, m2) : 1;
-    const [n0, n1, n2, n3, n4, n5, n6, n7, n8] = uniform ? [m0, m1, m2, m4, m5, m6, m8, m9, m10].map((v) => v * unitScale) : Array.from(normalMatrix(m));
-    let [minX, minY, minZ, maxX, maxY, maxZ] = this.bounds;
-    let o = this.store.vertices.start + base * FLOATS_PER_VERTEX;
-    for (let v = 0; v < source.length; v += FLOATS_PER_VERTEX, o += FLOATS_PER_VERTEX) {
-      const x = source[v];
-      const y = source[v + 1];
-      const z = source[v + 2];
-      const px = (out[o] = m0 * x + m4 * y + m8 * z + tx);
-      const py = (out[o + 1] = m1 * x + m5 * y + m9 * z + ty);
-      const pz = (out[o + 2] = m2 * x + m6 * y + m10 * z + tz);
-      // Bounds of the stored (32-bit) values, as glTF's accessor min/max must be.
-      if (px < minX) minX = px;
-      if (px > maxX) maxX = px;
-      if (py < minY) minY = py;
-      if (py > maxY) maxY = py;
-      if (pz < minZ) minZ = pz;
-      if (pz > maxZ) maxZ = pz;
-      const a = source[v + 3];
-      const b = source[v + 4];
-      const c = source[v + 5];
-      const nx = n0 * a + n3 * b + n6 * c;
-      const ny = n1 * a + n4 * b + n7 * c;
-      const nz = n2 * a + n5 * b + n8 * c;
-      const length = uniform ? 1 : Math.sqrt(nx * nx + ny * ny + nz * nz) || 1;
-      out[o + 3] = nx / length;
-      out[o + 4] = ny / length;
-      out[o + 5] = nz / length;
-    }
-    this.bounds = [minX, minY, minZ, maxX, maxY, maxZ];
+    if (uniform) {
+      const unitScale = 1 / Math.hypot(m[0], m[1], m[2]);
+      for (let i = 0; i < 9; i++) normals[i] = m[i + Math.floor(i / 3)] * unitScale;
+    } else normals.set(normalMatrix(m));
+    const first = this.store.vertices.start + base * FLOATS_PER_VERTEX;
+    this.transformVertices(source, out, first, m, normals, !uniform);
     const indices = this.indices;
     let at = this.indexCount;
     // A mirroring transform turns faces inside out; swap two corners of each triangle to turn them back.
@@ -175,6 +153,55 @@ export class ElementMeshBuilder {
     this.indexCount = at;
   }
 
+  /** Writes `source` transformed into `out` from `first`, widening the bounds; `renormalise` for non-uniform scales. */
+  private transformVertices(source: Float32Array, out: Float32Array, first: number, m: Float64Array, n: Float64Array, renormalise: boolean): void {
+    const m0 = m[0], m1 = m[1], m2 = m[2], m4 = m[4], m5 = m[5], m6 = m[6], m8 = m[8], m9 = m[9], m10 = m[10];
+    const n0 = n[0], n1 = n[1], n2 = n[2], n3 = n[3], n4 = n[4], n5 = n[5], n6 = n[6], n7 = n[7], n8 = n[8];
+    const tx = m[12] - this.offset[0];
+    const ty = m[13] - this.offset[1];
+    const tz = m[14] - this.offset[2];
+    const bounds = this.bounds;
+    let minX = bounds[0], minY = bounds[1], minZ = bounds[2], maxX = bounds[3], maxY = bounds[4], maxZ = bounds[5];
+    for (let v = 0, o = first; v < source.length; v += FLOATS_PER_VERTEX, o += FLOATS_PER_VERTEX) {
+      const x = source[v];
+      const y = source[v + 1];
+      const z = source[v + 2];
+      const px = m0 * x + m4 * y + m8 * z + tx;
+      const py = m1 * x + m5 * y + m9 * z + ty;
+      const pz = m2 * x + m6 * y + m10 * z + tz;
+      out[o] = px;
+      out[o + 1] = py;
+      out[o + 2] = pz;
+      if (px < minX) minX = px;
+      if (px > maxX) maxX = px;
+      if (py < minY) minY = py;
+      if (py > maxY) maxY = py;
+      if (pz < minZ) minZ = pz;
+      if (pz > maxZ) maxZ = pz;
+      const a = source[v + 3];
+      const b = source[v + 4];
+      const c = source[v + 5];
+      let nx = n0 * a + n3 * b + n6 * c;
+      let ny = n1 * a + n4 * b + n7 * c;
+      let nz = n2 * a + n5 * b + n8 * c;
+      if (renormalise) {
+        const inverseLength = 1 / (Math.sqrt(nx * nx + ny * ny + nz * nz) || 1);
+        nx *= inverseLength;
+        ny *= inverseLength;
+        nz *= inverseLength;
+      }
+      out[o + 3] = nx;
+      out[o + 4] = ny;
+      out[o + 5] = nz;
+    }
+    bounds[0] = minX;
+    bounds[1] = minY;
+    bounds[2] = minZ;
+    bounds[3] = maxX;
+    bounds[4] = maxY;
+    bounds[5] = maxZ;
+  }
+
   /** The merged mesh of the pieces added since the last call (undefined when there were none). */
   take(expressId: number): ElementMesh | undefined {
     const floats = this.vertexCount * FLOATS_PER_VERTEX;
@@ -185,7 +212,7 @@ export class ElementMeshBuilder {
     const [minX, minY, minZ, maxX, maxY, maxZ] = this.bounds;
     const min: [number, number, number] = [Math.fround(minX), Math.fround(minY), Math.fround(minZ)];
     const max: [number, number, number] = [Math.fround(maxX), Math.fround(maxY), Math.fround(maxZ)];
-    this.bounds = EMPTY_BOUNDS;
+    this.bounds.set(EMPTY_BOUNDS);
     this.vertexCount = 0;
     this.indexCount = 0;
     return { expressId, vertices, indices, min, max };
