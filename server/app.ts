@@ -5,7 +5,7 @@ import { AuthService } from './auth/auth.service';
 import { type PassportInstance, createPassport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import { checkRunsRouter } from './checks/check-runs.router';
-import { usesTls } from './config';
+import { servesDevOutbox, usesTls } from './config';
 import { findingExportsRouter } from './findings/finding-exports.router';
 import { findingsRouter } from './findings/findings.router';
 import { runReportRouter } from './findings/run-report.router';
@@ -52,7 +52,7 @@ function featureRouters(ctx: AppContext, deps: ApiDeps): [path: string, router: 
     ['/projects/:projectId/viewpoints', savedViewpointsRouter(ctx)],
     ['/projects/:projectId/checks/:runId/report.pdf', runReportRouter(ctx)],
     ['/notifications', notificationsRouter(ctx)],
-    ...(ctx.config.fakeSmtp ? ([['/dev', outboxRouter(ctx.dataSource)]] as [string, Router][]) : []),
+    ...(servesDevOutbox(ctx.config) ? ([['/dev', outboxRouter(ctx.dataSource)]] as [string, Router][]) : []),
   ];
 }
 

@@ -1,5 +1,5 @@
 import path from 'node:path';
-import { ConfigError, configDocs, loadConfig, usesTls } from './config';
+import { ConfigError, configDocs, loadConfig, servesDevOutbox, usesTls } from './config';
 
 describe('loadConfig', () => {
   it('runs with nothing set, using the documented defaults', () => {
@@ -75,6 +75,14 @@ describe('loadConfig', () => {
         description: true,
       });
     }
+  });
+});
+
+describe('servesDevOutbox', () => {
+  it('serves the outbox of caught mail only outside production, with the fake SMTP server on', () => {
+    expect(servesDevOutbox(loadConfig({}))).toBe(true);
+    expect(servesDevOutbox(loadConfig({ FAKE_SMTP: 'false' }))).toBe(false);
+    expect(servesDevOutbox(loadConfig({ NODE_ENV: 'production', FAKE_SMTP: 'true' }))).toBe(false);
   });
 });
 

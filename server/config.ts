@@ -128,6 +128,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
   };
 }
 
+/**
+ * The dev outbox (GET /api/dev/outbox) holds every caught e-mail, reset and invitation links included: it exists only
+ * outside production, with the built-in SMTP server on, and only site admins may read it.
+ */
+export function servesDevOutbox(config: Pick<Config, 'fakeSmtp' | 'nodeEnv'>): boolean {
+  return config.fakeSmtp && config.nodeEnv !== 'production';
+}
+
 /** Secure cookies and HSTS follow the address users open, not the socket (a TLS proxy may sit in front). */
 export function usesTls(config: Pick<Config, 'publicUrl'>): boolean {
   return new URL(config.publicUrl).protocol === 'https:';

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
+import { servesDevOutbox } from '../config';
 import type { AppContext } from '../http/app-context';
 import type { CsrfProtection } from '../http/csrf';
 import { resetRequestRateLimit, signInRateLimits, tokenLinkRateLimit } from '../http/rate-limits';
@@ -46,7 +47,7 @@ export function authRouter(ctx: AppContext, deps: { passport: PassportInstance; 
   });
 
   router.get('/me', requireSignedIn, async (req, res) => {
-    res.json(await auth.describeSession(currentUser(req), ctx.config.fakeSmtp));
+    res.json(await auth.describeSession(currentUser(req), servesDevOutbox(ctx.config)));
   });
 
   router.get('/invitations/:token', tokenLimit, validate(tokenInput), async (_req, res) => {

@@ -52,7 +52,8 @@ export class AuthService {
     return user && user.active && user.sessionVersion === sessionVersion ? user : null;
   }
 
-  async describeSession(user: SignedInUser, devOutbox: boolean): Promise<SessionView> {
+  /** `outboxServed`: the server runs its dev outbox; only a site admin is told so (only they may read it). */
+  async describeSession(user: SignedInUser, outboxServed: boolean): Promise<SessionView> {
     const members = await this.dataSource.getRepository(ProjectMember).find({
       where: { userId: user.id },
       relations: { project: true },
@@ -70,7 +71,7 @@ export class AuthService {
       memberships,
       permissions,
       canCreateProjects: canCreateProjects(user, memberships.map((m) => m.role)),
-      devOutbox,
+      devOutbox: outboxServed && user.isAdmin,
     };
   }
 }

@@ -44,9 +44,10 @@ export const appRoutes: Routes = [
     loadComponent: () => import('./admin/user-admin/user-admin').then((m) => m.UserAdmin),
   },
   {
-    // The server answers 404 unless its development mail server is on; the page says so.
+    // Site admins only; the server answers 404 unless its development mail server is on, and the page says so.
     path: 'dev/outbox',
     title: 'Outbox',
+    canActivate: [adminGuard],
     loadComponent: () => import('./outbox/outbox/outbox').then((m) => m.Outbox),
   },
   {

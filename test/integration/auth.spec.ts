@@ -61,7 +61,7 @@ describe('sign-in and session', () => {
           [project.id]: ['project.read', 'model.read', 'check.run', 'check.read', 'finding.create', 'finding.resolve', 'finding.comment', 'export'],
         },
         canCreateProjects: false,
-        devOutbox: true,
+        devOutbox: false,
       });
       expect(me.body.user).not.toHaveProperty('passwordHash');
     });

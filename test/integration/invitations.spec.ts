@@ -166,8 +166,9 @@ describe('invitations', () => {
     }
   });
 
-  it('lists received mail in the dev outbox, open without sign-in', async () => {
-    const response = await request(app.url).get('/api/dev/outbox').expect(200);
+  it('lists received mail in the dev outbox to site admins only', async () => {
+    const admin = await adminAgent();
+    const response = await admin.get('/api/dev/outbox').expect(200);
     expect(response.body.messages.length).toBeGreaterThan(0);
     expect(response.body.messages[0]).toEqual({
       id: expect.any(String),
@@ -178,5 +179,29 @@ describe('invitations', () => {
       html: expect.any(String),
       receivedAt: expect.any(String),
     });
+  });
+
+  it('keeps password-reset links out of reach: no outbox for anonymous callers or other users (account takeover)', async () => {
+    const victim = await createUser(app.dataSource, { name: 'Vera Victim' });
+    const anonymous = await app.agent();
+    await anonymous.post('/api/auth/password-reset').send({ email: victim.email }).expect(202);
+    const anonymousRead = await anonymous.get('/api/dev/outbox').expect(401);
+    expect(JSON.stringify(anonymousRead.body)).not.toContain('reset-password');
+    const someoneElse = await app.signIn(await createUser(app.dataSource));
+    const otherRead = await someoneElse.get('/api/dev/outbox').expect(403);
+    expect(JSON.stringify(otherRead.body)).not.toContain('reset-password');
+    expect((await someoneElse.get('/api/auth/me').expect(200)).body.devOutbox).toBe(false);
+    expect((await (await adminAgent()).get('/api/auth/me').expect(200)).body.devOutbox).toBe(true);
+  });
+
+  it('serves no outbox in production even with the fake SMTP server on', async () => {
+    const production = await startTestApp({ nodeEnv: 'production' });
+    try {
+      const admin = await production.signIn(await createUser(production.dataSource, { isAdmin: true }));
+      await admin.get('/api/dev/outbox').expect(404);
+      expect((await admin.get('/api/auth/me').expect(200)).body.devOutbox).toBe(false);
+    } finally {
+      await production.close();
+    }
   });
 });

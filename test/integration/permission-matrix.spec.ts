@@ -63,7 +63,7 @@ const CASES: Case[] = [
     send: (a, s) => a.post('/api/auth/password-reset').send({ email: `nobody-${s.unique}@example.test` }),
     expected: [202, 202, 202, 202, 202, 202],
   },
-  { route: 'GET /api/dev/outbox', send: (a) => a.get('/api/dev/outbox'), expected: [200, 200, 200, 200, 200, 200] },
+  { route: 'GET /api/dev/outbox', send: (a) => a.get('/api/dev/outbox'), expected: [401, 403, 403, 403, 403, 200] },
 
   { route: 'GET /api/users', send: (a) => a.get('/api/users'), expected: [401, 403, 403, 403, 403, 200] },
   {

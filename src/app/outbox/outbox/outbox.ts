@@ -19,7 +19,7 @@ export interface OutboxMessage {
 
 /**
  * Development only: the e-mails the built-in SMTP server caught, so invitations and reset links
- * can be followed without a mail account. Open without sign-in, like the server route.
+ * can be followed without a mail account. Site admins only, like the server route: the mails hold other users' links.
  */
 @Component({
   selector: 'tl-outbox',
