@@ -75,7 +75,7 @@ test('an admin sees user admin, every project and the outbox', async () => {
 
 test('a coordinator edits the project, uploads models and manages members, but has no user admin', async () => {
   await signIn('coordinator@taulens.test');
-  expect(await linkLabels('Main')).toEqual(['Projects', 'Outbox']);
+  expect(await linkLabels('Main')).toEqual(['Projects']);
   expect(await count('button', 'New project')).toBe(1);
 
   await openDepot();
@@ -110,7 +110,7 @@ test('a coordinator edits the project, uploads models and manages members, but h
 
 test('an engineer runs checks but neither edits the project nor uploads', async () => {
   await signIn('engineer@taulens.test');
-  expect(await linkLabels('Main')).toEqual(['Projects', 'Outbox']);
+  expect(await linkLabels('Main')).toEqual(['Projects']);
   expect(await count('button', 'New project')).toBe(0);
 
   await openDepot();
@@ -140,7 +140,7 @@ test('an engineer runs checks but neither edits the project nor uploads', async 
 
 test('a reviewer verifies findings and sees no upload button', async () => {
   await signIn('reviewer@taulens.test');
-  expect(await linkLabels('Main')).toEqual(['Projects', 'Outbox']);
+  expect(await linkLabels('Main')).toEqual(['Projects']);
 
   await openDepot();
   expect(await linkLabels('Project sections')).toEqual(ALL_SECTIONS);
