@@ -1,7 +1,7 @@
 /**
- * `taulens check`, spawned as a child process on the shared buildingSMART samples and on generated frames of our
- * invented scenario. The child runs the TypeScript sources (as bin.js does when there is no build), so the test sees
- * this tree and not an older build in dist/.
+ * `taulens check`, spawned as a child process on a buildingSMART sample (test/fixtures/ifc/buildingsmart) and on
+ * generated frames of our invented scenario. The child runs the TypeScript sources (as bin.js does when there is no
+ * build), so the test sees this tree and not an older build in dist/.
  */
 import { spawnSync } from 'node:child_process';
 import * as fs from 'node:fs';
@@ -9,6 +9,7 @@ import * as os from 'node:os';
 import * as path from 'node:path';
 import ExcelJS from 'exceljs';
 import { schemaErrors, schemaForEntry } from '../../test/fixtures/bcf/bcf-schemas';
+import { buildingSmartSample } from '../../test/fixtures/ifc/buildingsmart-samples';
 import { writeFrameFile } from '../../test/generator/generate-frame';
 import { fromNewtons } from '../engine/units';
 import { openArchive } from '../findings/bcf/bcf-archive-reader';
@@ -16,7 +17,6 @@ import { REPORT_CAUTIONS_TEXT } from '../reports/report-cautions';
 import { dispatch } from './main';
 
 const ROOT = path.resolve(__dirname, '../..');
-const SAMPLES = path.resolve(ROOT, '../shared/samples/ifc');
 const LAUNCH = `require('ts-node').register({ transpileOnly: true, project: ${JSON.stringify(path.join(ROOT, 'tsconfig.server.json'))} });
 require(${JSON.stringify(path.join(__dirname, 'main.ts'))}).run(process.argv.slice(1));`;
 
@@ -58,7 +58,7 @@ describe('taulens check', () => {
   // Vpl,Rd = 1400 × 355/√3 = 286.94 kN [calc].
   it('checks the IPE200 beams of a buildingSMART sample by Name against Vpl,Rd = 286.9 kN (EN 1993-1-1)', () => {
     const forces = write('sample-forces.csv', 'member,combination,shear\nTopMid,ULS-1,143.47\nBotMid,ULS-1,-200\nBotLeft,ULS-1,300\n');
-    const run = taulens('check', path.join(SAMPLES, 'beam-varying-cardinal-points.ifc'), '--forces', forces, '--force-unit', 'kN', '--standard', 'en1993-1-1', '--json');
+    const run = taulens('check', buildingSmartSample('beam-varying-cardinal-points.ifc'), '--forces', forces, '--force-unit', 'kN', '--standard', 'en1993-1-1', '--json');
     expect(run.stderr).toBe('');
     expect(run.status).toBe(1);
     const output = JSON.parse(run.stdout);

@@ -2,9 +2,10 @@ import * as fs from 'node:fs';
 import * as os from 'node:os';
 import * as path from 'node:path';
 import * as yazl from 'yazl';
+import { buildingSmartSample } from '../../test/fixtures/ifc/buildingsmart-samples';
 import { extractIfcFromZip } from './ifc-archive';
 
-const SAMPLE = path.resolve(__dirname, '../../test/fixtures/ifc/buildingsmart/column-extruded-solid.ifc');
+const SAMPLE = buildingSmartSample('column-extruded-solid.ifc');
 
 function zip(file: string, entries: { name: string; data: Buffer; store?: boolean }[]): Promise<string> {
   return new Promise((resolve, reject) => {

@@ -2,12 +2,10 @@
  * The buildingSMART IFC4 specification examples (CC BY 4.0, test/fixtures/ifc/buildingsmart/SOURCE.md): every
  * member and its profile come out with the dimensions written in the files.
  */
-import * as path from 'node:path';
 import { type Node, WebIO } from '@gltf-transform/core';
+import { buildingSmartSample } from '../../test/fixtures/ifc/buildingsmart-samples';
 import type { MemberRecord, ModelReadResult } from './model-read-result';
 import { readModel } from './read-model';
-
-const SAMPLES = path.resolve(__dirname, '../../test/fixtures/ifc/buildingsmart');
 
 /** #203 IFCISHAPEPROFILEDEF(.AREA.,'IPE200',$,100.0,200.0,5.6,8.5,12.0,$,$), shared by all three files (SOURCE.md). */
 const IPE200_FROM_FILE = {
@@ -22,7 +20,7 @@ const IPE200_FROM_FILE = {
 };
 
 async function read(file: string): Promise<ModelReadResult> {
-  return readModel(path.join(SAMPLES, file));
+  return readModel(buildingSmartSample(file));
 }
 
 async function glbNodes(result: ModelReadResult): Promise<Node[]> {

@@ -1,9 +1,9 @@
 import * as fs from 'node:fs';
-import * as path from 'node:path';
+import { buildingSmartSample } from '../../test/fixtures/ifc/buildingsmart-samples';
 import { IfcReadError } from './ifc-read-error';
 import { decodeStepString, readStepHeader } from './step-header';
 
-const SAMPLE = path.resolve(__dirname, '../../test/fixtures/ifc/buildingsmart/column-extruded-solid.ifc');
+const SAMPLE = buildingSmartSample('column-extruded-solid.ifc');
 
 function check(text: string | Uint8Array): ReturnType<typeof readStepHeader> {
   const bytes = typeof text === 'string' ? new TextEncoder().encode(text) : text;

@@ -5,6 +5,7 @@ import path from 'node:path';
 import pino from 'pino';
 import { openTestDataSource, type TestDataSource } from '../../test/fixtures/test-data-source';
 import { createTeam, type TestTeam } from '../../test/fixtures/test-accounts';
+import { buildingSmartSample } from '../../test/fixtures/ifc/buildingsmart-samples';
 import { HEADER_PROBE_BYTES, readStepHeader } from '../ifc/step-header';
 import { createJobRunner, type JobRunner } from '../jobs/job-runner';
 import { LocalFileStorage } from '../storage/local-file-storage';
@@ -14,7 +15,7 @@ import { ModelRevision } from './model-revision.entity';
 import type { CheckedIfc } from './model-upload';
 import { ModelService } from './model.service';
 
-const COLUMN_SAMPLE = path.resolve(__dirname, '../../../shared/samples/ifc/column-extruded-solid.ifc');
+const COLUMN_SAMPLE = buildingSmartSample('column-extruded-solid.ifc');
 const COUNT_UP_JOB = path.resolve(__dirname, '../../test/fixtures/jobs/count-up.job.ts');
 
 async function checkedSample(): Promise<CheckedIfc> {

@@ -1,7 +1,8 @@
 /**
  * The coordinator's model journey in Debian's chromium against the real server with the demo seed: the depot's
  * revisions, an upload followed to "Ready", the members read from it, what a revision skipped and why, and the
- * compare of the demo revisions C and D. The shared sample file is buildingSMART's (CC BY 4.0, see its SOURCE.md).
+ * compare of the demo revisions C and D. The sample file is buildingSMART's (CC BY 4.0, see
+ * test/fixtures/ifc/buildingsmart/SOURCE.md).
  */
 import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
@@ -9,10 +10,11 @@ import path from 'node:path';
 import { BrowserContext, Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../server/demo/seed';
 import { RunningServer, startServer } from '../../server/main';
+import { buildingSmartSample } from '../fixtures/ifc/buildingsmart-samples';
 import { launchChromium } from './chromium';
 
 const DEPOT = 'Brindlecote Riverside Depot and Offices';
-const SAMPLE = path.resolve(__dirname, '../../../shared/samples/ifc/beam-varying-cardinal-points.ifc');
+const SAMPLE = buildingSmartSample('beam-varying-cardinal-points.ifc');
 
 let server: RunningServer;
 let context: BrowserContext;

@@ -1,6 +1,5 @@
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { findSection, seriesOf, toSectionInput } from '../../server/catalogue/catalogue';
 import { CheckMemberDetail } from '../../server/checks/check-member-detail.entity';
 import { CheckMemberResult } from '../../server/checks/check-member-result.entity';
@@ -11,6 +10,7 @@ import { REPORT_CAUTIONS, REPORT_CAUTIONS_TEXT } from '../../server/reports/repo
 import type { ApiAgent } from '../fixtures/api-agent';
 import { type TestApp, startTestApp } from '../fixtures/test-app';
 import { type TestTeam, createTeam } from '../fixtures/test-accounts';
+import { buildingSmartSample } from '../fixtures/ifc/buildingsmart-samples';
 import { generateFrame } from '../generator/generate-frame';
 import {
   DEFAULT_MAPPING,
@@ -26,7 +26,6 @@ import {
   untilFinished,
 } from './results-scene';
 
-const SAMPLES = path.resolve(__dirname, '../../../shared/samples/ifc');
 const sha256 = (bytes: string | Buffer): string => createHash('sha256').update(bytes).digest('hex');
 const kips = (newtons: number) => fromNewtons(newtons, 'kip');
 const KIP_MAPPING = { ...DEFAULT_MAPPING, forceUnit: 'kip' };
@@ -123,7 +122,7 @@ describe('check runs', () => {
     });
 
     it('refuses a revision whose model could not be read, storing nothing', async () => {
-      const broken = readFileSync(path.join(SAMPLES, 'column-extruded-solid.ifc'), 'latin1').replace('IFCSIUNIT(*,.LENGTHUNIT.,.MILLI.,.METRE.)', 'IFCSIUNIT(*,.MASSUNIT.,.KILO.,.GRAM.)');
+      const broken = readFileSync(buildingSmartSample('column-extruded-solid.ifc'), 'latin1').replace('IFCSIUNIT(*,.LENGTHUNIT.,.MILLI.,.METRE.)', 'IFCSIUNIT(*,.MASSUNIT.,.KILO.,.GRAM.)');
       const failed = await ingestModel(coordinator, projectId, broken, 'broken.ifc');
       const before = await resultsFootprint(app, projectId);
       const response = await engineer.post(checksUrl(projectId)).send(runBody({ modelRevisionId: failed.id })).expect(409);

@@ -8,10 +8,10 @@ import { ModelRevision } from '../../server/models/model-revision.entity';
 import type { ApiAgent } from '../fixtures/api-agent';
 import { type TestApp, startTestApp } from '../fixtures/test-app';
 import { type TestTeam, createTeam } from '../fixtures/test-accounts';
+import { buildingSmartSample } from '../fixtures/ifc/buildingsmart-samples';
 import { generateFrame } from '../generator/generate-frame';
 
-const SAMPLES = path.resolve(__dirname, '../../../shared/samples/ifc');
-const sample = (name: string): Buffer => readFileSync(path.join(SAMPLES, name));
+const sample = (name: string): Buffer => readFileSync(buildingSmartSample(name));
 const sha256 = (bytes: Uint8Array): string => createHash('sha256').update(bytes).digest('hex');
 
 interface Revision {
@@ -102,8 +102,8 @@ describe('models', () => {
   }
 
   describe('POST /api/projects/:projectId/models', () => {
-    // Members, profiles and copies' sha256 as SOURCE.md of the shared samples lists them (buildingSMART, CC BY 4.0).
-    it('reads each shared sample with the members and the IPE200 profile its SOURCE.md lists', async () => {
+    // Members, profiles and copies' sha256 as the samples' SOURCE.md lists them (buildingSMART, CC BY 4.0).
+    it('reads each buildingSMART sample with the members and the IPE200 profile its SOURCE.md lists', async () => {
       const team = await createTeam(app.dataSource);
       const agent = await app.signIn(team.coordinator);
       const expected = [

@@ -1,6 +1,5 @@
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import ExcelJS from 'exceljs';
 import type { MemberRecord } from '../../server/ifc/model-read-result';
 import { ResultKey } from '../../server/results/result-key.entity';
@@ -11,6 +10,7 @@ import type { ApiAgent } from '../fixtures/api-agent';
 import { fixturePath } from '../fixtures/results/result-files';
 import { type TestApp, startTestApp } from '../fixtures/test-app';
 import { type TestTeam, createTeam } from '../fixtures/test-accounts';
+import { buildingSmartSample } from '../fixtures/ifc/buildingsmart-samples';
 import { generateFrame } from '../generator/generate-frame';
 import {
   DEFAULT_MAPPING,
@@ -26,7 +26,6 @@ import {
   uploadResults,
 } from './results-scene';
 
-const SAMPLES = path.resolve(__dirname, '../../../shared/samples/ifc');
 const sha256 = (bytes: string | Buffer): string => createHash('sha256').update(bytes).digest('hex');
 
 async function workbook(sheets: Record<string, ExcelJS.CellValue[][]>): Promise<Buffer> {
@@ -116,7 +115,7 @@ describe('shear results', () => {
       const xls = await uploadResults(coordinator, projectId, oleSignature, 'forces.xls').expect(400);
       expect(xls.body.error.code).toBe('unsupported_format');
       expect(xls.body.error.message).toMatch(/save it as \.xlsx or CSV/i);
-      const ifc = await uploadResults(coordinator, projectId, readFileSync(path.join(SAMPLES, 'column-extruded-solid.ifc')), 'column.ifc').expect(400);
+      const ifc = await uploadResults(coordinator, projectId, readFileSync(buildingSmartSample('column-extruded-solid.ifc')), 'column.ifc').expect(400);
       expect(ifc.body.error.code).toBe('not_results_file');
       const none = await coordinator.post(`${resultsUrl(projectId)}/uploads`).expect(400);
       expect(none.body.error.code).toBe('file_required');
@@ -219,7 +218,7 @@ describe('shear results', () => {
     });
 
     it('refuses a revision whose model could not be read, and an unknown one', async () => {
-      const noLengthUnit = readFileSync(path.join(SAMPLES, 'beam-varying-cardinal-points.ifc'), 'latin1').replace(
+      const noLengthUnit = readFileSync(buildingSmartSample('beam-varying-cardinal-points.ifc'), 'latin1').replace(
         'IFCSIUNIT(*,.LENGTHUNIT.,.MILLI.,.METRE.)',
         'IFCSIUNIT(*,.MASSUNIT.,.KILO.,.GRAM.)',
       );
