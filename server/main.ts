@@ -17,6 +17,7 @@ import { createDomainEvents } from './http/domain-events';
 import { createJobRunner } from './jobs/job-runner';
 import { createMailer } from './mail/mailer';
 import { startFakeSmtpServer } from './outbox/fake-smtp-server';
+import { REPORT_CAUTIONS_TEXT } from './reports/report-cautions';
 import { sweepStaleUploads } from './results/stale-uploads';
 import { LocalFileStorage } from './storage/local-file-storage';
 
@@ -31,12 +32,6 @@ export interface RunningServer {
   /** Stops accepting requests, then closes everything start-up opened. */
   close(): Promise<void>;
 }
-
-/** The cautions of PRODUCT.md, printed at every start. */
-const CAUTIONS =
-  'Results depend on the imported forces, the model\u2019s section data and the chosen parameters. They are a checking ' +
-  'aid for qualified engineers, not a design. Follow the governing local building code, its national annex and the ' +
-  'engineer of record; verify connections, coped ends, concentrated loads, fatigue and combined actions separately.';
 
 /**
  * config → data dir → DataSource (migrations run) → fake SMTP → app → listen. Seeds the demo
@@ -153,7 +148,7 @@ function printBanner(running: RunningServer, publicUrl: string): void {
     for (const account of running.demo.accounts) lines.push(`  ${account.role.padEnd(12)} ${account.email}`);
   }
   if (running.context.config.fakeSmtp) lines.push('', 'E-mail goes to the built-in fake SMTP server; read it on the Outbox page.');
-  lines.push('', `Caution: ${CAUTIONS}`, '');
+  lines.push('', `Caution: ${REPORT_CAUTIONS_TEXT}`, '');
   process.stdout.write(`${lines.join('\n')}\n`);
 }
 
