@@ -1,0 +1,166 @@
+/**
+ * The families of steel sections and the dimensions that describe each, in millimetres and radians: one vocabulary
+ * shared by the IFC reader (parametric profiles, outlines, body cuts), the catalogues, the stored member and the client.
+ *
+ * Local axes follow IfcParameterizedProfileDef: the section lies in its x–y plane, y along the depth (the web of an I,
+ * a channel or a tee is parallel to y), x across the width, origin at the centre of the bounding box unless a family
+ * says otherwise.
+ */
+import type { FlangeInput } from './section';
+
+export const SECTION_FAMILIES = ['I', 'channel', 'tee', 'angle', 'box', 'tube', 'plate', 'other'] as const;
+export type SectionFamily = (typeof SECTION_FAMILIES)[number];
+
+/** Doubly or singly symmetric I or H: rolled (root fillets) or welded (plates). */
+export interface IDimensions {
+  family: 'I';
+  depth_mm: number;
+  webThickness_mm: number;
+  topFlange: FlangeInput;
+  bottomFlange: FlangeInput;
+}
+
+/** Channel (U, PFC, C, MC, UPN, UPE): the web on the left (−x), both flanges pointing to +x. */
+export interface ChannelDimensions {
+  family: 'channel';
+  depth_mm: number;
+  /** Overall flange width, web included. */
+  width_mm: number;
+  webThickness_mm: number;
+  /** Mean thickness; for a sloped flange measured half-way along the outstand. */
+  flangeThickness_mm: number;
+  rootRadius_mm: number;
+  edgeRadius_mm?: number;
+  slope_rad?: number;
+  /** Lip length of a cold-formed lipped channel (IfcCShapeProfileDef Girth); absent for hot-rolled channels. */
+  lip_mm?: number;
+}
+
+/** Tee: the flange on top (+y), the stem down. */
+export interface TeeDimensions {
+  family: 'tee';
+  depth_mm: number;
+  /** Flange width. */
+  width_mm: number;
+  /** Stem (web) thickness. */
+  webThickness_mm: number;
+  flangeThickness_mm: number;
+  rootRadius_mm: number;
+  flangeEdgeRadius_mm?: number;
+  webEdgeRadius_mm?: number;
+  flangeSlope_rad?: number;
+  webSlope_rad?: number;
+}
+
+/** Angle: one leg along −y … +y (depth) on the left, the other along x (width) at the bottom. */
+export interface AngleDimensions {
+  family: 'angle';
+  depth_mm: number;
+  width_mm: number;
+  thickness_mm: number;
+  rootRadius_mm: number;
+  edgeRadius_mm?: number;
+  /** Thickness of the horizontal leg when it differs from the vertical one (rare). */
+  widthLegThickness_mm?: number;
+}
+
+/** Rectangular or square hollow section, or a welded box: webs are the walls parallel to y. */
+export interface BoxDimensions {
+  family: 'box';
+  depth_mm: number;
+  width_mm: number;
+  /** Thickness of each wall parallel to y. */
+  webThickness_mm: number;
+  /** Thickness of each wall parallel to x. */
+  flangeThickness_mm: number;
+  outerCornerRadius_mm?: number;
+  innerCornerRadius_mm?: number;
+}
+
+/** Circular hollow section. */
+export interface TubeDimensions {
+  family: 'tube';
+  diameter_mm: number;
+  wallThickness_mm: number;
+}
+
+/** Solid rectangle (flat bar, plate). */
+export interface PlateDimensions {
+  family: 'plate';
+  depth_mm: number;
+  width_mm: number;
+}
+
+/** Anything else (Z, solid round, built-up shapes): only its extent is described. */
+export interface OtherDimensions {
+  family: 'other';
+  depth_mm: number;
+  width_mm: number;
+  /** What it is, in words: 'Z-section', 'solid round', 'built-up section'. */
+  description: string;
+}
+
+export type SectionDimensions =
+  | IDimensions
+  | ChannelDimensions
+  | TeeDimensions
+  | AngleDimensions
+  | BoxDimensions
+  | TubeDimensions
+  | PlateDimensions
+  | OtherDimensions;
+
+/** Overall depth (along y) of any family. */
+export function overallDepth_mm(d: SectionDimensions): number {
+  return d.family === 'tube' ? d.diameter_mm : d.depth_mm;
+}
+
+/** Overall width (along x) of any family. */
+export function overallWidth_mm(d: SectionDimensions): number {
+  switch (d.family) {
+    case 'I':
+      return Math.max(d.topFlange.width_mm, d.bottomFlange.width_mm);
+    case 'tube':
+      return d.diameter_mm;
+    default:
+      return d.width_mm;
+  }
+}
+
+/** Thickest plate of the section, which sets the yield strength by thickness (EN 10025-2). */
+export function thickestPlate_mm(d: SectionDimensions): number {
+  switch (d.family) {
+    case 'I':
+      return Math.max(d.webThickness_mm, d.topFlange.thickness_mm, d.bottomFlange.thickness_mm);
+    case 'channel':
+    case 'tee':
+    case 'box':
+      return Math.max(d.webThickness_mm, d.flangeThickness_mm);
+    case 'angle':
+      return Math.max(d.thickness_mm, d.widthLegThickness_mm ?? 0);
+    case 'tube':
+      return d.wallThickness_mm;
+    case 'plate':
+    case 'other':
+      return Math.min(d.depth_mm, d.width_mm);
+  }
+}
+
+/** A point of a section outline, millimetres, in the section's x–y plane. */
+export type Point2_mm = readonly [x: number, y: number];
+
+/** A circular arc of the outline as the file wrote it; recognition reads root fillets and corner radii from these. */
+export interface OutlineArc {
+  centre: Point2_mm;
+  radius_mm: number;
+}
+
+/**
+ * A closed section outline: the outer loop counter-clockwise and each void clockwise, the closing point not repeated.
+ * Arcs are already replaced by chords fine enough for section properties; `arcs` keeps the circles they came from.
+ */
+export interface SectionPolygon {
+  outer: Point2_mm[];
+  voids: Point2_mm[][];
+  arcs?: OutlineArc[];
+}
