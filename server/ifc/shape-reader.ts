@@ -40,6 +40,11 @@ export interface ElementShape {
   solids: SweptSolid[];
   /** Body items that carry no profile (breps, tessellated sets, swept disks), by IFC type. */
   otherBodyTypes: string[];
+  /**
+   * The same items for a body cut: the item itself (the outermost boolean when booleans clip it), its type code, and
+   * the mapping transforms between its representation and the element (undefined for a direct item).
+   */
+  bodyItems: { itemId: number; type: number; transform: Mat4 | undefined }[];
 }
 
 /** A straight or curved member line in element coordinates and model units. */
@@ -81,7 +86,7 @@ export class ShapeReader {
   }
 
   read(productShapeId: number | undefined): ElementShape {
-    const shape: ElementShape = { hasRepresentation: false, axisItemId: undefined, solids: [], otherBodyTypes: [] };
+    const shape: ElementShape = { hasRepresentation: false, axisItemId: undefined, solids: [], otherBodyTypes: [], bodyItems: [] };
     const productShape = this.lines.line(productShapeId);
     if (!productShape) return productShapeId === undefined ? shape : { ...shape, danglingReference: productShapeId };
     const representations = refsOf(productShape.args[2]).map((id) => this.lines.line(id)).filter((r) => r !== undefined);
@@ -107,7 +112,8 @@ export class ShapeReader {
     return args;
   }
 
-  private collect(itemId: number, transform: Mat4 | undefined, clipped: boolean, shape: ElementShape, depth: number): void {
+  /** `booleanRoot`: the outermost boolean whose first operand chain led here, which a body cut reads with its clippings. */
+  private collect(itemId: number, transform: Mat4 | undefined, clipped: boolean, shape: ElementShape, depth: number, booleanRoot?: number): void {
     // The type alone first: brep and tessellated bodies can be long lines that are never needed.
     const type = this.lines.typeOf(itemId);
     if (depth > MAX_DEPTH || type === 0) return;
@@ -118,7 +124,7 @@ export class ShapeReader {
     }
     if (type === IFCBOOLEANRESULT || type === IFCBOOLEANCLIPPINGRESULT) {
       const first = refOf(this.lines.line(itemId)?.args[1]);
-      if (first !== undefined) this.collect(first, transform, true, shape, depth + 1);
+      if (first !== undefined) this.collect(first, transform, true, shape, depth + 1, booleanRoot ?? itemId);
       return;
     }
     if (type === IFCCSGSOLID) {
@@ -137,6 +143,8 @@ export class ShapeReader {
       return;
     }
     shape.otherBodyTypes.push(this.lines.typeName(type));
+    const bodyItem = booleanRoot ?? itemId;
+    shape.bodyItems.push({ itemId: bodyItem, type: this.lines.typeOf(bodyItem), transform });
   }
 
   /** Position of a swept solid in element coordinates (model units). */
