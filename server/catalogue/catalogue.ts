@@ -1,19 +1,24 @@
 /**
- * The built-in section catalogue and tolerant name lookup: 'IPE300' = 'IPE 300', 'W18x50' = 'W18X50',
- * 'HE 200 A' = 'HEA200' = 'HE200A'. A project catalogue (uploaded CSV) can be passed in and wins over the built-in one.
+ * The built-in I-section catalogue and tolerant name lookup: 'IPE300' = 'IPE 300', 'W18x50' = 'W18X50',
+ * 'HE 200 A' = 'HEA200' = 'HE200A', 'UC 310x96.8' = '310UC96.8'. A project catalogue (uploaded CSV) can be passed in
+ * and wins over the built-in one. Sections of every family, and designations inside free text: catalogue-lookup.ts.
  */
 import type { ISectionInput } from '../engine/section';
+import type { IDimensions } from '../engine/section-family';
 import { sectionProperties } from '../engine/section-properties';
-import type { CatalogueSection, CatalogueSource } from './catalogue-section';
+import { AU_PFC_SOURCE } from './au-channels';
+import { AU_HOLLOW_SOURCE } from './au-hollow';
+import { AU_HOT_ROLLED_SOURCE, AU_SECTIONS, AU_WELDED_SOURCE } from './au-sections';
+import type { CatalogueEntry, CatalogueSection, CatalogueSource } from './catalogue-section';
+import { designationKey } from './designation';
 import { EN_SECTIONS, EN_SOURCE } from './en-sections';
 import { W_SECTIONS, W_SOURCE } from './w-shapes';
 
-export const CATALOGUE_SOURCES: Readonly<Record<string, CatalogueSource>> = {
-  [EN_SOURCE.id]: EN_SOURCE,
-  [W_SOURCE.id]: W_SOURCE,
-};
+export const CATALOGUE_SOURCES: Readonly<Record<string, CatalogueSource>> = Object.fromEntries(
+  [EN_SOURCE, W_SOURCE, AU_HOT_ROLLED_SOURCE, AU_WELDED_SOURCE, AU_PFC_SOURCE, AU_HOLLOW_SOURCE].map((s) => [s.id, s]),
+);
 
-export const BUILT_IN_SECTIONS: readonly CatalogueSection[] = [...EN_SECTIONS, ...W_SECTIONS];
+export const BUILT_IN_SECTIONS: readonly CatalogueSection[] = [...EN_SECTIONS, ...W_SECTIONS, ...AU_SECTIONS];
 
 /**
  * Canonical lookup key of a section name: upper case, no spaces, hyphens or underscores, '×' read as 'X', and the
@@ -25,8 +30,15 @@ export function sectionKey(name: string): string {
   return he ? `HE${he[2]}${he[1]}` : compact;
 }
 
+/** Each section under its plain key and, when its name is a designation, under the designation's key as well. */
 function indexByKey(sections: readonly CatalogueSection[]): Map<string, CatalogueSection> {
-  return new Map(sections.map((s) => [sectionKey(s.name), s]));
+  const index = new Map<string, CatalogueSection>();
+  for (const s of sections) {
+    index.set(sectionKey(s.name), s);
+    const designation = designationKey(s.name);
+    if (designation) index.set(designation, s);
+  }
+  return index;
 }
 
 const BUILT_IN_INDEX = indexByKey(BUILT_IN_SECTIONS);
@@ -44,19 +56,57 @@ function projectIndex(project: readonly CatalogueSection[]): Map<string, Catalog
 /** The section called `name`, looked up in the project catalogue first, then the built-in tables; null if unknown. */
 export function findSection(name: string, project: readonly CatalogueSection[] = []): CatalogueSection | null {
   const key = sectionKey(name);
-  return projectIndex(project).get(key) ?? BUILT_IN_INDEX.get(key) ?? null;
+  const exact = projectIndex(project).get(key) ?? BUILT_IN_INDEX.get(key);
+  if (exact) return exact;
+  const designation = designationKey(name);
+  return designation ? (projectIndex(project).get(designation) ?? BUILT_IN_INDEX.get(designation) ?? null) : null;
 }
 
-/** Engine input of a catalogue section: rolled, equal flanges, root fillets of radius r. */
+function flangeOf(section: CatalogueSection): ISectionInput['topFlange'] {
+  return {
+    width_mm: section.width_mm,
+    thickness_mm: section.flangeThickness_mm,
+    filletRadius_mm: section.rootRadius_mm,
+    ...(section.edgeRadius_mm ? { edgeRadius_mm: section.edgeRadius_mm } : {}),
+    ...(section.flangeSlope_rad ? { slope_rad: section.flangeSlope_rad } : {}),
+  };
+}
+
+/** Engine input of a catalogue section: equal flanges, root fillets of radius r, rolled unless the table says welded. */
 export function toSectionInput(section: CatalogueSection): ISectionInput {
-  const flange = { width_mm: section.width_mm, thickness_mm: section.flangeThickness_mm, filletRadius_mm: section.rootRadius_mm };
   return {
     depth_mm: section.depth_mm,
     webThickness_mm: section.webThickness_mm,
-    topFlange: { ...flange },
-    bottomFlange: { ...flange },
-    fabrication: 'rolled',
+    topFlange: flangeOf(section),
+    bottomFlange: flangeOf(section),
+    fabrication: section.fabrication ?? 'rolled',
   };
+}
+
+const entries = new WeakMap<CatalogueSection, CatalogueEntry>();
+
+/** The same section as a catalogue entry of the 'I' family (one object per section, so callers may compare them). */
+export function entryOfSection(section: CatalogueSection): CatalogueEntry {
+  let entry = entries.get(section);
+  if (!entry) {
+    const dimensions: IDimensions = {
+      family: 'I',
+      depth_mm: section.depth_mm,
+      webThickness_mm: section.webThickness_mm,
+      topFlange: flangeOf(section),
+      bottomFlange: flangeOf(section),
+    };
+    entry = {
+      name: section.name,
+      series: section.series,
+      family: 'I',
+      dimensions,
+      process: section.fabrication === 'welded' ? 'welded' : 'hot-rolled',
+      sourceId: section.sourceId,
+    };
+    entries.set(section, entry);
+  }
+  return entry;
 }
 
 export function seriesOf(section: CatalogueSection): string {

@@ -1,0 +1,66 @@
+import { BUILT_IN_ENTRIES, findCatalogueEntry } from './catalogue-lookup';
+import { CATALOGUE_SOURCES } from './catalogue';
+import type { CatalogueSection } from './catalogue-section';
+
+describe('findCatalogueEntry', () => {
+  it.each([
+    ['Beam:IPE270:341211', 'IPE 270', 'I'],
+    ['IPE 270', 'IPE 270', 'I'],
+    ['IPE270', 'IPE 270', 'I'],
+    ['HEA360-S355', 'HEA 360', 'I'],
+    ['HE 360 A', 'HEA 360', 'I'],
+    ['HE360A', 'HEA 360', 'I'],
+    ['W12X26', 'W12X26', 'I'],
+    ['W12x26', 'W12X26', 'I'],
+    ['W 12 x 26', 'W12X26', 'I'],
+    ['310UC96.8', '310UC96.8', 'I'],
+    ['UC 310x96.8', '310UC96.8', 'I'],
+    ['Steel - 310UC96.8', '310UC96.8', 'I'],
+    ['1200WB455', '1200WB455', 'I'],
+    ['300PFC40.1', '300PFC40.1', 'channel'],
+    ['300PFC', '300PFC40.1', 'channel'],
+    ['150PFC17.7', '150PFC17.7', 'channel'],
+    ['100x6.0SHS', '100x100x6.0 SHS', 'box'],
+    ['SHS 100x100x6', '100x100x6.0 SHS', 'box'],
+    ['100x50x4RHS', '100x50x4.0 RHS', 'box'],
+    ['168.3x4.8CHS', '168.3x4.8 CHS', 'tube'],
+  ])('finds %s as %s (%s)', (text, name, family) => {
+    const hit = findCatalogueEntry(text);
+    expect(hit).toMatchObject({ entry: { name, family }, origin: 'catalogue' });
+    expect(hit!.entry.dimensions.family).toBe(family);
+  });
+
+  it.each(['310UC97', '300PFC41', 'U200', 'IPE 301', 'IPE270A', 'PL-GIRDER-7', 'W12X27', '', '   '])('finds nothing for %s', (text) => {
+    expect(findCatalogueEntry(text)).toBeNull();
+  });
+
+  it('names the part of the text that was read', () => {
+    expect(findCatalogueEntry('Beam:IPE270:341211')!.designation).toBe('IPE270');
+  });
+
+  it('says when the section came from the project catalogue, which wins over the built-in tables', () => {
+    const project: CatalogueSection[] = [
+      { name: 'IPE 270', series: 'IPE', depth_mm: 271, width_mm: 135, webThickness_mm: 6.6, flangeThickness_mm: 10.2, rootRadius_mm: 15, sourceId: 'project' },
+      { name: 'PL-GIRDER-7', series: 'GIRDER', depth_mm: 900, width_mm: 300, webThickness_mm: 8, flangeThickness_mm: 20, rootRadius_mm: 0, sourceId: 'project' },
+    ];
+    expect(findCatalogueEntry('Beam:IPE270:341211', project)).toMatchObject({ origin: 'project-catalogue', entry: { dimensions: { depth_mm: 271 } } });
+    expect(findCatalogueEntry('pl girder 7', project)).toMatchObject({ origin: 'project-catalogue', entry: { name: 'PL-GIRDER-7' } });
+    expect(findCatalogueEntry('HEA360', project)).toMatchObject({ origin: 'catalogue', entry: { name: 'HEA 360' } });
+    expect(findCatalogueEntry('PL-GIRDER-7')).toBeNull();
+  });
+
+  it('answers the same text the same way, from its cache', () => {
+    expect(findCatalogueEntry('Beam:IPE270:9')).toBe(findCatalogueEntry('Beam:IPE270:9'));
+  });
+
+  it('names a known source and a family of the shared vocabulary for every built-in entry', () => {
+    for (const entry of BUILT_IN_ENTRIES) {
+      expect(CATALOGUE_SOURCES[entry.sourceId]).toBeDefined();
+      expect(entry.dimensions.family).toBe(entry.family);
+    }
+  });
+
+  it('finds every built-in entry by its own name, and only itself', () => {
+    for (const entry of BUILT_IN_ENTRIES) expect(findCatalogueEntry(entry.name)?.entry).toBe(entry);
+  });
+});

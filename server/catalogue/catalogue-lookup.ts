@@ -1,0 +1,96 @@
+/**
+ * Sections of every family by the text an exporter wrote: a profile name, an ObjectType, an element or type name or a
+ * property value ('Beam:IPE270:341211', 'HEA360-S355', 'Steel - 310UC96.8'). The project catalogue wins over the
+ * built-in tables, and the hit says which one it came from. A designation that names two different sections
+ * (the same size in two tables with different corners) finds nothing rather than a guess.
+ */
+import { AU_PFC_ENTRIES } from './au-channels';
+import { AU_HOLLOW_ENTRIES } from './au-hollow';
+import { BUILT_IN_SECTIONS, entryOfSection, sectionKey } from './catalogue';
+import type { CatalogueEntry, CatalogueHit, CatalogueOrigin, CatalogueSection } from './catalogue-section';
+import { designationIn, designationKey, keysOf } from './designation';
+
+export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [...BUILT_IN_SECTIONS.map(entryOfSection), ...AU_PFC_ENTRIES, ...AU_HOLLOW_ENTRIES];
+
+/** A key naming sections whose dimensions differ: looked up, it finds nothing. */
+const AMBIGUOUS = 'ambiguous';
+
+interface EntryIndex {
+  /** Whole names, compared as sectionKey does ('HE 200 A' = 'HEA200'), for project names that are not designations. */
+  byName: Map<string, CatalogueEntry>;
+  byDesignation: Map<string, CatalogueEntry | typeof AMBIGUOUS>;
+}
+
+function sameDimensions(a: CatalogueEntry, b: CatalogueEntry): boolean {
+  return JSON.stringify(a.dimensions) === JSON.stringify(b.dimensions);
+}
+
+function indexOf(entries: readonly CatalogueEntry[]): EntryIndex {
+  const index: EntryIndex = { byName: new Map(), byDesignation: new Map() };
+  for (const entry of entries) {
+    index.byName.set(sectionKey(entry.name), entry);
+    const key = designationKey(entry.name);
+    if (!key) continue;
+    for (const k of keysOf(key)) {
+      const there = index.byDesignation.get(k);
+      index.byDesignation.set(k, there === undefined || (there !== AMBIGUOUS && sameDimensions(there, entry)) ? entry : AMBIGUOUS);
+    }
+  }
+  return index;
+}
+
+const BUILT_IN_INDEX = indexOf(BUILT_IN_ENTRIES);
+
+/** Lookups are repeated for thousands of members sharing a few texts; each cache is dropped when it grows this big. */
+const CACHE_LIMIT = 20_000;
+
+interface ProjectLookup {
+  index: EntryIndex;
+  cache: Map<string, CatalogueHit | null>;
+}
+
+const builtInCache = new Map<string, CatalogueHit | null>();
+const projectLookups = new WeakMap<readonly CatalogueSection[], ProjectLookup>();
+
+function projectLookup(project: readonly CatalogueSection[]): ProjectLookup {
+  let lookup = projectLookups.get(project);
+  if (!lookup) {
+    lookup = { index: indexOf(project.map(entryOfSection)), cache: new Map() };
+    projectLookups.set(project, lookup);
+  }
+  return lookup;
+}
+
+function hit(entry: CatalogueEntry | typeof AMBIGUOUS | undefined, origin: CatalogueOrigin, designation: string): CatalogueHit | null | undefined {
+  if (entry === undefined) return undefined;
+  return entry === AMBIGUOUS ? null : { entry, origin, designation };
+}
+
+function lookUp(text: string, project: EntryIndex | null): CatalogueHit | null {
+  const trimmed = String(text).trim();
+  if (!trimmed) return null;
+  const name = sectionKey(trimmed);
+  const byName = (project && hit(project.byName.get(name), 'project-catalogue', trimmed)) ?? hit(BUILT_IN_INDEX.byName.get(name), 'catalogue', trimmed);
+  if (byName !== undefined) return byName;
+  const found = designationIn(trimmed);
+  if (!found) return null;
+  const fromProject = project ? hit(project.byDesignation.get(found.key), 'project-catalogue', found.text) : undefined;
+  return fromProject !== undefined ? fromProject : (hit(BUILT_IN_INDEX.byDesignation.get(found.key), 'catalogue', found.text) ?? null);
+}
+
+/**
+ * The section named in `text`, from the project catalogue first, then the built-in tables; null when the text names
+ * no section we know, or names one ambiguously. Never a near miss: '310UC97' does not find '310UC96.8'.
+ */
+export function findCatalogueEntry(text: string, project: readonly CatalogueSection[] = []): CatalogueHit | null {
+  const lookup = project.length ? projectLookup(project) : null;
+  const cache = lookup ? lookup.cache : builtInCache;
+  const key = String(text);
+  if (cache.has(key)) return cache.get(key)!;
+  const result = lookUp(key, lookup ? lookup.index : null);
+  if (cache.size >= CACHE_LIMIT) cache.clear();
+  cache.set(key, result);
+  return result;
+}
+
+export { designationIn };

@@ -1,0 +1,48 @@
+/**
+ * Cross-section area of a catalogue entry of any family, which orders a series by mass per metre and lets the tests
+ * compare each table with its published areas. Rolled I-sections go through the engine's section mechanics; the
+ * other families use the closed forms below (quarter-circle fillets and corners, flange slope linear).
+ */
+import type { BoxDimensions, ChannelDimensions, SectionDimensions, TubeDimensions } from '../engine/section-family';
+import { sectionProperties } from '../engine/section-properties';
+
+/** Material added by a quarter-circle fillet of radius r in a right-angled corner. */
+function filletArea_mm2(radius_mm: number): number {
+  return (1 - Math.PI / 4) * radius_mm * radius_mm;
+}
+
+/** Channel: web, two flange outstands at their mean thickness, two root fillets less two toe roundings. */
+export function channelArea_mm2(c: ChannelDimensions): number {
+  const outstand_mm = c.width_mm - c.webThickness_mm;
+  const edge_mm = c.edgeRadius_mm ?? 0;
+  return c.depth_mm * c.webThickness_mm + 2 * outstand_mm * c.flangeThickness_mm + 2 * filletArea_mm2(c.rootRadius_mm) - 2 * filletArea_mm2(edge_mm);
+}
+
+/** Hollow box: the four rounded corners take (4 − π)(ro² − ri²) off the sharp-cornered ring. */
+export function boxArea_mm2(b: BoxDimensions): number {
+  const outer_mm = b.outerCornerRadius_mm ?? 0;
+  const inner_mm = b.innerCornerRadius_mm ?? 0;
+  const inside_mm2 = (b.depth_mm - 2 * b.flangeThickness_mm) * (b.width_mm - 2 * b.webThickness_mm);
+  return b.depth_mm * b.width_mm - inside_mm2 - (4 - Math.PI) * (outer_mm * outer_mm - inner_mm * inner_mm);
+}
+
+export function tubeArea_mm2(t: TubeDimensions): number {
+  const inner_mm = t.diameter_mm - 2 * t.wallThickness_mm;
+  return (Math.PI / 4) * (t.diameter_mm * t.diameter_mm - inner_mm * inner_mm);
+}
+
+/** Area of the entry's section, or null for families whose catalogues are not kept here (tee, angle, plate, other). */
+export function entryArea_mm2(d: SectionDimensions): number | null {
+  switch (d.family) {
+    case 'I':
+      return sectionProperties({ ...d, fabrication: 'rolled' }).area_mm2;
+    case 'channel':
+      return channelArea_mm2(d);
+    case 'box':
+      return boxArea_mm2(d);
+    case 'tube':
+      return tubeArea_mm2(d);
+    default:
+      return null;
+  }
+}
