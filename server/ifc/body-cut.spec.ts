@@ -8,14 +8,19 @@ import { type BodyCut, cutMemberBody, type BodyItem } from './body-cut';
 import {
   boxOutline,
   channelOutline,
+  clipped,
+  facetedBrep,
   iOutline,
+  mappedItem,
   type Outline2,
   prismBrep,
+  prismFaceLoops,
   prismPolygonalFaceSet,
   prismTriangulatedFaceSet,
   productShape,
   StepWriter,
 } from './body-step';
+import { cross, fromColumns, normalize, type Vec3 } from './matrix4';
 import { openModel, type OpenedModel } from './open-model';
 import { ShapeReader } from './shape-reader';
 import { StepLines } from './step-lines';
@@ -76,6 +81,32 @@ const IPE300 = iOutline(300, 150, 7.1, 10.7, 15, 16);
 // A parallel-flange channel and a hollow box (invented sizes).
 const CHANNEL = channelOutline(200, 80, 6, 11);
 const BOX = boxOutline(200, 100, 8);
+// The IPE 300 with its top flange and upper web coped away (no fillets at the cope; invented).
+const COPED: Outline2 = {
+  outer: [
+    [-75, -150],
+    [75, -150],
+    [75, -139.3],
+    [3.55, -139.3],
+    [3.55, 90],
+    [-3.55, 90],
+    [-3.55, -139.3],
+    [-75, -139.3],
+  ],
+  voids: [],
+};
+const END_PLATE = boxOutline(340, 180, 0);
+END_PLATE.voids = [];
+
+/** A right-handed frame whose z is `w` and whose y is the part of +Z at right angles to it (what the cut calls v). */
+function memberAxes(w: Vec3): [Vec3, Vec3, Vec3] {
+  const z = normalize(w)!;
+  const y = normalize([-z[0] * z[2], -z[1] * z[2], 1 - z[2] * z[2]])!;
+  return [cross(y, z), y, z];
+}
+const SKEWED = memberAxes([Math.cos(Math.PI / 6), Math.sin(Math.PI / 6), 0]);
+const BRACE = memberAxes([1, 1, 1]);
+const translated = (z: number): ReturnType<typeof fromColumns> => fromColumns([1, 0, 0], [0, 1, 0], [0, 0, 1], [0, 0, z]);
 
 describe('cutMemberBody', () => {
   let opened: OpenedModel;
@@ -91,6 +122,25 @@ describe('cutMemberBody', () => {
     ids.ipePolygonal = productShape(w, [prismPolygonalFaceSet(w, IPE300, 4000)]);
     ids.boxPolygonal = productShape(w, [prismPolygonalFaceSet(w, BOX, 2500)]);
     ids.channelTriangulated = productShape(w, [prismTriangulatedFaceSet(w, CHANNEL, 3000)]);
+    ids.skewedMapped = productShape(w, [mappedItem(w, [prismBrep(w, IPE300, 5000)], SKEWED, [12000, -3000, 4500])]);
+    ids.braceMappedTriangulated = productShape(w, [mappedItem(w, [prismTriangulatedFaceSet(w, CHANNEL, 4000)], BRACE, [500, 500, 0])]);
+    ids.bracePlaced = productShape(w, [prismBrep(w, BOX, 4000, { place: fromColumns(...BRACE, [-200, 300, 3600]) })]);
+    ids.copedWithPlate = productShape(w, [
+      facetedBrep(w, [
+        ...prismFaceLoops(COPED, 500),
+        ...prismFaceLoops(IPE300, 1500, { place: translated(500) }),
+        ...prismFaceLoops(END_PLATE, 20, { place: translated(2000) }),
+      ]),
+    ]);
+    ids.mitredEnd = productShape(w, [clipped(w, prismBrep(w, IPE300, 3000), [0, 0, 2900], [0, 0.3, 1])]);
+    ids.clippedAlong = productShape(w, [clipped(w, prismBrep(w, IPE300, 3000), [0, 140, 0], [0, 1, 0])]);
+    ids.openShell = productShape(w, [facetedBrep(w, prismFaceLoops(CHANNEL, 3000).slice(0, -1), true)]);
+    ids.twoSolids = productShape(w, [
+      facetedBrep(w, [...prismFaceLoops(BOX, 3000), ...prismFaceLoops(BOX, 3000, { place: fromColumns([1, 0, 0], [0, 1, 0], [0, 0, 1], [300, 0, 0]) })]),
+    ]);
+    ids.tapered = productShape(w, [prismBrep(w, IPE300, 3000, { topScale: 0.7 })]);
+    ids.flat = productShape(w, [prismBrep(w, CHANNEL, 0)]);
+    ids.stub = productShape(w, [prismBrep(w, BOX, 250)]);
     opened = await openModel(w.file());
     lines = new StepLines(opened.api, opened.modelId, opened.text);
     shapes = new ShapeReader(lines, 1);
@@ -147,4 +197,79 @@ describe('cutMemberBody', () => {
   it('scales model units to millimetres', () => {
     expectSameSection(cutMemberBody(lines, items('boxBrep'), { scaleToMm: 1000 }), BOX, 1000);
   });
+
+  it.each([
+    ['a horizontal member skewed in plan, placed by a mapped item', 'skewedMapped', IPE300, SKEWED, 5000],
+    ['a sloping brace of triangles, placed by a mapped item', 'braceMappedTriangulated', CHANNEL, BRACE, 4000],
+    ['a sloping brace written in place', 'bracePlaced', BOX, BRACE, 4000],
+  ])('cuts %s, finding its axis from the body alone', (_, name, outline, axes, length) => {
+    const cut = cutMemberBody(lines, items(name), { scaleToMm: 1 });
+    expectSameSection(cut, outline);
+    if (cut.status !== 'cut') return;
+    expect(cut.axis.length).toBeCloseTo(length, 6);
+    // The body's direction has no sense of its own; both found axes are the member's, up to sign.
+    expect(Math.abs(cut.frame.w.reduce((sum, c, k) => sum + c * axes[2][k], 0))).toBeCloseTo(1, 12);
+    cut.frame.v.forEach((c, k) => expect(c).toBeCloseTo(axes[1][k], 12));
+  });
+
+  it('takes the member axis when given, and measures the body along it', () => {
+    const [x, y, z] = SKEWED;
+    const start: Vec3 = [12000, -3000, 4500];
+    const end: Vec3 = [start[0] + 5000 * z[0], start[1] + 5000 * z[1], start[2]];
+    const cut = cutMemberBody(lines, items('skewedMapped'), { scaleToMm: 1, axis: { start, end } });
+    expectSameSection(cut, IPE300);
+    if (cut.status !== 'cut') return;
+    cut.frame.w.forEach((c, k) => expect(c).toBeCloseTo(z[k], 12));
+    cut.frame.u.forEach((c, k) => expect(c).toBeCloseTo(x[k], 12));
+    cut.frame.v.forEach((c, k) => expect(c).toBeCloseTo(y[k], 12));
+    // The IPE is doubly symmetric: its centroid is the profile origin, on the axis.
+    cut.axis.start.forEach((c, k) => expect(c).toBeCloseTo(start[k], 6));
+    cut.axis.end.forEach((c, k) => expect(c).toBeCloseTo(end[k], 6));
+  });
+
+  it('orients a column along the element Z by the element +Y, axis given', () => {
+    const cut = cutMemberBody(lines, items('boxBrep'), { scaleToMm: 1, axis: { start: [0, 0, 0], end: [0, 0, 2500] } });
+    const polygon = expectSameSection(cut, BOX);
+    // The box is 100 wide along x and 200 deep along y.
+    expect(bounds(polygon.outer)).toEqual({ width: 100, depth: 200 });
+  });
+
+  it('keeps the section the middle stations share, past a coped end and an end plate', () => {
+    const cut = cutMemberBody(lines, items('copedWithPlate'), { scaleToMm: 1 });
+    expectSameSection(cut, IPE300);
+    expect(cut).toMatchObject({ status: 'cut', stations: [0.35, 0.5, 0.65, 0.8], axis: { length: 2020 } });
+  });
+
+  it('cuts through a clipped end that the stations do not reach', () => {
+    const cut = cutMemberBody(lines, items('mitredEnd'), { scaleToMm: 1 });
+    expectSameSection(cut, IPE300);
+    expect(cut).toMatchObject({ stations: [0.2, 0.35, 0.5, 0.65, 0.8], ifcType: 'IfcFacetedBrep' });
+  });
+
+  it.each([
+    ['a clipping along the whole length', 'clippedAlong', /gives no section: a clipping of the body removes material there/],
+    ['an open shell', 'openShell', /the cut does not close: the body is an open surface/],
+    ['two solids in one body', 'twoSolids', /the cut gives 2 separate pieces/],
+    ['a tapered body', 'tapered', /^The section varies along the member\.$/],
+    ['a flat body', 'flat', /^Its body \(IfcFacetedBrep\) is flat: it has no thickness across the member\.$/],
+    ['a stub shorter than 1.5 times its depth, without an axis', 'stub', /too short for its axis to be found: 250 long, 200 across/],
+  ])('refuses %s with a reason', (_, name, reason) => {
+    const cut = cutMemberBody(lines, items(name), { scaleToMm: 1 });
+    expect(cut).toEqual({ status: 'failed', reason: expect.stringMatching(reason) });
+    expect(JSON.stringify(cut)).not.toMatch(/NaN|undefined|Infinity/);
+  });
+
+  it('refuses a zero-length body with an axis, an empty item list and a body it cannot read', () => {
+    expect(cutMemberBody(lines, items('flat'), { scaleToMm: 1, axis: { start: [0, 0, 0], end: [0, 0, 1000] } })).toEqual({
+      status: 'failed',
+      reason: 'Its body (IfcFacetedBrep) has no length along the member.',
+    });
+    expect(cutMemberBody(lines, items('flat'), { scaleToMm: 1, axis: { start: [1, 2, 3], end: [1, 2, 3] } })).toEqual({ status: 'failed', reason: 'Its Axis has no length.' });
+    expect(cutMemberBody(lines, [], { scaleToMm: 1 })).toEqual({ status: 'failed', reason: 'The member has no body to cut.' });
+    expect(cutMemberBody(lines, [{ itemId: 12, type: 0, transform: undefined }], { scaleToMm: 1 })).toEqual({
+      status: 'failed',
+      reason: 'Its body is IfcCartesianPoint, which is not read as faces.',
+    });
+  });
 });
+

@@ -191,8 +191,8 @@ export function cutAxes(w: Vec3): CutAxes {
   return { u: cross(v, w), v, w };
 }
 
-/** Extent of the vertices along w and across it (largest of the u and v extents), model units. */
-function extents(faces: BodyFaces, axes: CutAxes): { from: number; to: number; across: number } {
+/** Extent of the vertices along w, and across it (the larger and the smaller of the u and v extents), model units. */
+function extents(faces: BodyFaces, axes: CutAxes): { from: number; to: number; across: number; thinnest: number } {
   const p = faces.positions;
   const low = [Infinity, Infinity, Infinity];
   const high = [-Infinity, -Infinity, -Infinity];
@@ -203,7 +203,8 @@ function extents(faces: BodyFaces, axes: CutAxes): { from: number; to: number; a
       high[k] = Math.max(high[k], along[k]);
     }
   }
-  return { from: low[2], to: high[2], across: Math.max(high[0] - low[0], high[1] - low[1]) };
+  const [acrossU, acrossV] = [high[0] - low[0], high[1] - low[1]];
+  return { from: low[2], to: high[2], across: Math.max(acrossU, acrossV), thinnest: Math.min(acrossU, acrossV) };
 }
 
 /** All items' faces in one set: a body written as several items is cut as one. */
@@ -271,10 +272,11 @@ export function cutMemberBody(lines: StepLines, items: readonly BodyItem[], opti
     if (!w) return failed(`Its body (${ifcType}) has no length.`);
   }
   const axes = cutAxes(w);
-  const { from, to, across } = extents(faces, axes);
+  const { from, to, across, thinnest } = extents(faces, axes);
   const length = to - from;
   const size = Math.max(length, across);
-  if (!(length > 1e-9 * size) || !(across > 0)) return failed(`Its body (${ifcType}) has no length along the member.`);
+  if (!(length > 1e-9 * size)) return failed(`Its body (${ifcType}) has no length along the member.`);
+  if (!(thinnest > 1e-9 * size)) return failed(`Its body (${ifcType}) is flat: it has no thickness across the member.`);
   if (!options.axis && length < MIN_SLENDERNESS * across) {
     return failed(`Its body (${ifcType}) is too short for its axis to be found: ${length.toPrecision(3)} long, ${across.toPrecision(3)} across, in model units.`);
   }

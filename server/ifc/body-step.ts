@@ -238,14 +238,13 @@ export function productShape(writer: StepWriter, items: number[]): number {
   return writer.add(`IFCPRODUCTDEFINITIONSHAPE($,$,(#${representation}))`);
 }
 
-/** An IfcMappedItem of these items, placed by an IfcCartesianTransformationOperator3D (axes x, z; origin). */
-export function mappedItem(writer: StepWriter, items: number[], axis1: Vec3, axis3: Vec3, origin: Vec3): number {
+/** An IfcMappedItem of these items, placed by an IfcCartesianTransformationOperator3D (axes x, y, z; origin). */
+export function mappedItem(writer: StepWriter, items: number[], axes: [Vec3, Vec3, Vec3], origin: Vec3): number {
   const representation = writer.add(`IFCSHAPEREPRESENTATION(#10,'Body','Brep',(${items.map((i) => `#${i}`).join(',')}))`);
   const map = writer.add(`IFCREPRESENTATIONMAP(#11,#${representation})`);
-  const d1 = writer.add(`IFCDIRECTION(${triple(axis1)})`);
-  const d3 = writer.add(`IFCDIRECTION(${triple(axis3)})`);
+  const [d1, d2, d3] = axes.map((a) => writer.add(`IFCDIRECTION(${triple(a)})`));
   const o = writer.add(`IFCCARTESIANPOINT(${triple(origin)})`);
-  const operator = writer.add(`IFCCARTESIANTRANSFORMATIONOPERATOR3D(#${d1},$,#${o},$,#${d3})`);
+  const operator = writer.add(`IFCCARTESIANTRANSFORMATIONOPERATOR3D(#${d1},#${d2},#${o},$,#${d3})`);
   return writer.add(`IFCMAPPEDITEM(#${map},#${operator})`);
 }
 
