@@ -24,7 +24,7 @@ describe('findSection name matching', () => {
     expect(findSection(name)?.name).toBe(expected);
   });
 
-  it.each(['IPE 301', 'HE 200 C', 'W18X51', 'UB 305x165x40', ''])('returns null for %s', (name) => {
+  it.each(['IPE 301', 'HE 200 C', 'W18X51', 'UB 305x165x41', '310UC97', ''])('returns null for %s', (name) => {
     expect(findSection(name)).toBeNull();
   });
 
