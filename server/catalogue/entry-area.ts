@@ -1,10 +1,9 @@
 /**
- * Cross-section area of a catalogue entry of any family, which orders a series by mass per metre and lets the tests
- * compare each table with its published areas. Rolled I-sections go through the engine's section mechanics; the
- * other families use the closed forms below (quarter-circle fillets and corners, flange slope linear).
+ * Cross-section areas of channels, hollow boxes and tubes in closed form (quarter-circle fillets and corners, flange
+ * slope linear), which let the tests compare each table with its published areas and masses. I-sections go through
+ * the engine's section mechanics instead.
  */
-import type { BoxDimensions, ChannelDimensions, SectionDimensions, TubeDimensions } from '../engine/section-family';
-import { sectionProperties } from '../engine/section-properties';
+import type { BoxDimensions, ChannelDimensions, TubeDimensions } from '../engine/section-family';
 
 /** Material added by a quarter-circle fillet of radius r in a right-angled corner. */
 function filletArea_mm2(radius_mm: number): number {
@@ -29,20 +28,4 @@ export function boxArea_mm2(b: BoxDimensions): number {
 export function tubeArea_mm2(t: TubeDimensions): number {
   const inner_mm = t.diameter_mm - 2 * t.wallThickness_mm;
   return (Math.PI / 4) * (t.diameter_mm * t.diameter_mm - inner_mm * inner_mm);
-}
-
-/** Area of the entry's section, or null for families whose catalogues are not kept here (tee, angle, plate, other). */
-export function entryArea_mm2(d: SectionDimensions): number | null {
-  switch (d.family) {
-    case 'I':
-      return sectionProperties({ ...d, fabrication: 'rolled' }).area_mm2;
-    case 'channel':
-      return channelArea_mm2(d);
-    case 'box':
-      return boxArea_mm2(d);
-    case 'tube':
-      return tubeArea_mm2(d);
-    default:
-      return null;
-  }
 }

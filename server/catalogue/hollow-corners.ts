@@ -1,24 +1,13 @@
 /**
- * Corner radii of rectangular and square hollow sections as each product standard sets them for section properties,
- * and the box dimensions built from them. The inner radius is the outer one less the wall (common practice, no source)
- * except where a standard gives both.
+ * Corner radii of rectangular and square hollow sections as the product standard sets them for section properties,
+ * and the box and tube dimensions built from them. The inner radius is the outer one less the wall (common practice,
+ * no source). EN 10219 (2t / 2.5t / 3t) and EN 10210 (1.5t outer, 1.0t inner) belong here with their tables.
  */
 import type { BoxDimensions, TubeDimensions } from '../engine/section-family';
 
 export interface CornerRadii {
   outer_mm: number;
   inner_mm: number;
-}
-
-/** EN 10219-2 cold-formed: outer 2t up to 6 mm, 2.5t over 6 up to 10 mm, 3t above (from memory). */
-export function en10219Corners(wall_mm: number): CornerRadii {
-  const outer_mm = wall_mm <= 6 ? 2 * wall_mm : wall_mm <= 10 ? 2.5 * wall_mm : 3 * wall_mm;
-  return { outer_mm, inner_mm: outer_mm - wall_mm };
-}
-
-/** EN 10210-2 hot-finished: outer 1.5t, inner 1.0t (from memory). */
-export function en10210Corners(wall_mm: number): CornerRadii {
-  return { outer_mm: 1.5 * wall_mm, inner_mm: wall_mm };
 }
 
 /**
@@ -28,11 +17,6 @@ export function en10210Corners(wall_mm: number): CornerRadii {
 export function asnzs1163Corners(wall_mm: number): CornerRadii {
   const outer_mm = wall_mm <= 3 ? 2 * wall_mm : 2.5 * wall_mm;
   return { outer_mm, inner_mm: outer_mm - wall_mm };
-}
-
-/** AISC HSS: properties use the design wall t_des and an outer corner radius of 2 t_des (from memory). */
-export function aiscHssCorners(designWall_mm: number): CornerRadii {
-  return { outer_mm: 2 * designWall_mm, inner_mm: designWall_mm };
 }
 
 export function hollowBox(depth_mm: number, width_mm: number, wall_mm: number, corners: CornerRadii): BoxDimensions {
