@@ -132,6 +132,10 @@ describe('cutMemberBody', () => {
         ...prismFaceLoops(END_PLATE, 20, { place: translated(2000) }),
       ]),
     ]);
+    // Two boxes end to end, meeting at mid-length: their end faces lie on the 50 % station's plane.
+    ids.splitAtMiddle = productShape(w, [
+      facetedBrep(w, [...prismFaceLoops(BOX, 1000), ...prismFaceLoops(BOX, 1000, { place: translated(1000) })]),
+    ]);
     ids.mitredEnd = productShape(w, [clipped(w, prismBrep(w, IPE300, 3000), [0, 0, 2900], [0, 0.3, 1])]);
     ids.clippedAlong = productShape(w, [clipped(w, prismBrep(w, IPE300, 3000), [0, 140, 0], [0, 1, 0])]);
     ids.openShell = productShape(w, [facetedBrep(w, prismFaceLoops(CHANNEL, 3000).slice(0, -1), true)]);
@@ -238,6 +242,12 @@ describe('cutMemberBody', () => {
     const cut = cutMemberBody(lines, items('copedWithPlate'), { scaleToMm: 1 });
     expectSameSection(cut, IPE300);
     expect(cut).toMatchObject({ status: 'cut', stations: [0.35, 0.5, 0.65, 0.8], axis: { length: 2020 } });
+  });
+
+  it('moves a plane off the vertices lying on it (two bodies meeting at a station)', () => {
+    const cut = cutMemberBody(lines, items('splitAtMiddle'), { scaleToMm: 1 });
+    expectSameSection(cut, BOX);
+    expect(cut).toMatchObject({ stations: [0.2, 0.35, 0.5, 0.65, 0.8], axis: { length: 2000 } });
   });
 
   it('cuts through a clipped end that the stations do not reach', () => {

@@ -139,9 +139,9 @@ function prismFaces(corners: PrismCorners): Vec3[][][] {
   return faces;
 }
 
-/** IfcFacetedBrep of faces (each a list of loops, the outer one first); `open` writes an IfcShellBasedSurfaceModel. */
-export function facetedBrep(writer: StepWriter, faces: Vec3[][][], open = false): number {
-  const faceIds = faces.map((loops) => {
+/** IfcFace lines of faces given as loops of points (the outer one first); answers their ids. */
+export function stepFaces(writer: StepWriter, faces: Vec3[][][]): number[] {
+  return faces.map((loops) => {
     const bounds = loops.map((loop, k) => {
       const points = loop.map((p) => writer.add(`IFCCARTESIANPOINT(${triple(p)})`));
       const polyLoop = writer.add(`IFCPOLYLOOP((${points.map((p) => `#${p}`).join(',')}))`);
@@ -149,7 +149,13 @@ export function facetedBrep(writer: StepWriter, faces: Vec3[][][], open = false)
     });
     return writer.add(`IFCFACE((${bounds.map((b) => `#${b}`).join(',')}))`);
   });
-  const list = faceIds.map((f) => `#${f}`).join(',');
+}
+
+/** IfcFacetedBrep of faces (each a list of loops, the outer one first); `open` writes an IfcShellBasedSurfaceModel. */
+export function facetedBrep(writer: StepWriter, faces: Vec3[][][], open = false): number {
+  const list = stepFaces(writer, faces)
+    .map((f) => `#${f}`)
+    .join(',');
   if (open) return writer.add(`IFCSHELLBASEDSURFACEMODEL((#${writer.add(`IFCOPENSHELL((${list}))`)}))`);
   return writer.add(`IFCFACETEDBREP(#${writer.add(`IFCCLOSEDSHELL((${list}))`)})`);
 }
