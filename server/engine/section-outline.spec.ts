@@ -1,27 +1,11 @@
 import { expectClose } from './expect-close';
 import { SectionInputError } from './section';
 import type { IDimensions, SectionDimensions } from './section-family';
+import { FAMILY_SECTIONS as SECTIONS } from './test-family-sections';
 import { chordCount, sectionOutline } from './section-outline';
 import { normalisePolygon, polygonProperties } from './section-polygon';
 import { sectionProperties } from './section-properties';
 
-/** Invented sections, one per family (test data only). */
-const SECTIONS: readonly SectionDimensions[] = [
-  { family: 'I', depth_mm: 400, webThickness_mm: 9, topFlange: { width_mm: 180, thickness_mm: 14, filletRadius_mm: 20 }, bottomFlange: { width_mm: 180, thickness_mm: 14, filletRadius_mm: 20 } },
-  {
-    family: 'I',
-    depth_mm: 260,
-    webThickness_mm: 9.4,
-    topFlange: { width_mm: 113, thickness_mm: 14.1, filletRadius_mm: 9.4, edgeRadius_mm: 5.6, slope_rad: Math.atan(0.14) },
-    bottomFlange: { width_mm: 113, thickness_mm: 14.1, filletRadius_mm: 9.4, edgeRadius_mm: 5.6, slope_rad: Math.atan(0.14) },
-  },
-  { family: 'channel', depth_mm: 220, width_mm: 80, webThickness_mm: 9, flangeThickness_mm: 12.5, rootRadius_mm: 12.5, edgeRadius_mm: 6.5, slope_rad: Math.atan(0.08) },
-  { family: 'tee', depth_mm: 150, width_mm: 200, webThickness_mm: 9, flangeThickness_mm: 15, rootRadius_mm: 18, webEdgeRadius_mm: 3 },
-  { family: 'angle', depth_mm: 120, width_mm: 80, thickness_mm: 10, rootRadius_mm: 11, edgeRadius_mm: 5.5 },
-  { family: 'box', depth_mm: 200, width_mm: 100, webThickness_mm: 8, flangeThickness_mm: 8, outerCornerRadius_mm: 16, innerCornerRadius_mm: 8 },
-  { family: 'tube', diameter_mm: 168.3, wallThickness_mm: 6.3 },
-  { family: 'plate', depth_mm: 300, width_mm: 20 },
-];
 
 describe('sectionOutline', () => {
   it.each(SECTIONS.map((d) => [d.family, d] as const))('draws a valid %s outline centred on its bounding box', (_, d) => {

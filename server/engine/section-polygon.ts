@@ -158,7 +158,8 @@ function cleanLoop(loop: Loop, eps: number): Point2_mm[] {
     const p = points[k];
     const next = points[(k + 1) % n];
     const repeated = Math.abs(p[0] - next[0]) <= eps && Math.abs(p[1] - next[1]) <= eps;
-    if (repeated || distanceFromLine(p, prev, next) <= eps) {
+    const spikeTip = Math.abs(prev[0] - next[0]) <= eps && Math.abs(prev[1] - next[1]) <= eps;
+    if (repeated || spikeTip || distanceFromLine(p, prev, next) <= eps) {
       points.splice(k, 1);
       // Removing a point can make its predecessor collinear or repeated: look at it again.
       k = k === 0 ? points.length - 1 : k - 1;
