@@ -2,12 +2,19 @@
  * Writes the invented warehouse frame as IFC (IFC4, IFC4X3 or IFC2X3) in mm, m, inch or foot, using every way a
  * member's section can be given: parametric I-shapes with fillets, asymmetric I-shapes (each schema's attribute
  * layout), a name-only outline, boolean-clipped ends, mapped items from a type, IfcMaterialProfileSetUsage, and non-I
- * braces, plus floor slabs as context. Attribute orders follow the IFC schemas (as web-ifc's generated ifc-schema.d.ts
- * spells their constructors).
+ * braces, plus floor slabs as context. With the 'real-exports' patterns, beams and columns also take the paths of
+ * real-export-sections.ts (outlines with arcs and voids, other families, bodies only, tapered members); with 'brep'
+ * bodies, every member's body is an IfcFacetedBrep instead. Attribute orders follow the IFC schemas (as web-ifc's
+ * generated ifc-schema.d.ts spells their constructors).
  */
+import { type AngleDimensions, type IDimensions, overallDepth_mm, type TubeDimensions } from '../../server/engine/section-family';
 import type { FrameLayout, MemberSlot, Vec3 } from './frame-layout';
-import type { AngleSpec, FrameSections, ISectionSpec, SectionSpec, TubeSpec } from './frame-sections';
+import type { FrameSections, ISectionSpec, SectionSpec } from './frame-sections';
 import { globalIdFor } from './global-id';
+import { type BodyKind, type PathWriting, REAL_EXPORT_SECTIONS, type RealExportPath, realExportPaths } from './real-export-sections';
+import { chordedLoop, type DrawableSection, sectionLoops } from './section-loops';
+import { SectionWriter } from './section-writer';
+import { copedMesh, loftMesh, type Mesh, placedMesh, type Point3, prismMesh, type SectionPolygons } from './solid-mesh';
 import { enumValue, list, NULL, DERIVED, real, reals, type StepValue, StepWriter, text, TRUE, typed } from './step-writer';
 
 export type FrameSchema = 'IFC4' | 'IFC4X3' | 'IFC2X3';
@@ -31,6 +38,14 @@ export type ProfilePath =
 
 export type Defect = 'zero-web' | 'negative-flange' | 'no-representation';
 
+/** 'standard': today's paths only; 'real-exports': beams and columns also take every path of real-export-sections.ts. */
+export type FramePatterns = 'standard' | 'real-exports';
+/** 'extruded': each path's own body; 'brep': every member's body an IfcFacetedBrep (no profile, no extrusion). */
+export type FrameBodies = 'extruded' | 'brep';
+/** FILE_SCHEMA spellings other than the schema's own: IFC4X3_RC2, an IFC4X3 draft name some exporters still write. */
+export type HeaderSchema = 'IFC4X3_RC2';
+export type MemberPath = ProfilePath | RealExportPath;
+
 export interface FrameWriteOptions {
   schema: FrameSchema;
   unit: FrameUnit;
@@ -41,6 +56,8 @@ export interface FrameWriteOptions {
   /** Where the site's origin lies in the project's coordinates; far from 0 to test shifting towards the origin. */
   siteOrigin_mm: Vec3;
   fileName: string;
+  patterns?: FramePatterns;
+  bodies?: FrameBodies;
 }
 
 const MM_PER_UNIT: Readonly<Record<FrameUnit, number>> = { mm: 1, m: 1000, inch: 25.4, foot: 304.8 };
@@ -71,6 +88,29 @@ export function pathOf(slot: MemberSlot): ProfilePath {
     case 'brace':
       return slot.roleIndex % 2 === 0 ? 'tube' : 'angle';
   }
+}
+
+/**
+ * The path of a member under the given patterns. With 'real-exports', columns cycle through the column paths and the
+ * tapered column, beams along x through today's x paths then every real-export beam path, beams along y through
+ * today's y paths then the real-export beam paths in reverse order: a 100-member model holds every path.
+ */
+export function memberPathOf(slot: MemberSlot, patterns: FramePatterns = 'standard', schema: FrameSchema = 'IFC4'): MemberPath {
+  if (patterns === 'standard' || slot.role === 'brace') return pathOf(slot);
+  const cycle = (paths: readonly MemberPath[]): MemberPath => paths[slot.roleIndex % paths.length];
+  const beams = realExportPaths(schema, 'beam');
+  switch (slot.role) {
+    case 'column':
+      return cycle(['column-ishape', 'column-ishape-axis', ...realExportPaths(schema, 'column')]);
+    case 'beam-x':
+      return cycle([...BEAM_X_PATHS, ...beams]);
+    case 'beam-y':
+      return cycle([...BEAM_Y_PATHS, ...beams.reverse()]);
+  }
+}
+
+export function isRealExportPath(path: MemberPath): path is RealExportPath {
+  return path in REAL_EXPORT_SECTIONS;
 }
 
 function defectOf(slot: MemberSlot, defects: boolean): Defect | undefined {
@@ -110,7 +150,11 @@ export function sectionOf(path: ProfilePath, sections: FrameSections, schema: Fr
 }
 
 /** Material names per path: EN grades in the metric variant, ASTM in the imperial one; 'Steel' names no grade. */
-function materialName(path: ProfilePath, imperial: boolean): string {
+function materialName(path: MemberPath, imperial: boolean): string {
+  if (isRealExportPath(path)) {
+    const hollow = ['box', 'tube'].includes(REAL_EXPORT_SECTIONS[path].expected.dimensions.family);
+    return imperial ? (hollow ? 'ASTM A500 Gr C' : 'ASTM A992') : hollow ? 'S355J2H' : 'S355JR';
+  }
   const names: Record<ProfilePath, [string, string]> = {
     'column-ishape': ['S355JR', 'ASTM A992'],
     'column-ishape-axis': ['S355JR', 'ASTM A992'],
@@ -150,6 +194,68 @@ function iOutline(spec: ISectionSpec): [number, number][] {
   ];
 }
 
+/** A generator section spec in the shared vocabulary (sloped flanges drawn parallel, at their nominal thickness). */
+export function dimensionsOf(spec: SectionSpec): DrawableSection {
+  switch (spec.kind) {
+    case 'i': {
+      const { depth_mm, webThickness_mm, topFlange, bottomFlange } = spec.input;
+      return { family: 'I', depth_mm, webThickness_mm, topFlange, bottomFlange } satisfies IDimensions;
+    }
+    case 'tube':
+      return { family: 'tube', diameter_mm: 2 * spec.radius_mm, wallThickness_mm: spec.wall_mm } satisfies TubeDimensions;
+    case 'angle':
+      return { family: 'angle', depth_mm: spec.leg_mm, width_mm: spec.leg_mm, thickness_mm: spec.thickness_mm, rootRadius_mm: spec.fillet_mm } satisfies AngleDimensions;
+  }
+}
+
+/** Chords a quarter circle gets in bodies given as faces: a few facets for fillets, more for a tube's wall. */
+function bodyChordsPerQuarter(section: DrawableSection): number {
+  return section.family === 'tube' ? 6 : 3;
+}
+
+function bodyPolygons(section: DrawableSection): SectionPolygons {
+  const loops = sectionLoops(section);
+  const chords = bodyChordsPerQuarter(section);
+  return { outer: chordedLoop(loops.outer, chords), voids: loops.voids.map((loop) => chordedLoop(loop, chords)) };
+}
+
+const depthOf = (section: DrawableSection): number => (section.family === 'z' ? section.depth_mm : overallDepth_mm(section));
+
+/** An I-section in the frame writer's own spec, for writing it as IfcIShapeProfileDef. */
+function iSpec(name: string, d: IDimensions): ISectionSpec {
+  const { depth_mm, webThickness_mm, topFlange, bottomFlange } = d;
+  const fabrication = topFlange.filletRadius_mm > 0 ? 'rolled' : 'welded';
+  return { kind: 'i', name, input: { depth_mm, webThickness_mm, topFlange, bottomFlange, fabrication } };
+}
+
+/** What a member's path writes: its representations (null: none at all), material select and names. */
+interface MemberBody {
+  representations: StepValue[] | null;
+  select: StepValue | undefined;
+  /** ObjectType; null writes '$'. */
+  objectType: string | null;
+  /** Name instead of the member's mark. */
+  name: string | undefined;
+  /** The member is an occurrence of the mapped beam type. */
+  mapped: boolean;
+}
+
+/** Where a sweep's own axes sit in the member's placement: its origin and its x, y (up the section) and z axes. */
+interface SweepFrame {
+  origin: Point3;
+  x: Point3;
+  y: Point3;
+  z: Point3;
+}
+
+/** Columns and braces sweep along the placement's z. */
+const ALONG_Z: SweepFrame = { origin: [0, 0, 0], x: [1, 0, 0], y: [0, 1, 0], z: [0, 0, 1] };
+
+/** Beams sweep along the placement's x, the section's y up, hanging below the reference line (top of steel). */
+function beamSweep(depth_mm: number): SweepFrame {
+  return { origin: [0, 0, -depth_mm / 2], x: [0, 1, 0], y: [0, 0, 1], z: [1, 0, 0] };
+}
+
 export class FrameWriter {
   private readonly w: StepWriter;
   private readonly scale: number;
@@ -166,6 +272,7 @@ export class FrameWriter {
   private readonly storeyElements: StepValue[][] = [];
   private mappedType: { type: StepValue; map: StepValue; spanFor: number; members: StepValue[] } | undefined;
   private profileSetUsage: StepValue | undefined;
+  private readonly sectionWriter: SectionWriter;
 
   constructor(
     private readonly options: FrameWriteOptions,
@@ -175,10 +282,18 @@ export class FrameWriter {
     this.scale = MM_PER_UNIT[options.unit];
     this.ifc2x3 = options.schema === 'IFC2X3';
     this.imperial = options.unit === 'inch' || options.unit === 'foot';
+    this.sectionWriter = new SectionWriter({
+      w: this.w,
+      ifc2x3: this.ifc2x3,
+      len: (value_mm) => this.len(value_mm),
+      angle: (value_rad) => this.angle(value_rad),
+      profilePosition: () => this.profilePosition(),
+    });
   }
 
-  static header(options: Pick<FrameWriteOptions, 'schema' | 'fileName'>): string {
-    const schema = options.schema === 'IFC4X3' ? 'IFC4X3_ADD2' : options.schema;
+  static header(options: Pick<FrameWriteOptions, 'schema' | 'fileName'> & { headerSchema?: HeaderSchema }): string {
+    if (options.headerSchema && options.schema !== 'IFC4X3') throw new Error(`${options.headerSchema} is a name of IFC4X3, not of ${options.schema}`);
+    const schema = options.headerSchema ?? (options.schema === 'IFC4X3' ? 'IFC4X3_ADD2' : options.schema);
     return [
       'ISO-10303-21;',
       'HEADER;',
@@ -350,26 +465,21 @@ export class FrameWriter {
     return this.w.add('IFCARBITRARYCLOSEDPROFILEDEF', enumValue('AREA'), text(spec.name), this.w.add('IFCPOLYLINE', list(points)));
   }
 
-  private tubeProfile(spec: TubeSpec): StepValue {
-    return this.w.add('IFCCIRCLEHOLLOWPROFILEDEF', enumValue('AREA'), text(spec.name), this.profilePosition(), this.len(spec.radius_mm), this.len(spec.wall_mm));
-  }
-
-  private angleProfile(spec: AngleSpec): StepValue {
-    const args = [enumValue('AREA'), text(spec.name), this.profilePosition(), this.len(spec.leg_mm), this.len(spec.leg_mm), this.len(spec.thickness_mm), this.len(spec.fillet_mm), NULL, NULL];
-    return this.w.add('IFCLSHAPEPROFILEDEF', ...args, ...(this.ifc2x3 ? [NULL, NULL] : []));
-  }
-
-  /** One profile entity per section and path, shared by all members that use it (as authoring tools do). */
-  private profile(path: ProfilePath, spec: SectionSpec): StepValue {
-    const key = `${path === 'name-only-outline' ? 'outline' : 'param'}:${spec.name}`;
+  /** One profile entity per key, shared by all members that use it (as authoring tools do). */
+  private cachedProfile(key: string, write: () => StepValue): StepValue {
     let profile = this.profiles.get(key);
     if (!profile) {
-      if (spec.kind === 'tube') profile = this.tubeProfile(spec);
-      else if (spec.kind === 'angle') profile = this.angleProfile(spec);
-      else profile = path === 'name-only-outline' ? this.outlineProfile(spec) : this.ishapeProfile(spec);
+      profile = write();
       this.profiles.set(key, profile);
     }
     return profile;
+  }
+
+  private profile(path: ProfilePath, spec: SectionSpec): StepValue {
+    return this.cachedProfile(`${path === 'name-only-outline' ? 'outline' : 'param'}:${spec.name}`, () => {
+      if (spec.kind !== 'i') return this.sectionWriter.parametric(spec.name, dimensionsOf(spec));
+      return path === 'name-only-outline' ? this.outlineProfile(spec) : this.ishapeProfile(spec);
+    });
   }
 
   private shapeRepresentation(context: StepValue, identifier: string, type: string, items: StepValue[]): StepValue {
@@ -381,10 +491,15 @@ export class FrameWriter {
     return this.shapeRepresentation(this.axisContext, 'Axis', 'Curve3D', [line]);
   }
 
-  /** Beams run along local X with Z up; the profile hangs below the reference line (top of steel). */
+  /** An extrusion along the sweep's z; tapered towards `endProfile` when one is given (IFC4 and later). */
+  private extrusion(profile: StepValue, sweep: SweepFrame, length_mm: number, endProfile?: StepValue): StepValue {
+    const position = sweep === ALONG_Z ? this.axis3d([0, 0, 0]) : this.axis3d([...sweep.origin], [...sweep.z], [...sweep.x]);
+    const args = [profile, position, this.direction([0, 0, 1]), this.len(length_mm)];
+    return endProfile ? this.w.add('IFCEXTRUDEDAREASOLIDTAPERED', ...args, endProfile) : this.w.add('IFCEXTRUDEDAREASOLID', ...args);
+  }
+
   private beamExtrusion(profile: StepValue, depth_mm: number, length_mm: number): StepValue {
-    const position = this.axis3d([0, 0, -depth_mm / 2], [1, 0, 0], [0, 1, 0]);
-    return this.w.add('IFCEXTRUDEDAREASOLID', profile, position, this.direction([0, 0, 1]), this.len(length_mm));
+    return this.extrusion(profile, beamSweep(depth_mm), length_mm);
   }
 
   /** Angled end cuts: the removed half space lies beyond a plane 60 mm in from each end. */
@@ -419,59 +534,137 @@ export class FrameWriter {
     return this.profileSetUsage;
   }
 
-  private entityFor(path: ProfilePath, slot: MemberSlot): { entity: string; predefined: string } {
-    const standardCase = this.options.schema === 'IFC4' && path === 'material-profile-set';
+  private entityFor(path: MemberPath, slot: MemberSlot): { entity: string; predefined: string } {
+    const standardCase = this.options.schema === 'IFC4' && path === 'material-profile-set' && this.options.bodies !== 'brep';
     if (slot.role === 'column') return { entity: 'IFCCOLUMN', predefined: 'COLUMN' };
     if (slot.role === 'brace') return { entity: 'IFCMEMBER', predefined: 'BRACE' };
     return { entity: standardCase ? 'IFCBEAMSTANDARDCASE' : 'IFCBEAM', predefined: 'BEAM' };
   }
 
   private writeMember(slot: MemberSlot, index: number, storeyPlacement: StepValue): StepValue {
-    const { schema, sections, layout, defects } = this.options;
-    const path = pathOf(slot);
-    const defect = defectOf(slot, defects);
-    const spec = sectionOf(path, sections, schema);
+    const { schema, layout } = this.options;
+    const path = memberPathOf(slot, this.options.patterns, schema);
     const span = sub(slot.end_mm, slot.start_mm);
     const length_mm = lengthOf(span);
     const local: Vec3 = [slot.start_mm[0], slot.start_mm[1], slot.start_mm[2] - slot.storey * layout.storeyHeight_mm];
     const materialEntity = this.material(materialName(path, this.imperial));
+    // Columns and braces run along local Z (braces lean in the XZ plane, so global Y stays their local X); beams run
+    // along local X with Z up.
+    const placement =
+      slot.role === 'column'
+        ? this.placement(storeyPlacement, local)
+        : slot.role === 'brace'
+          ? this.placement(storeyPlacement, local, unit(span), [0, 1, 0])
+          : this.placement(storeyPlacement, local, [0, 0, 1], unit(span));
+    const body = isRealExportPath(path) ? this.realExportBody(path, slot, length_mm, materialEntity) : this.standardBody(path, slot, length_mm, materialEntity);
+    const shape = body.representations ? this.w.add('IFCPRODUCTDEFINITIONSHAPE', NULL, NULL, list(body.representations)) : NULL;
+    const { entity, predefined } = this.entityFor(path, slot);
+    const mark = `${slot.role === 'column' ? 'C' : slot.role === 'brace' ? 'BR' : 'B'}${index + 1}`;
+    const objectType = body.objectType === null ? NULL : text(body.objectType);
+    const attributes = [this.guid(), this.ownerHistory, text(body.name ?? mark), NULL, objectType, placement, shape, text(`T${index + 1}`)];
+    const element = this.w.add(entity, ...attributes, ...(this.ifc2x3 ? [] : [enumValue(predefined)]));
+    if (body.select) this.associate(body.select, element);
+    if (body.mapped) this.mappedType?.members.push(element);
+    return element;
+  }
 
-    let placement: StepValue;
+  /** The body of one of today's paths (or its faceted BREP), with the defects the options ask for. */
+  private standardBody(path: ProfilePath, slot: MemberSlot, length_mm: number, material: StepValue): MemberBody {
+    const { schema, sections, defects } = this.options;
+    const defect = defectOf(slot, defects);
+    const spec = sectionOf(path, sections, schema);
+    const brep = this.options.bodies === 'brep';
     const representations: StepValue[] = [];
-    let select: StepValue | undefined = materialEntity;
+    let select: StepValue | undefined = material;
     if (slot.role === 'column' || slot.role === 'brace') {
-      // Columns and braces run along local Z; braces lean in the XZ plane, so global Y stays their local X.
-      placement = slot.role === 'column' ? this.placement(storeyPlacement, local) : this.placement(storeyPlacement, local, unit(span), [0, 1, 0]);
       if (path !== 'column-ishape') representations.push(this.axisRepresentation([0, 0, length_mm]));
-      const solid = this.w.add('IFCEXTRUDEDAREASOLID', this.profile(path, spec), this.axis3d([0, 0, 0]), this.direction([0, 0, 1]), this.len(length_mm));
-      representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'SweptSolid', [solid]));
+      const solid = brep ? undefined : this.extrusion(this.profile(path, spec), ALONG_Z, length_mm);
+      representations.push(solid ? this.shapeRepresentation(this.bodyContext, 'Body', 'SweptSolid', [solid]) : this.faceBody('faceted-brep', this.sweptMesh(dimensionsOf(spec), length_mm), ALONG_Z));
     } else {
       if (spec.kind !== 'i') throw new Error(`beam path ${path} needs an I-section`);
-      placement = this.placement(storeyPlacement, local, [0, 0, 1], unit(span));
       if (path !== 'extrusion-only') representations.push(this.axisRepresentation([length_mm, 0, 0]));
-      let profile = this.profile(path, spec);
-      if (defect === 'zero-web') profile = this.ishapeProfile({ ...spec, name: `${spec.name} zero web` }, { webThickness_mm: 0 });
-      if (defect === 'negative-flange') profile = this.ishapeProfile({ ...spec, name: `${spec.name} negative flange` }, { flangeThickness_mm: -spec.input.topFlange.thickness_mm });
-      if (path === 'mapped-type' && !defect) {
-        select = undefined;
-        representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'MappedRepresentation', [this.mappedItem(spec, length_mm, materialEntity)]));
-      } else if (path === 'clipped') {
-        representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'Clipping', [this.clippedEnds(this.beamExtrusion(profile, spec.input.depth_mm, length_mm), length_mm)]));
+      if (brep) {
+        representations.push(this.faceBody('faceted-brep', this.sweptMesh(dimensionsOf(spec), length_mm), beamSweep(spec.input.depth_mm)));
       } else {
-        representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'SweptSolid', [this.beamExtrusion(profile, spec.input.depth_mm, length_mm)]));
-      }
-      if (path === 'material-profile-set' && !defect) {
-        select = this.ifc2x3 ? this.w.add('IFCMATERIALLIST', list([materialEntity])) : this.materialProfileSetUsage(spec, materialEntity);
+        let profile = this.profile(path, spec);
+        if (defect === 'zero-web') profile = this.ishapeProfile({ ...spec, name: `${spec.name} zero web` }, { webThickness_mm: 0 });
+        if (defect === 'negative-flange') profile = this.ishapeProfile({ ...spec, name: `${spec.name} negative flange` }, { flangeThickness_mm: -spec.input.topFlange.thickness_mm });
+        if (path === 'mapped-type' && !defect) {
+          select = undefined;
+          representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'MappedRepresentation', [this.mappedItem(spec, length_mm, material)]));
+        } else if (path === 'clipped') {
+          representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'Clipping', [this.clippedEnds(this.beamExtrusion(profile, spec.input.depth_mm, length_mm), length_mm)]));
+        } else {
+          representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'SweptSolid', [this.beamExtrusion(profile, spec.input.depth_mm, length_mm)]));
+        }
+        if (path === 'material-profile-set' && !defect) {
+          select = this.ifc2x3 ? this.w.add('IFCMATERIALLIST', list([material])) : this.materialProfileSetUsage(spec, material);
+        }
       }
     }
-    const shape = defect === 'no-representation' ? NULL : this.w.add('IFCPRODUCTDEFINITIONSHAPE', NULL, NULL, list(representations));
-    const { entity, predefined } = this.entityFor(path, slot);
-    const name = defect ? `DEFECT ${defect}` : `${slot.role === 'column' ? 'C' : slot.role === 'brace' ? 'BR' : 'B'}${index + 1}`;
-    const attributes = [this.guid(), this.ownerHistory, text(name), NULL, text(spec.name), placement, shape, text(`T${index + 1}`)];
-    const element = this.w.add(entity, ...attributes, ...(this.ifc2x3 ? [] : [enumValue(predefined)]));
-    if (select) this.associate(select, element);
-    if (path === 'mapped-type' && !defect) this.mappedType?.members.push(element);
-    return element;
+    return {
+      representations: defect === 'no-representation' ? null : representations,
+      select,
+      objectType: spec.name,
+      name: defect ? `DEFECT ${defect}` : undefined,
+      mapped: path === 'mapped-type' && !defect && !brep,
+    };
+  }
+
+  /** The body of a real-export path, named where real exports name it. */
+  private realExportBody(path: RealExportPath, slot: MemberSlot, length_mm: number, material: StepValue): MemberBody {
+    const { designation, designationIn, writing } = REAL_EXPORT_SECTIONS[path];
+    const sweep = slot.role === 'column' ? ALONG_Z : beamSweep(depthOf(writing.kind === 'tapered' ? writing.start : writing.section));
+    const representations: StepValue[] = [];
+    // Faceted BREP members come without an Axis representation, as many exports write them; the rest have one.
+    if (!(writing.kind === 'body' && writing.body === 'faceted-brep')) {
+      representations.push(this.axisRepresentation(slot.role === 'column' ? [0, 0, length_mm] : [length_mm, 0, 0]));
+    }
+    if (this.options.bodies === 'brep') {
+      representations.push(this.faceBody('faceted-brep', this.realExportMesh(writing, length_mm), sweep));
+    } else if (writing.kind === 'body') {
+      representations.push(this.faceBody(writing.body, this.realExportMesh(writing, length_mm), sweep));
+    } else {
+      const name = designation ?? path;
+      let solid: StepValue;
+      if (writing.kind === 'tapered') {
+        const start = this.cachedProfile(`${path}:start`, () => this.ishapeProfile(iSpec(name, writing.start)));
+        const end = this.cachedProfile(`${path}:end`, () => this.ishapeProfile(iSpec(writing.endDesignation, writing.end)));
+        solid = this.extrusion(start, sweep, length_mm, end);
+      } else {
+        const profile = this.cachedProfile(path, () =>
+          writing.kind === 'outline' ? this.sectionWriter.outline(name, writing.section, writing.curve) : this.sectionWriter.parametric(name, writing.section),
+        );
+        solid = this.extrusion(profile, sweep, length_mm);
+      }
+      representations.push(this.shapeRepresentation(this.bodyContext, 'Body', 'SweptSolid', [solid]));
+    }
+    return {
+      representations,
+      select: material,
+      objectType: designationIn === 'ObjectType' ? designation : null,
+      name: designationIn === 'Name' && designation ? designation : undefined,
+      mapped: false,
+    };
+  }
+
+  private realExportMesh(writing: PathWriting, length_mm: number): Mesh {
+    if (writing.kind === 'tapered') return loftMesh(bodyPolygons(writing.start), bodyPolygons(writing.end), length_mm);
+    if (writing.kind === 'body' && writing.cope) {
+      const cut_mm = depthOf(writing.section) / 2 - writing.cope.depth_mm;
+      return copedMesh(bodyPolygons(writing.section).outer, length_mm, writing.cope.length_mm, cut_mm);
+    }
+    return this.sweptMesh(writing.section, length_mm);
+  }
+
+  private sweptMesh(section: DrawableSection, length_mm: number): Mesh {
+    return prismMesh(bodyPolygons(section), length_mm);
+  }
+
+  /** A body given by its faces, placed in the member's coordinates as the sweep it stands for. */
+  private faceBody(kind: BodyKind, mesh: Mesh, sweep: SweepFrame): StepValue {
+    const item = this.sectionWriter.body(kind, placedMesh(mesh, sweep.origin, sweep.x, sweep.y, sweep.z));
+    return this.shapeRepresentation(this.bodyContext, 'Body', kind === 'faceted-brep' ? 'Brep' : 'Tessellation', [item]);
   }
 
   private writeSlab(storey: number, storeyPlacement: StepValue): StepValue {

@@ -3,13 +3,15 @@
  *
  *   ts-node -P tsconfig.server.json test/generator/generate-frame.ts --members 20000 --schema IFC4 --unit mm --out x.ifc
  *
- * Options: --members N (default 100), --schema IFC4|IFC4X3|IFC2X3 (IFC4), --unit mm|m|inch|foot (mm),
- * --defects (three broken beams on the first floor), --far (site 485 km / 5270 km from the project origin).
+ * Options: --members N (default 100), --schema IFC4|IFC4X3|IFC4X3_RC2|IFC2X3 (IFC4; IFC4X3_RC2 writes IFC4X3 under
+ * that old header name), --unit mm|m|inch|foot (mm), --defects (three broken beams on the first floor), --far (site
+ * 485 km / 5270 km from the project origin), --patterns standard|real-exports (standard: see frame-writer.ts),
+ * --bodies extruded|brep (extruded: every member's body an IfcFacetedBrep with brep).
  */
 import * as fs from 'node:fs';
 import { frameLayout, type FrameLayout, type Vec3 } from './frame-layout';
 import { imperialSections, metricSections } from './frame-sections';
-import { type FrameSchema, type FrameUnit, FrameWriter } from './frame-writer';
+import { type FrameBodies, type FramePatterns, type FrameSchema, type FrameUnit, FrameWriter, type HeaderSchema } from './frame-writer';
 
 export interface GenerateFrameOptions {
   members: number;
@@ -18,6 +20,12 @@ export interface GenerateFrameOptions {
   defects?: boolean;
   siteOrigin_mm?: Vec3;
   fileName?: string;
+  /** 'standard' (default) or 'real-exports': every way real exports give a section, in one model. */
+  patterns?: FramePatterns;
+  /** 'extruded' (default) or 'brep': every member's body an IfcFacetedBrep, for the ingest benchmark. */
+  bodies?: FrameBodies;
+  /** FILE_SCHEMA spelling other than the schema's own (IFC4X3_RC2 with schema IFC4X3). */
+  headerSchema?: HeaderSchema;
 }
 
 /** Survey-style coordinates of a site far from the project origin (invented). */
@@ -28,7 +36,10 @@ function write(options: GenerateFrameOptions, sink: (text: string) => void): Fra
   const unit = options.unit ?? 'mm';
   const layout = frameLayout(options.members);
   const fileName = options.fileName ?? `harbour-warehouse-${options.members}.ifc`;
-  sink(FrameWriter.header({ schema, fileName }));
+  if (options.defects && (options.patterns === 'real-exports' || options.bodies === 'brep')) {
+    throw new Error('defects are written with the standard patterns and extruded bodies only');
+  }
+  sink(FrameWriter.header({ schema, fileName, headerSchema: options.headerSchema }));
   new FrameWriter(
     {
       schema,
@@ -38,6 +49,8 @@ function write(options: GenerateFrameOptions, sink: (text: string) => void): Fra
       defects: options.defects ?? false,
       siteOrigin_mm: options.siteOrigin_mm ?? [0, 0, 0],
       fileName,
+      patterns: options.patterns ?? 'standard',
+      bodies: options.bodies ?? 'extruded',
     },
     sink,
   ).write();
@@ -70,14 +83,21 @@ function parseArguments(argv: readonly string[]): GenerateFrameOptions & { out: 
   const members = Number(value('--members') ?? 100);
   const schema = (value('--schema') ?? 'IFC4').toUpperCase();
   const unit = value('--unit') ?? 'mm';
+  const patterns = value('--patterns') ?? 'standard';
+  const bodies = value('--bodies') ?? 'extruded';
   const out = value('--out');
   if (!Number.isInteger(members) || members < 1) throw new Error('--members must be a positive whole number');
-  if (!['IFC4', 'IFC4X3', 'IFC2X3'].includes(schema)) throw new Error('--schema must be IFC4, IFC4X3 or IFC2X3');
+  if (!['IFC4', 'IFC4X3', 'IFC4X3_RC2', 'IFC2X3'].includes(schema)) throw new Error('--schema must be IFC4, IFC4X3, IFC4X3_RC2 or IFC2X3');
   if (!['mm', 'm', 'inch', 'foot'].includes(unit)) throw new Error('--unit must be mm, m, inch or foot');
+  if (!['standard', 'real-exports'].includes(patterns)) throw new Error('--patterns must be standard or real-exports');
+  if (!['extruded', 'brep'].includes(bodies)) throw new Error('--bodies must be extruded or brep');
   if (!out) throw new Error('--out <file.ifc> is required');
   return {
     members,
-    schema: schema as FrameSchema,
+    schema: schema === 'IFC4X3_RC2' ? 'IFC4X3' : (schema as FrameSchema),
+    headerSchema: schema === 'IFC4X3_RC2' ? 'IFC4X3_RC2' : undefined,
+    patterns: patterns as FramePatterns,
+    bodies: bodies as FrameBodies,
     unit: unit as FrameUnit,
     defects: argv.includes('--defects'),
     siteOrigin_mm: argv.includes('--far') ? FAR_SITE_ORIGIN_MM : undefined,
