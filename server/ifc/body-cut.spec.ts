@@ -3,7 +3,8 @@
  * writes them; invented members). Polygon area and second moment by the shoelace and polygon-moment formulas (common
  * practice, no source); IPE 300 against EN 10365 (from memory).
  */
-import type { SectionPolygon } from '../engine/section-family';
+import type { Point2_mm, SectionPolygon } from '../engine/section-family';
+import { polygonProperties, signedArea_mm2 } from '../engine/section-polygon';
 import { type BodyCut, cutMemberBody, type BodyItem } from './body-cut';
 import {
   boxOutline,
@@ -25,27 +26,14 @@ import { openModel, type OpenedModel } from './open-model';
 import { ShapeReader } from './shape-reader';
 import { StepLines } from './step-lines';
 
-/** Area, centroid and second moments about the centroid of loops (outer CCW, voids CW): polygon-moment formulas (common practice, no source). */
-function polygonProperties(loops: readonly (readonly (readonly number[])[])[]): { area: number; cx: number; cy: number; ixx: number; iyy: number } {
-  let [a, sx, sy, sxx, syy] = [0, 0, 0, 0, 0];
-  for (const loop of loops) {
-    for (let i = 0, j = loop.length - 1; i < loop.length; j = i++) {
-      const [x0, y0] = loop[j];
-      const [x1, y1] = loop[i];
-      const c = x0 * y1 - x1 * y0;
-      a += c / 2;
-      sx += ((x0 + x1) * c) / 6;
-      sy += ((y0 + y1) * c) / 6;
-      sxx += ((y0 * y0 + y0 * y1 + y1 * y1) * c) / 12;
-      syy += ((x0 * x0 + x0 * x1 + x1 * x1) * c) / 12;
-    }
-  }
-  const [cx, cy] = [sx / a, sy / a];
-  return { area: a, cx, cy, ixx: sxx - a * cy * cy, iyy: syy - a * cx * cx };
+/** Area, centroid and second moments about the centroid by the polygon-moment formulas (common practice, no source). */
+function properties(outer: readonly Point2_mm[], voids: readonly Point2_mm[][]): { area: number; cx: number; cy: number; ixx: number; iyy: number } {
+  const p = polygonProperties({ outer: [...outer], voids: voids.map((v) => [...v]) });
+  return { area: p.area_mm2, cx: p.centroid_mm[0], cy: p.centroid_mm[1], ixx: p.ix_mm4, iyy: p.iy_mm4 };
 }
 
-const outlineProperties = (o: Outline2): ReturnType<typeof polygonProperties> => polygonProperties([o.outer, ...o.voids]);
-const cutProperties = (p: SectionPolygon): ReturnType<typeof polygonProperties> => polygonProperties([p.outer, ...p.voids]);
+const outlineProperties = (o: Outline2): ReturnType<typeof properties> => properties(o.outer, o.voids);
+const cutProperties = (p: SectionPolygon): ReturnType<typeof properties> => properties(p.outer, p.voids);
 
 function bounds(loop: readonly (readonly number[])[]): { width: number; depth: number } {
   const xs = loop.map((p) => p[0]);
@@ -71,8 +59,8 @@ function expectSameSection(cut: BodyCut, outline: Outline2, scaleToMm = 1): Sect
   expect(cut.polygon.voids).toHaveLength(outline.voids.length);
   // Centroid at the frame origin; outer counter-clockwise, voids clockwise.
   expect(Math.abs(actual.cx) + Math.abs(actual.cy)).toBeLessThan(1e-6 * bounds(outline.outer).depth * scaleToMm);
-  expect(polygonProperties([cut.polygon.outer]).area).toBeGreaterThan(0);
-  for (const v of cut.polygon.voids) expect(polygonProperties([v]).area).toBeLessThan(0);
+  expect(signedArea_mm2(cut.polygon.outer)).toBeGreaterThan(0);
+  for (const v of cut.polygon.voids) expect(signedArea_mm2(v)).toBeLessThan(0);
   return cut.polygon;
 }
 

@@ -4,10 +4,11 @@
  * section that repeats between stations is kept. A body whose stations all differ is a varying member and is refused:
  * guessing one of its sections could check the member with a section it does not have.
  */
-import type { SectionPolygon } from '../engine/section-family';
+import type { Point2_mm, SectionPolygon } from '../engine/section-family';
+import { polygonProperties } from '../engine/section-polygon';
 import { type BodyFaces, type HalfSpaceClip, readBodyFaces } from './body-faces';
 import { add, cross, dot, type Mat4, normalize, scale, subtract, type Vec3 } from './matrix4';
-import { type CutAxes, planeSection, sectionCentroid, toSectionPolygon } from './plane-section';
+import { type CutAxes, planeSection, toSectionPolygon } from './plane-section';
 import type { StepLines } from './step-lines';
 
 /** A body item without a profile, with the mapping transform that places it in the element (ElementShape.bodyItems). */
@@ -231,8 +232,8 @@ function mergeFaces(sets: readonly BodyFaces[]): BodyFaces {
   return { positions, loopVertices, loopStarts, faceStarts };
 }
 
-/** True when a clipping removes material from this section (some point of it lies on the removed side). */
-function clippedAt(outer: readonly number[][], offset: number, axes: CutAxes, clips: readonly HalfSpaceClip[], size: number): boolean {
+/** True when a clipping removes material from this section (some point of it, in model units, lies on the removed side). */
+function clippedAt(outer: readonly Point2_mm[], offset: number, axes: CutAxes, clips: readonly HalfSpaceClip[], size: number): boolean {
   return clips.some((clip) =>
     outer.some(([u, v]) => {
       const point = add(add(scale(axes.u, u), scale(axes.v, v)), scale(axes.w, offset));
@@ -309,11 +310,13 @@ export function cutMemberBody(lines: StepLines, items: readonly BodyItem[], opti
     return failed(cuts.length >= 2 ? 'The section varies along the member.' : `Its body (${ifcType}) gives one section only: ${sections.find((s) => s.status === 'failed')!.reason}.`);
   }
   const kept = best.reduce((a, b) => (Math.abs(b.station - 0.5) < Math.abs(a.station - 0.5) ? b : a));
-  const centre = sectionCentroid(kept.outer, kept.voids);
-  const origin = add(add(scale(axes.u, centre[0]), scale(axes.v, centre[1])), scale(axes.w, from));
+  const polygon = toSectionPolygon(kept.outer, kept.voids, options.scaleToMm);
+  const [cx_mm, cy_mm] = polygonProperties(polygon).centroid_mm;
+  const origin = add(add(scale(axes.u, cx_mm / options.scaleToMm), scale(axes.v, cy_mm / options.scaleToMm)), scale(axes.w, from));
+  const centred = (loop: SectionPolygon['outer']): SectionPolygon['outer'] => loop.map(([x, y]) => [x - cx_mm, y - cy_mm] as const);
   return {
     status: 'cut',
-    polygon: toSectionPolygon(kept.outer, kept.voids, centre, options.scaleToMm),
+    polygon: { outer: centred(polygon.outer), voids: polygon.voids.map(centred) },
     frame: { origin, ...axes },
     axis: { start: origin, end: add(origin, scale(axes.w, length)), length },
     stations: best.map((c) => c.station),

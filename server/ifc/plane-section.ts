@@ -4,6 +4,7 @@
  * are chained into closed loops, and the loops become one outline with its voids in the plane's own axes.
  */
 import type { Point2_mm, SectionPolygon } from '../engine/section-family';
+import { insideLoop, signedArea_mm2 as signedArea } from '../engine/section-polygon';
 import type { BodyFaces } from './body-faces';
 import type { Vec3 } from './matrix4';
 
@@ -18,8 +19,8 @@ export type PlaneSection =
   | {
       status: 'section';
       /** Outer loop counter-clockwise, voids clockwise, in model units along u and v (element origin). */
-      outer: number[][];
-      voids: number[][][];
+      outer: Point2_mm[];
+      voids: Point2_mm[][];
       area: number;
       /** Bounding box [minU, minV, maxU, maxV], model units. */
       bounds: [number, number, number, number];
@@ -32,25 +33,6 @@ const JOIN_FRACTION = 1e-5;
 const STRAIGHT_FRACTION = 1e-7;
 
 const dot = (p: Float64Array, i: number, a: Vec3): number => p[i] * a[0] + p[i + 1] * a[1] + p[i + 2] * a[2];
-
-/** Signed area of a loop of [u, v] points (positive when counter-clockwise). */
-export function signedArea(loop: readonly (readonly number[])[]): number {
-  let twice = 0;
-  for (let i = 0, j = loop.length - 1; i < loop.length; j = i++) twice += loop[j][0] * loop[i][1] - loop[i][0] * loop[j][1];
-  return twice / 2;
-}
-
-/** Even–odd test of a point against a loop. */
-export function insideLoop(point: readonly number[], loop: readonly (readonly number[])[]): boolean {
-  let inside = false;
-  const [x, y] = point;
-  for (let i = 0, j = loop.length - 1; i < loop.length; j = i++) {
-    const [xi, yi] = loop[i];
-    const [xj, yj] = loop[j];
-    if (yi > y !== yj > y && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
-}
 
 /**
  * Segments (u1, v1, u2, v2 after one another) cut by the plane w·p = offset. Answers undefined when a vertex lies
@@ -112,7 +94,7 @@ function pairAlongLine(crossings: readonly number[], segments: number[]): void {
 }
 
 /** Joins segment ends that meet (within `join`) into points, each point knowing its two segments' other ends. */
-function chainLoops(segments: readonly number[], join: number): { loops: number[][][] } | { reason: string } {
+function chainLoops(segments: readonly number[], join: number): { loops: Point2_mm[][] } | { reason: string } {
   const cells = new Map<number, number[]>();
   const pointU: number[] = [];
   const pointV: number[] = [];
@@ -150,10 +132,10 @@ function chainLoops(segments: readonly number[], join: number): { loops: number[
   if (open > 0) return { reason: 'the cut does not close: the body is an open surface or has gaps between its faces' };
   if (links.some((l) => l.length > 2)) return { reason: 'the cut meets itself: the body touches itself or has faces inside it' };
   const visited = new Uint8Array(links.length);
-  const loops: number[][][] = [];
+  const loops: Point2_mm[][] = [];
   for (let first = 0; first < links.length; first++) {
     if (visited[first] || links[first].length === 0) continue;
-    const loop: number[][] = [];
+    const loop: Point2_mm[] = [];
     let previous = -1;
     let current = first;
     while (!visited[current]) {
@@ -170,11 +152,11 @@ function chainLoops(segments: readonly number[], join: number): { loops: number[
 }
 
 /** Drops points on the straight line through their neighbours (a triangulated face splits a straight side). */
-function withoutStraightPoints(loop: number[][], tolerance: number): number[][] {
+function withoutStraightPoints(loop: Point2_mm[], tolerance: number): Point2_mm[] {
   let points = loop;
   for (let changed = true; changed && points.length > 3; ) {
     changed = false;
-    const kept: number[][] = [];
+    const kept: Point2_mm[] = [];
     for (let i = 0; i < points.length; i++) {
       const a = kept.length > 0 ? kept[kept.length - 1] : points[points.length - 1];
       const b = points[i];
@@ -224,24 +206,8 @@ export function planeSection(faces: BodyFaces, axes: CutAxes, offset: number, si
   return { status: 'section', outer, voids, area, bounds };
 }
 
-/** Area-weighted centre of an outline with its voids (model units). */
-export function sectionCentroid(outer: readonly number[][], voids: readonly number[][][]): [number, number] {
-  let area = 0;
-  let su = 0;
-  let sv = 0;
-  for (const loop of [outer, ...voids]) {
-    for (let i = 0, j = loop.length - 1; i < loop.length; j = i++) {
-      const cross = loop[j][0] * loop[i][1] - loop[i][0] * loop[j][1];
-      area += cross;
-      su += (loop[j][0] + loop[i][0]) * cross;
-      sv += (loop[j][1] + loop[i][1]) * cross;
-    }
-  }
-  return [su / (3 * area), sv / (3 * area)];
-}
-
-/** The section as a SectionPolygon in millimetres, measured from `centre` (model units). */
-export function toSectionPolygon(outer: readonly number[][], voids: readonly number[][][], centre: readonly number[], scaleToMm: number): SectionPolygon {
-  const toMm = (loop: readonly number[][]): Point2_mm[] => loop.map(([u, v]) => [(u - centre[0]) * scaleToMm, (v - centre[1]) * scaleToMm] as const);
+/** The section as a SectionPolygon in millimetres, from the element origin's projection on the plane. */
+export function toSectionPolygon(outer: readonly Point2_mm[], voids: readonly Point2_mm[][], scaleToMm: number): SectionPolygon {
+  const toMm = (loop: readonly Point2_mm[]): Point2_mm[] => loop.map(([u, v]) => [u * scaleToMm, v * scaleToMm] as const);
   return { outer: toMm(outer), voids: voids.map(toMm) };
 }
