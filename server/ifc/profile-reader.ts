@@ -5,8 +5,10 @@
  * IfcAsymmetricIShapeProfileDef shares positions 3–10 between the schemas (bottom flange width, depth, web, bottom
  * flange thickness and fillet, then the top flange's width, thickness and fillet); IFC2X3 then ends with
  * CentreOfGravityInY, while IFC4 adds edge radius and slope of each flange. In IFC2X3 the top flange thickness may be
- * omitted, meaning the bottom one's. Profiles that only carry a name (outlines such as IfcArbitraryClosedProfileDef, or
- * a bare IfcProfileDef) are left to the section catalogue; every other profile type is not an I-section.
+ * omitted, meaning the bottom one's. The other parametric families are read by parametric-profile.ts; outlines
+ * (IfcArbitraryClosedProfileDef, …WithVoids) are measured from their curves (profile-curve.ts), and a built-up
+ * IfcCompositeProfileDef of plates is combined into one outline (rectangle-union.ts). A bare IfcProfileDef, an open
+ * or centre-line profile, and an outline whose curve cannot be measured are left to the section catalogue by name.
  */
 import {
   IFCARBITRARYCLOSEDPROFILEDEF,
@@ -14,16 +16,20 @@ import {
   IFCARBITRARYPROFILEDEFWITHVOIDS,
   IFCASYMMETRICISHAPEPROFILEDEF,
   IFCCENTERLINEPROFILEDEF,
+  IFCCOMPOSITEPROFILEDEF,
   IFCDERIVEDPROFILEDEF,
   IFCISHAPEPROFILEDEF,
   IFCMIRROREDPROFILEDEF,
   IFCPROFILEDEF,
+  IFCRECTANGLEPROFILEDEF,
 } from 'web-ifc';
 import type { SectionDimensions, SectionPolygon } from '../engine/section-family';
 import type { MemberFlag } from './model-read-result';
-import { readTransformationOperator } from './placement-reader';
 import type { Mat4 } from './matrix4';
+import { isParametricFamily, parametricDimensions } from './parametric-profile';
+import { readAxisPlacement, readTransformationOperator } from './placement-reader';
 import { oriented, pathExtent_mm, pathLoop, readClosedPath, signedDoubleArea_mm2, transformedPolygon } from './profile-curve';
+import { type Rectangle_mm, rectangleUnion } from './rectangle-union';
 import { numberOf, refOf, refsOf, type StepLines, type StepValue, textOf } from './step-lines';
 
 export interface FlangeReading {
@@ -124,6 +130,8 @@ export class ProfileReader {
     if (line.type === IFCARBITRARYCLOSEDPROFILEDEF || line.type === IFCARBITRARYPROFILEDEFWITHVOIDS) {
       return this.outline(line.type === IFCARBITRARYPROFILEDEFWITHVOIDS ? refsOf(line.args[3]) : [], refOf(line.args[2]), ifcType, name);
     }
+    if (isParametricFamily(line.type)) return this.parametric(line.type, line.args, ifcType, name);
+    if (line.type === IFCCOMPOSITEPROFILEDEF) return this.composite(line.args, ifcType, name, depth);
     if (NAME_ONLY_TYPES.has(line.type)) return { kind: 'name-only', ifcType, name, flags: [] };
     return { kind: 'not-i-shape', ifcType, name };
   }
@@ -136,6 +144,48 @@ export class ProfileReader {
   private angle(value: StepValue | undefined): number | undefined {
     const v = numberOf(value);
     return v === undefined ? undefined : v * this.radiansPerAngleUnit;
+  }
+
+  private parametric(type: number, args: StepValue[], ifcType: string, name: string | null): ProfileReading {
+    const read = parametricDimensions(type, (i) => this.length(args[i]), (i) => this.angle(args[i]));
+    if ('problem' in read) return { kind: 'unreadable', ifcType, name, reason: `its profile '${name ?? ifcType}' ${read.problem}` };
+    return { kind: 'parametric', ifcType, name, dimensions: read.dimensions, flags: [] };
+  }
+
+  /**
+   * IfcCompositeProfileDef: one part is read as that part; several are combined into one outline when all are
+   * rectangles square to the profile's axes (plates of a welded I or box), else the built-up section is not read.
+   */
+  private composite(args: StepValue[], ifcType: string, name: string | null, depth: number): ProfileReading {
+    const partIds = refsOf(args[2]);
+    const label = name ?? textOf(args[3]) ?? ifcType;
+    if (partIds.length === 1 && depth < MAX_DERIVATION_DEPTH) {
+      const part = this.readUncached(partIds[0], depth + 1);
+      return { ...part, name: name ?? part.name };
+    }
+    const built = `its profile '${label}' is a built-up section of ${partIds.length} profiles`;
+    const rectangles = partIds.map((id) => this.placedRectangle(id));
+    if (partIds.length === 0 || rectangles.some((r) => r === undefined)) {
+      return { kind: 'unreadable', ifcType, name, reason: `${built}, which is read only when its parts are rectangles square to its axes` };
+    }
+    const union = rectangleUnion(rectangles as Rectangle_mm[]);
+    if ('problem' in union) return { kind: 'unreadable', ifcType, name, reason: `${built}: ${union.problem}` };
+    return { kind: 'outline', ifcType, name, polygon: union, flags: [] };
+  }
+
+  /** An IfcRectangleProfileDef where its Position puts it, when its sides are parallel to the axes. */
+  private placedRectangle(id: number): Rectangle_mm | undefined {
+    const line = this.lines.line(id);
+    const x = this.length(line?.args[3]);
+    const y = this.length(line?.args[4]);
+    if (line?.type !== IFCRECTANGLEPROFILEDEF || !(x! > 0) || !(y! > 0)) return undefined;
+    const m = readAxisPlacement(this.lines, refOf(line.args[2]));
+    const along = Math.abs(m[1]) <= 1e-9;
+    if (!along && Math.abs(m[0]) > 1e-9) return undefined;
+    const [halfX, halfY] = along ? [x! / 2, y! / 2] : [y! / 2, x! / 2];
+    const cx = m[12] * this.scaleToMm;
+    const cy = m[13] * this.scaleToMm;
+    return { minX: cx - halfX, maxX: cx + halfX, minY: cy - halfY, maxY: cy + halfY };
   }
 
   /**
