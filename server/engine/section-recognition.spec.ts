@@ -1,5 +1,5 @@
 import { expectClose } from './expect-close';
-import type { IDimensions, Point2_mm, SectionDimensions, SectionPolygon } from './section-family';
+import { type IDimensions, type Point2_mm, type SectionDimensions, type SectionPolygon, overallDepth_mm } from './section-family';
 import { sectionOutline } from './section-outline';
 import { polygonProperties, transformPolygon } from './section-polygon';
 import { sectionProperties } from './section-properties';
@@ -33,7 +33,7 @@ function toLocal(r: RecognisedSection, [x, y]: Point2_mm): Point2_mm {
 
 describe('recogniseSection: round trips from the idealised outline', () => {
   it.each(FAMILY_SECTIONS.map((d, i) => [`${d.family} #${i}`, d] as const))('reads %s back within 0.01 %%', (_, d) => {
-    const outline = sectionOutline(d, 0.0005 * (d.family === 'tube' ? d.diameter_mm : d.depth_mm));
+    const outline = sectionOutline(d, 0.0005 * overallDepth_mm(d));
     const r = recognised(recogniseSection(outline));
     expectDimensions(r.dimensions, d, 1e-4);
     expect(r.flags).not.toContain('coarse-arcs');
@@ -42,7 +42,7 @@ describe('recogniseSection: round trips from the idealised outline', () => {
   it.each(FAMILY_SECTIONS.filter((d) => d.family !== 'tube').map((d, i) => [`${d.family} #${i}`, d] as const))(
     'reads %s turned by 30° and moved, and says how it lies',
     (_, d) => {
-      const outline = sectionOutline(d, 0.0005 * (d.family === 'tube' ? d.diameter_mm : d.depth_mm));
+      const outline = sectionOutline(d, 0.0005 * overallDepth_mm(d));
       const angle = (30 * Math.PI) / 180;
       const cut = transformPolygon(outline, angle, [-250, 120]);
       const r = recognised(recogniseSection(cut));

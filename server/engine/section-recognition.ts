@@ -235,6 +235,7 @@ function offCentre(l: Local, stretch: [number, number], centre_mm: number, what:
 }
 
 function readI(l: Local): Reading | NearMiss | undefined {
+  if (l.p.voids.length > 0) return undefined;
   const h = l.depth_mm / 2;
   const web = webAt(l, [0, h / 3, -h / 3]);
   const { top, bottom } = outerStretches(l);
@@ -265,6 +266,7 @@ function readI(l: Local): Reading | NearMiss | undefined {
 }
 
 function readChannel(l: Local): Reading | NearMiss | undefined {
+  if (l.p.voids.length > 0) return undefined;
   const h = l.depth_mm / 2;
   const b = l.width_mm / 2;
   const web = webAt(l, [0, h / 3, -h / 3]);
@@ -302,6 +304,7 @@ function readChannel(l: Local): Reading | NearMiss | undefined {
 }
 
 function readTee(l: Local): Reading | NearMiss | undefined {
+  if (l.p.voids.length > 0) return undefined;
   const h = l.depth_mm / 2;
   const stem = webAt(l, [-h / 2, 0]);
   const { top, bottom } = outerStretches(l);
@@ -333,6 +336,7 @@ function readTee(l: Local): Reading | NearMiss | undefined {
 }
 
 function readAngle(l: Local): Reading | NearMiss | undefined {
+  if (l.p.voids.length > 0) return undefined;
   const h = l.depth_mm / 2;
   const b = l.width_mm / 2;
   const upright = [single(l, 'y', h / 2), single(l, 'y', 0)];
@@ -468,9 +472,9 @@ function confirm(outline: SectionPolygon, props: PolygonProperties, d: SectionDi
   const fine_mm = FINE_CHORDS_RELATIVE * depth_mm;
   const what = FAMILY_WORDS[d.family];
   try {
-    let rebuilt = sectionOutline(d, fine_mm / 5);
-    const drawn_mm = chordError_mm(outline, rebuilt.arcs ?? []);
-    if (drawn_mm > fine_mm / 5) rebuilt = sectionOutline(d, drawn_mm * (1 + 1e-6));
+    // The arcs do not depend on the chord tolerance: take them from a quick coarse drawing.
+    const drawn_mm = chordError_mm(outline, sectionOutline(d, depth_mm).arcs ?? []);
+    const rebuilt = sectionOutline(d, Math.max(fine_mm / 5, drawn_mm * (1 + 1e-6)));
     const r = polygonProperties(rebuilt);
     const checks: [string, number, number][] = [
       ['area', relativeDifference(r.area_mm2, props.area_mm2), options.areaTolerance ?? AREA_TOLERANCE],
