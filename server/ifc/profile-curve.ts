@@ -157,7 +157,8 @@ class PathReader {
       const vector = this.lines.line(refOf(basis.args[1]));
       const [dx, dy] = numbersOf(this.lines.line(refOf(vector?.args[0]))?.args[0]);
       const magnitude = (numberOf(vector?.args[1]) ?? 1) * this.units.scaleToMm;
-      const direction = Number.isFinite(dx) && Number.isFinite(dy) ? unit(dx, dy) : undefined;
+      // hypot is NaN for a missing direction and 0 for a zero one: neither gives a direction.
+      const direction = Math.hypot(dx, dy) > 0 ? unit(dx, dy) : undefined;
       const ends = trims.map(({ point, parameter }) => {
         if (point !== undefined && (preferPoint || parameter === undefined || !direction)) return this.point(point);
         if (parameter === undefined || !direction) throw new CurveError(`trimmed line #${id} has a trim without point or parameter`);
