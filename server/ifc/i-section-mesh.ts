@@ -1,46 +1,18 @@
 /**
  * Our own mesh of an extruded I-section, for members web-ifc cannot tessellate (it rejects
- * IfcAsymmetricIShapeProfileDef, for one). The outline is centred on its bounding box as IFC places parameterised
- * profiles, with quarter-circle root fillets; flange slopes and toe radii are left out: the mesh is for display only,
- * the check uses the exact section properties.
+ * IfcAsymmetricIShapeProfileDef, for one). The outline is the engine's idealised I (section-outline.ts: root fillets,
+ * sloped flanges, toe radii), centred on its bounding box as IFC places parameterised profiles.
  */
-import type { MemberProfile } from './model-read-result';
+import { sectionOutline } from '../engine/section-outline';
+import type { IMemberProfile } from './model-read-result';
 import { cross, normalize, type Vec3 } from './matrix4';
 
 export type Point2 = [number, number];
 
-/** Arc points of a fillet, from angle a0 to a1 (radians) about (cx, cy), excluding the first point. */
-function arc(cx: number, cy: number, r: number, a0: number, a1: number, segments: number): Point2[] {
-  const points: Point2[] = [];
-  for (let i = 1; i <= segments; i++) {
-    const a = a0 + ((a1 - a0) * i) / segments;
-    points.push([cx + r * Math.cos(a), cy + r * Math.sin(a)]);
-  }
-  return points;
-}
-
-/** Counter-clockwise outline in mm; `segments` per quarter-circle fillet. */
-export function iSectionOutline(profile: Pick<MemberProfile, 'depth_mm' | 'webThickness_mm' | 'topFlange' | 'bottomFlange'>, segments = 3): Point2[] {
-  const h = profile.depth_mm / 2;
-  const w = profile.webThickness_mm / 2;
-  const { topFlange: top, bottomFlange: bottom } = profile;
-  const yb = -h + bottom.thickness_mm;
-  const yt = h - top.thickness_mm;
-  const rb = bottom.filletRadius_mm;
-  const rt = top.filletRadius_mm;
-  const q = Math.PI / 2;
-  const points: Point2[] = [[-bottom.width_mm / 2, -h], [bottom.width_mm / 2, -h], [bottom.width_mm / 2, yb]];
-  points.push([w + rb, yb], ...(rb > 0 ? arc(w + rb, yb + rb, rb, 3 * q, 2 * q, segments) : [[w, yb] as Point2]));
-  points.push([w, yt - rt], ...(rt > 0 ? arc(w + rt, yt - rt, rt, 2 * q, q, segments) : [[w + rt, yt] as Point2]));
-  points.push([top.width_mm / 2, yt], [top.width_mm / 2, h], [-top.width_mm / 2, h], [-top.width_mm / 2, yt]);
-  points.push([-w - rt, yt], ...(rt > 0 ? arc(-w - rt, yt - rt, rt, q, 0, segments) : [[-w, yt] as Point2]));
-  points.push([-w, yb + rb], ...(rb > 0 ? arc(-w - rb, yb + rb, rb, 0, -q, segments) : [[-w - rb, yb] as Point2]));
-  points.push([-bottom.width_mm / 2, yb]);
-  // Zero radii repeat corner points; drop the repeats so that no edge has zero length.
-  return points.filter((p, i) => {
-    const next = points[(i + 1) % points.length];
-    return Math.abs(p[0] - next[0]) > 1e-9 || Math.abs(p[1] - next[1]) > 1e-9;
-  });
+/** Counter-clockwise outline in mm; the chords stray at most `chordTolerance_mm` from the arcs (0.1 % of the depth: display only). */
+export function iSectionOutline(profile: Pick<IMemberProfile, 'depth_mm' | 'webThickness_mm' | 'topFlange' | 'bottomFlange'>, chordTolerance_mm = profile.depth_mm / 1000): Point2[] {
+  const { depth_mm, webThickness_mm, topFlange, bottomFlange } = profile;
+  return sectionOutline({ family: 'I', depth_mm, webThickness_mm, topFlange, bottomFlange }, chordTolerance_mm).outer.map(([x, y]): Point2 => [x, y]);
 }
 
 function cross2(o: Point2, a: Point2, b: Point2): number {
