@@ -288,7 +288,9 @@ export function normalisePolygon(p: SectionPolygon): NormalisedPolygon {
     if (nest > 0) return { status: 'invalid', reason: `Opening ${l} of the section lies inside opening ${nest}.` };
     voids.push(signedArea_mm2(loop) > 0 ? [...loop].reverse() : loop);
   }
-  const polygon: SectionPolygon = p.arcs ? { outer, voids, arcs: p.arcs } : { outer, voids };
+  // Arcs only refine radii: malformed ones are dropped rather than refused.
+  const arcs = Array.isArray(p.arcs) ? p.arcs.filter((a) => a && allFinite([a.centre]) && Number.isFinite(a.radius_mm) && a.radius_mm > 0) : [];
+  const polygon: SectionPolygon = arcs.length > 0 ? { outer, voids, arcs } : { outer, voids };
   if (!(polygonProperties(polygon).area_mm2 > eps * eps)) return { status: 'invalid', reason: 'The section outline encloses no area.' };
   return { status: 'valid', polygon };
 }

@@ -62,6 +62,20 @@ describe('recogniseSection: round trips from the idealised outline', () => {
     expect(Math.abs(r.rotation_rad)).toBeCloseTo(Math.PI / 2, 12);
   });
 
+  it.each(FAMILY_SECTIONS.filter((d) => d.family === 'channel' || d.family === 'tee').map((d) => [d.family, d] as const))(
+    'reads a %s turned upside down and reports the half turn',
+    (_, d) => {
+      const r = recognised(recogniseSection(transformPolygon(sectionOutline(d, 0.1), Math.PI, [0, 0])));
+      expectDimensions(r.dimensions, d, 1e-4);
+      expect(Math.abs(r.rotation_rad)).toBeCloseTo(Math.PI, 12);
+    },
+  );
+
+  it('ignores malformed arcs instead of failing', () => {
+    const outline = { ...sectionOutline(FAMILY_SECTIONS[0], 0.2), arcs: [{ centre: [Number.NaN, 0], radius_mm: 5 }] } as SectionPolygon;
+    expect(recogniseSection(outline).status).toBe('recognised');
+  });
+
   it('reads radii from the arcs the file gave when the outline carries them', () => {
     const r = recognised(recogniseSection(sectionOutline(FAMILY_SECTIONS[0], 0.2)));
     expect(r.flags).toContain('radii-from-arcs');
