@@ -11,7 +11,8 @@ import { frameLayout } from './frame-layout';
 import { type FrameSchema, isRealExportPath, type MemberPath, memberPathOf } from './frame-writer';
 import { generateFrame, type GenerateFrameOptions } from './generate-frame';
 import { REAL_EXPORT_SECTIONS, type RealExportPath, realExportPaths } from './real-export-sections';
-import { overallDepth_mm } from '../../server/engine/section-family';
+import { type BoxDimensions, overallDepth_mm } from '../../server/engine/section-family';
+import { enclosedVolume, type Point3 } from './solid-mesh';
 
 const MEMBERS = 100;
 
@@ -65,6 +66,7 @@ function entityCounts(modelId: number, expressId: number): Map<string, number> {
 interface MeshExtent {
   size_mm: [number, number, number];
   triangles: number;
+  volume_mm3: number;
 }
 
 /** The bounding box of web-ifc's tessellation of a member, in model units (mm here). */
@@ -73,24 +75,31 @@ function meshExtent(modelId: number, expressId: number): MeshExtent {
   const min = [Infinity, Infinity, Infinity];
   const max = [-Infinity, -Infinity, -Infinity];
   let triangles = 0;
+  let volume_mm3 = 0;
   for (let g = 0; g < mesh.geometries.size(); g++) {
     const placed = mesh.geometries.get(g);
     const geometry = api.GetGeometry(modelId, placed.geometryExpressID);
     const vertices = api.GetVertexArray(geometry.GetVertexData(), geometry.GetVertexDataSize());
-    triangles += geometry.GetIndexDataSize() / 3;
+    const indices = api.GetIndexArray(geometry.GetIndexData(), geometry.GetIndexDataSize());
     const m = placed.flatTransformation;
+    // web-ifc meshes are y-up in metres (the model's mm scaled), so each coordinate is taken back to mm.
+    const points: Point3[] = [];
     for (let v = 0; v < vertices.length; v += 6) {
       const [x, y, z] = [vertices[v], vertices[v + 1], vertices[v + 2]];
-      for (let k = 0; k < 3; k++) {
-        const world = m[k] * x + m[4 + k] * y + m[8 + k] * z + m[12 + k];
-        min[k] = Math.min(min[k], world);
-        max[k] = Math.max(max[k], world);
-      }
+      const world = [0, 1, 2].map((k) => (m[k] * x + m[4 + k] * y + m[8 + k] * z + m[12 + k]) * 1000);
+      world.forEach((value, k) => {
+        min[k] = Math.min(min[k], value);
+        max[k] = Math.max(max[k], value);
+      });
+      points.push(world as unknown as Point3);
     }
+    const faces: [number, number, number][] = [];
+    for (let i = 0; i < indices.length; i += 3) faces.push([indices[i], indices[i + 1], indices[i + 2]]);
+    triangles += faces.length;
+    volume_mm3 += enclosedVolume(points, faces);
     geometry.delete();
   }
-  // web-ifc meshes are y-up in metres scaled by the model's unit: mm here, so lengths come back in metres.
-  return { size_mm: [0, 1, 2].map((k) => (max[k] - min[k]) * 1000) as [number, number, number], triangles };
+  return { size_mm: [0, 1, 2].map((k) => max[k] - min[k]) as [number, number, number], triangles, volume_mm3 };
 }
 
 /** The entities each path must hold (beside its member, placement and material). */
@@ -186,6 +195,35 @@ describe.each(['IFC4', 'IFC2X3'] as const)('real-export patterns in %s, read wit
       }
     }
     expect([...new Set(wrong)]).toEqual([]);
+  });
+});
+
+/** Area of a rectangular hollow section with corner radii: 2·t·(B + H − 2·t) − (4 − π)·(ro² − ri²) for one wall
+ * thickness (common practice, no source), with unequal walls for a welded box (sharp corners). */
+function hollowArea_mm2(d: BoxDimensions): number {
+  const solid = d.width_mm * d.depth_mm - (4 - Math.PI) * (d.outerCornerRadius_mm ?? 0) ** 2;
+  const hole = (d.width_mm - 2 * d.webThickness_mm) * (d.depth_mm - 2 * d.flangeThickness_mm) - (4 - Math.PI) * (d.innerCornerRadius_mm ?? 0) ** 2;
+  return solid - hole;
+}
+
+describe('hollow sections through web-ifc', () => {
+  it('keep their void: the tessellated volume is the hollow area times the length (within 1.2 %)', () => {
+    const frame = open({ members: MEMBERS, schema: 'IFC4', patterns: 'real-exports' });
+    try {
+      const measured: Record<string, number> = {};
+      for (const [path, ids] of frame.byPath) {
+        if (!isRealExportPath(path) || REAL_EXPORT_SECTIONS[path].expected.dimensions.family !== 'box') continue;
+        const extent = meshExtent(frame.modelId, ids[0]);
+        const length_mm = Math.max(extent.size_mm[0], extent.size_mm[2]);
+        const ratio = Math.abs(extent.volume_mm3) / length_mm / hollowArea_mm2(REAL_EXPORT_SECTIONS[path].expected.dimensions as BoxDimensions);
+        measured[path] = Number(ratio.toFixed(3));
+      }
+      expect(Object.keys(measured).sort()).toEqual(['brep-box', 'outline-rounded-rhs', 'outline-welded-box', 'polygonal-box', 'rectangle-hollow', 'triangulated-box']);
+      // A filled void would give 4 to 10 times the area; chords across corner arcs take off up to about 1 %.
+      for (const [path, ratio] of Object.entries(measured)) expect({ path, within: Math.abs(ratio - 1) <= 0.012, ratio }).toEqual({ path, within: true, ratio });
+    } finally {
+      api.CloseModel(frame.modelId);
+    }
   });
 });
 

@@ -227,3 +227,13 @@ export function triangulate(mesh: Mesh): [number, number, number][] {
   }
   return triangles;
 }
+
+/** Volume enclosed by outward triangles (divergence theorem: the sum of a·(b×c)/6 over the triangles). */
+export function enclosedVolume(points: readonly Point3[], triangles: readonly (readonly [number, number, number])[]): number {
+  let sum = 0;
+  for (const [a, b, c] of triangles) {
+    const [p, q, r] = [points[a], points[b], points[c]];
+    sum += p[0] * (q[1] * r[2] - q[2] * r[1]) - p[1] * (q[0] * r[2] - q[2] * r[0]) + p[2] * (q[0] * r[1] - q[1] * r[0]);
+  }
+  return sum / 6;
+}
