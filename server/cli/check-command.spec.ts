@@ -20,10 +20,16 @@ const ROOT = path.resolve(__dirname, '../..');
 const LAUNCH = `require('ts-node').register({ transpileOnly: true, project: ${JSON.stringify(path.join(ROOT, 'tsconfig.server.json'))} });
 require(${JSON.stringify(path.join(__dirname, 'main.ts'))}).run(process.argv.slice(1));`;
 
+const SPAWN_LIMIT_MS = 120_000;
+
 function taulens(...args: string[]): { status: number | null; stdout: string; stderr: string } {
-  const run = spawnSync(process.execPath, ['-e', LAUNCH, ...args], { cwd: ROOT, encoding: 'utf8', timeout: 120_000 });
+  const run = spawnSync(process.execPath, ['-e', LAUNCH, ...args], { cwd: ROOT, encoding: 'utf8', timeout: SPAWN_LIMIT_MS });
   return { status: run.status, stdout: run.stdout, stderr: run.stderr };
 }
+
+// Each child compiles the sources with ts-node: seconds alone, past jest's 30 s when the whole suite loads the machine.
+// A test spawns up to three children; spawnSync's own limit bounds each.
+jest.setTimeout(3 * SPAWN_LIMIT_MS);
 
 interface CheckedMember {
   globalId: string;
