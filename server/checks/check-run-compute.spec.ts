@@ -3,15 +3,15 @@ import type { GradeId } from '../engine/grades';
 import { sectionProperties } from '../engine/section-properties';
 import { shearStressProfile } from '../engine/shear-stress';
 import { fromNewtons, toNewtons } from '../engine/units';
-import type { MemberMaterial, MemberProfile } from '../ifc/model-read-result';
+import type { IMemberProfile, MemberMaterial, MemberProfile } from '../ifc/model-read-result';
 import type { GoverningShear } from '../results/governing-shear';
 import { type CheckParametersInput, checkParametersSchema } from './check-parameters';
 import { type CheckableMember, type CheckRunProgress, computeCheckRun } from './check-run-compute';
 
-function profileOf(name: string, source: MemberProfile['source'] = 'ifc'): MemberProfile {
+function profileOf(name: string, source: MemberProfile['source'] = 'ifc-profile'): IMemberProfile {
   const section = findSection(name);
   if (!section) throw new Error(`${name} is not in the catalogue`);
-  return { name: section.name, source, ifcType: 'IfcIShapeProfileDef', ...toSectionInput(section) };
+  return { family: 'I', name: section.name, source, ifcType: 'IfcIShapeProfileDef', ...toSectionInput(section) };
 }
 
 const material = (grade: GradeId, fy_MPa: number): MemberMaterial => ({ name: `Steel ${grade}`, grade, fy_MPa, assumed: false });

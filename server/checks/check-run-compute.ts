@@ -22,7 +22,7 @@ import { EngineInputError } from '../engine/input-error';
 import type { Fabrication, ISectionInput } from '../engine/section';
 import { shearStressProfile } from '../engine/shear-stress';
 import { formatNumber as f, step } from '../engine/trace';
-import type { MemberFlag, MemberProfile, MemberRecord } from '../ifc/model-read-result';
+import { type IMemberProfile, isIProfile, type MemberFlag, type MemberRecord } from '../ifc/model-read-result';
 import type { GoverningShear } from '../results/governing-shear';
 import type { CheckParameters } from './check-parameters';
 
@@ -142,7 +142,7 @@ function checkOneMember(
     flags,
   });
   if (member.status === 'not-applicable') return unchecked('not-applicable', member.reason ?? 'The profile is not an I-section.');
-  if (!member.profile) return unchecked('not-checked', member.reason ?? 'No I-section could be read for this member.');
+  if (!isIProfile(member.profile)) return unchecked('not-checked', member.reason ?? 'No I-section could be read for this member.');
   if (shears.length === 0) return unchecked('not-checked', 'No shear results were matched to this member.', [...memberFlags, 'no-results']);
 
   const { section, overridden } = checkedSection(member.profile, overrides);
@@ -195,17 +195,17 @@ interface MaterialChoice {
 }
 
 /** The section as a run checks it: the model's dimensions, with the run's fabrication for that profile if it has one. */
-function checkedSection(profile: MemberProfile, overrides: ReadonlyMap<string, Fabrication>): { section: ISectionInput; overridden: boolean } {
+function checkedSection(profile: IMemberProfile, overrides: ReadonlyMap<string, Fabrication>): { section: ISectionInput; overridden: boolean } {
   const fabrication = overrides.get(sectionKey(profile.name)) ?? profile.fabrication;
   const { depth_mm, webThickness_mm, topFlange, bottomFlange } = profile;
   return { section: { depth_mm, webThickness_mm, topFlange, bottomFlange, fabrication }, overridden: fabrication !== profile.fabrication };
 }
 
 /** What the member's data tells the result beside the engine's own flags. */
-function contextFlagsOf(profile: MemberProfile, material: MaterialChoice): CheckFlag[] {
+function contextFlagsOf(profile: IMemberProfile, material: MaterialChoice): CheckFlag[] {
   const flags: CheckFlag[] = [];
   if (material.assumed) flags.push('assumed-grade');
-  if (profile.source === 'catalogue') flags.push('catalogue-section');
+  if (profile.source === 'catalogue' || profile.source === 'project-catalogue') flags.push('catalogue-section');
   return flags;
 }
 
@@ -224,7 +224,7 @@ export interface MemberEvaluation {
  * engine refuses; null for a member without an I-section.
  */
 export function evaluateMember(member: CheckableMember, parameters: CheckParameters, shear_N: number): MemberEvaluation | null {
-  if (!member.profile || member.status === 'not-applicable') return null;
+  if (!isIProfile(member.profile) || member.status === 'not-applicable') return null;
   const { section } = checkedSection(member.profile, fabricationOverrides(parameters));
   const material = materialOf(member, parameters);
   const capacity = withResistanceFactor(prepareCapacity(section, { grade: material.grade }, parameters.standard, engineParamsOf(parameters)), parameters);

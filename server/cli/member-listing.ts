@@ -6,6 +6,7 @@
  * reason, and its flags start with 'needs-review'; its profile and section are given when they could be read.
  */
 import type { MemberRecord, ModelInfo } from '../ifc/model-read-result';
+import { overallDepth_mm, webThickness_mm } from '../engine/section-family';
 
 export interface ListedMember {
   globalId: string;
@@ -56,12 +57,14 @@ const COLUMNS: readonly { title: string; width: number; value: (m: ListedMember)
   { title: 'Class', width: 20, value: (m) => m.ifcClass },
   { title: 'Storey', width: 12, value: (m) => m.storey ?? '' },
   { title: 'Status', width: 14, value: (m) => m.status },
-  { title: 'Profile', width: 18, value: (m) => (m.profile ? `${m.profile.name}${m.profile.source === 'catalogue' ? ' (cat.)' : ''}` : '') },
+  { title: 'Profile', width: 18, value: (m) => m.profile?.name ?? '' },
+  { title: 'Family', width: 8, value: (m) => m.profile?.family ?? '' },
+  { title: 'Found from', width: 17, value: (m) => m.profile?.source ?? '' },
   { title: 'Fab.', width: 6, value: (m) => m.profile?.fabrication ?? '' },
   {
     title: 'd × tw mm',
     width: 13,
-    value: (m) => (m.profile ? `${round(m.profile.depth_mm)} × ${round(m.profile.webThickness_mm)}` : ''),
+    value: (m) => (m.profile ? `${round(overallDepth_mm(m.profile))} × ${round(webThickness_mm(m.profile) ?? 0)}` : ''),
   },
   { title: 'Grade', width: 8, value: (m) => (m.material ? `${m.material.grade}${m.material.assumed ? '*' : ''}` : '') },
   { title: 'fy MPa', width: 7, value: (m) => (m.material?.fy_MPa != null ? round(m.material.fy_MPa) : '') },

@@ -36,7 +36,7 @@ describe('taulens members', () => {
     expect(zeroWeb).toMatchObject({ status: 'not-applicable', flags: ['needs-review', 'invalid-profile'], reason: expect.stringContaining('webThickness_mm') });
     const column = output.members.find((m: { tag: string }) => m.tag === 'T1');
     expect(Object.keys(column)).toEqual(expect.arrayContaining(['globalId', 'tag', 'name', 'ifcClass', 'storey', 'status', 'profile', 'section', 'material']));
-    expect(column.profile).toMatchObject({ name: 'HE 300 B', source: 'ifc', fabrication: 'rolled', depth_mm: 300, webThickness_mm: 11 });
+    expect(column.profile).toMatchObject({ name: 'HE 300 B', family: 'I', source: 'ifc-profile', fabrication: 'rolled', depth_mm: 300, webThickness_mm: 11 });
     expect(Object.keys(column.section)).toEqual(['area_mm2', 'iMajor_mm4', 'qMax_mm3', 'neutralAxisFromBottom_mm']);
     expect(run.stderr).toBe('');
   });

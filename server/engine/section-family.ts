@@ -11,6 +11,18 @@ import type { FlangeInput } from './section';
 export const SECTION_FAMILIES = ['I', 'channel', 'tee', 'angle', 'box', 'tube', 'plate', 'other'] as const;
 export type SectionFamily = (typeof SECTION_FAMILIES)[number];
 
+/** The families in words, for the members page, the CLI and messages. */
+export const SECTION_FAMILY_LABELS: Readonly<Record<SectionFamily, string>> = {
+  I: 'I-section',
+  channel: 'channel',
+  tee: 'tee',
+  angle: 'angle',
+  box: 'hollow or box section',
+  tube: 'circular hollow section',
+  plate: 'plate or flat bar',
+  other: 'other shape',
+};
+
 /** Doubly or singly symmetric I or H: rolled (root fillets) or welded (plates). */
 export interface IDimensions {
   family: 'I';
@@ -127,6 +139,40 @@ export function overallWidth_mm(d: SectionDimensions): number {
   }
 }
 
+/** Thickness of the plate(s) carrying shear parallel to y: the web, the stem, the vertical leg or the tube wall. */
+export function webThickness_mm(d: SectionDimensions): number | null {
+  switch (d.family) {
+    case 'I':
+    case 'channel':
+    case 'tee':
+    case 'box':
+      return d.webThickness_mm;
+    case 'angle':
+      return d.thickness_mm;
+    case 'tube':
+      return d.wallThickness_mm;
+    case 'plate':
+    case 'other':
+      return null;
+  }
+}
+
+/** Thickness of the flange(s) (the top flange of an I), null for families without one. */
+export function flangeThickness_mm(d: SectionDimensions): number | null {
+  switch (d.family) {
+    case 'I':
+      return d.topFlange.thickness_mm;
+    case 'channel':
+    case 'tee':
+    case 'box':
+      return d.flangeThickness_mm;
+    case 'angle':
+      return d.widthLegThickness_mm ?? d.thickness_mm;
+    default:
+      return null;
+  }
+}
+
 /** Thickest plate of the section, which sets the yield strength by thickness (EN 10025-2). */
 export function thickestPlate_mm(d: SectionDimensions): number {
   switch (d.family) {
@@ -143,6 +189,33 @@ export function thickestPlate_mm(d: SectionDimensions): number {
     case 'plate':
     case 'other':
       return Math.min(d.depth_mm, d.width_mm);
+  }
+}
+
+const mm = (value: number): string => String(Math.round(value * 100) / 100);
+
+/** The dimensions in a short line, millimetres: 'd 300, tw 7.1, flanges 150×10.7'. */
+export function dimensionsLabel(d: SectionDimensions): string {
+  switch (d.family) {
+    case 'I': {
+      const { topFlange: top, bottomFlange: bottom } = d;
+      const same = top.width_mm === bottom.width_mm && top.thickness_mm === bottom.thickness_mm;
+      const flanges = same ? `${mm(top.width_mm)}×${mm(top.thickness_mm)}` : `${mm(top.width_mm)}×${mm(top.thickness_mm)} / ${mm(bottom.width_mm)}×${mm(bottom.thickness_mm)}`;
+      return `d ${mm(d.depth_mm)}, tw ${mm(d.webThickness_mm)}, flanges ${flanges}`;
+    }
+    case 'channel':
+    case 'tee':
+      return `d ${mm(d.depth_mm)}, b ${mm(d.width_mm)}, tw ${mm(d.webThickness_mm)}, tf ${mm(d.flangeThickness_mm)}`;
+    case 'box':
+      return `${mm(d.depth_mm)}×${mm(d.width_mm)}, walls ${mm(d.webThickness_mm)}` + (d.flangeThickness_mm !== d.webThickness_mm ? ` / ${mm(d.flangeThickness_mm)}` : '');
+    case 'angle':
+      return `${mm(d.depth_mm)}×${mm(d.width_mm)}×${mm(d.thickness_mm)}`;
+    case 'tube':
+      return `Ø ${mm(d.diameter_mm)}×${mm(d.wallThickness_mm)}`;
+    case 'plate':
+      return `${mm(d.depth_mm)}×${mm(d.width_mm)}`;
+    case 'other':
+      return `${d.description}, ${mm(d.depth_mm)}×${mm(d.width_mm)}`;
   }
 }
 

@@ -6,9 +6,11 @@
 import { IFCBEAM, IFCCOLUMN, IFCMEMBER } from 'web-ifc';
 import type { CatalogueSection } from '../catalogue/catalogue-section';
 import { type GradeId, gradeFromMaterialName, GradeError, yieldStrength, type EnYieldRule } from '../engine/grades';
+import { thickestPlate_mm } from '../engine/section-family';
 import { type Mat4, transformPoint, type Vec3 } from './matrix4';
 import { MaterialReader, type MaterialReading } from './material-reader';
-import { SectionResolver, type SectionOutcome } from './member-section';
+import { type BodyCut, cutMemberBody } from './body-cut';
+import { governingOfEnds, SectionResolver, type SectionOutcome } from './member-section';
 import type { MemberFlag, MemberMaterial, MemberRecord, MemberStatus, Point3_mm } from './model-read-result';
 import { readObjectPlacement } from './placement-reader';
 import { ProfileReader } from './profile-reader';
@@ -37,6 +39,8 @@ export interface MemberSolid {
 
 /** IfcElementType.PredefinedType: position 9 of IfcBeamType, IfcColumnType and IfcMemberType. */
 const TYPE_PREDEFINED_AT = 9;
+/** EndSweptArea of IfcExtrudedAreaSolidTapered and IfcRevolvedAreaSolidTapered. */
+const TAPERED_END_PROFILE_AT = 4;
 const UNSET_PREDEFINED = new Set(['NOTDEFINED']);
 
 export class MemberReader {
@@ -75,11 +79,14 @@ export class MemberReader {
     const solid = shape.solids[0];
     if (shape.solids.length > 1 && new Set(shape.solids.map((s) => s.profileId)).size > 1) flags.push('several-profiles');
     if (solid?.tapered) flags.push('tapered');
-    const outcome = this.section(shape, material, objectType);
-    flags.push(...(outcome.status === 'not-applicable' ? [] : outcome.flags));
+    const names = [material?.profileName ?? null, objectType, textOf(args[2]), this.typeName(typeId)];
+    const axisLine = this.shapes.axisLine(shape);
+    const cut = material?.profileId === undefined && solid?.profileId === undefined && shape.bodyItems.length > 0 ? this.cutBody(shape, axisLine) : undefined;
+    const outcome = this.section(shape, material, names, cut);
+    flags.push(...outcome.flags);
 
     const placement = readObjectPlacement(this.lines, refOf(args[5]));
-    const line3d = this.memberLine(shape, solid, placement);
+    const line3d = this.memberLine(axisLine ?? (cut?.status === 'cut' ? { ...cut.axis, curved: false } : undefined), solid, placement);
     if (line3d?.curved) flags.push('curved');
     if (shape.hasRepresentation && !line3d) flags.push('no-axis');
 
@@ -111,7 +118,7 @@ export class MemberReader {
       axis: line3d ? { start_mm: this.toMm(line3d.start), end_mm: this.toMm(line3d.end) } : null,
       status,
       ...(reason ? { reason } : {}),
-      profile: outcome.status === 'ok' ? outcome.profile : null,
+      profile: outcome.status === 'flagged' ? null : (outcome.profile ?? null),
       section: outcome.status === 'ok' ? outcome.section : null,
       flags: [...new Set(flags)],
     };
@@ -133,19 +140,43 @@ export class MemberReader {
     return this.shapes.extrusion(solid);
   }
 
-  private section(shape: ElementShape, material: MaterialReading | undefined, objectType: string | null): SectionOutcome {
-    const profileId = material?.profileId ?? shape.solids[0]?.profileId;
-    if (profileId === undefined) {
-      if (!shape.hasRepresentation) return { status: 'flagged', reason: '', flags: ['no-profile'] };
-      const body = shape.otherBodyTypes.length ? `its body is ${[...new Set(shape.otherBodyTypes)].join(', ')}` : 'it has no body representation';
-      return { status: 'flagged', reason: `No profile to read the section from: ${body}.`, flags: ['no-profile'] };
+  private section(shape: ElementShape, material: MaterialReading | undefined, names: (string | null)[], cut: BodyCut | undefined): SectionOutcome {
+    const solid = shape.solids[0];
+    if (solid?.tapered) return this.taperedSection(solid, names);
+    const profileId = material?.profileId ?? solid?.profileId;
+    if (profileId !== undefined) return this.sections.resolve(this.profiles.read(profileId), names);
+    if (cut?.status === 'cut') {
+      return this.sections.fromOutline(cut.polygon, { name: '', source: 'body-cut', ifcType: cut.ifcType, flags: [] }, names);
     }
-    return this.sections.resolve(this.profiles.read(profileId), [material?.profileName ?? null, objectType]);
+    if (cut) return this.sections.fromNamesOnly(names, `its body gives no section (${cut.reason})`, shape.otherBodyTypes[0] ?? 'body', ['geometry-unread']);
+    if (!shape.hasRepresentation) return { status: 'flagged', reason: '', flags: ['no-profile'] };
+    const body = shape.otherBodyTypes.length ? `its body is ${[...new Set(shape.otherBodyTypes)].join(', ')}` : 'it has no body representation';
+    return { status: 'flagged', reason: `No profile to read the section from: ${body}.`, flags: ['no-profile'] };
   }
 
-  /** Axis from the Axis representation, else from the first swept solid, placed in model coordinates. */
-  private memberLine(shape: ElementShape, solid: SweptSolid | undefined, placement: Mat4): MemberLine | undefined {
-    const local = this.shapes.axisLine(shape) ?? (solid ? this.shapes.solidLine(solid) : undefined);
+  private cutBody(shape: ElementShape, axisLine: MemberLine | undefined): BodyCut {
+    const axis = axisLine && !axisLine.curved ? { start: axisLine.start, end: axisLine.end } : undefined;
+    return cutMemberBody(this.lines, shape.bodyItems, { scaleToMm: this.options.scaleToMm, ...(axis ? { axis } : {}) });
+  }
+
+  /**
+   * A tapered solid between two profiles: both end sections are kept, and the member takes the smaller one (the
+   * smaller web area), never the larger; a check with forces at stations interpolates between them.
+   */
+  private taperedSection(solid: SweptSolid, names: (string | null)[]): SectionOutcome {
+    const ends = [solid.profileId, refOf(solid.args[TAPERED_END_PROFILE_AT])].map((id) =>
+      id === undefined ? undefined : this.sections.resolve(this.profiles.read(id), names),
+    );
+    return governingOfEnds(ends[0], ends[1]);
+  }
+
+  private typeName(typeId: number | undefined): string | null {
+    return typeId === undefined ? null : textOf(this.lines.line(typeId)?.args[2]);
+  }
+
+  /** Axis from the Axis representation (or the body cut), else from the first swept solid, placed in model coordinates. */
+  private memberLine(axisLine: MemberLine | undefined, solid: SweptSolid | undefined, placement: Mat4): MemberLine | undefined {
+    const local = axisLine ?? (solid ? this.shapes.solidLine(solid) : undefined);
     if (!local) return undefined;
     const start = transformPoint(placement, local.start);
     const end = transformPoint(placement, local.end);
@@ -182,7 +213,7 @@ export class MemberReader {
     if (name === null) flags.push('no-material');
     if (assumed) flags.push('assumed-grade');
     const p = outcome.profile;
-    const thickness_mm = Math.max(p.topFlange.thickness_mm, p.bottomFlange.thickness_mm, p.webThickness_mm);
+    const thickness_mm = thickestPlate_mm(p);
     try {
       return { material: { name, grade, fy_MPa: yieldStrength(grade, thickness_mm, this.options.yieldRule).fy_MPa, assumed } };
     } catch (error) {

@@ -5,6 +5,7 @@
  */
 import type { GradeId } from '../engine/grades';
 import type { Fabrication } from '../engine/section';
+import type { SectionDimensions } from '../engine/section-family';
 
 export type IfcSchema = 'IFC2X3' | 'IFC4' | 'IFC4X3';
 
@@ -49,7 +50,11 @@ export type MemberFlag =
   | 'tapered'
   | 'top-flange-assumed'
   | 'curved'
-  | 'several-profiles';
+  | 'several-profiles'
+  | 'name-and-geometry-differ'
+  | 'schema-name-read-as'
+  | 'section-unrecognised'
+  | 'geometry-unread';
 
 export interface MemberMaterial {
   /** The IFC material's name; null when the member has none (then the grade is the default one). */
@@ -69,17 +74,62 @@ export interface ProfileFlange {
   slope_rad?: number;
 }
 
-export interface MemberProfile {
+/**
+ * How a member's section was found: 'ifc-profile' parameters written in the file, 'outline' a profile curve measured,
+ * 'body-cut' the body cut normal to the member axis and measured, 'catalogue' / 'project-catalogue' a designation looked
+ * up in the built-in tables / the project's uploaded catalogue.
+ */
+export type ProfileSource = 'ifc-profile' | 'outline' | 'body-cut' | 'catalogue' | 'project-catalogue';
+export const PROFILE_SOURCES: readonly ProfileSource[] = ['ifc-profile', 'outline', 'body-cut', 'catalogue', 'project-catalogue'];
+
+/** How the section was found, in words, for the members page, the member panel and the calculation sheet. */
+export const PROFILE_SOURCE_LABELS: Readonly<Record<ProfileSource, string>> = {
+  'ifc-profile': 'dimensions written in the model',
+  outline: 'measured from the profile outline',
+  'body-cut': 'measured from a cut through the body',
+  catalogue: 'dimensions from the section catalogue',
+  'project-catalogue': "dimensions from the project's catalogue",
+};
+
+/** A section at a point of a varying (tapered) member: `at` is the fraction of the length from the start. */
+export interface ProfileStation {
+  at: number;
+  dimensions: SectionDimensions;
+}
+
+interface ProfileCommon {
   name: string;
-  /** 'ifc': dimensions written in the file; 'catalogue': a name-only profile resolved through the section catalogue. */
-  source: 'ifc' | 'catalogue';
-  /** IFC entity of the profile, e.g. IfcIShapeProfileDef, IfcArbitraryClosedProfileDef. */
+  source: ProfileSource;
+  /** IFC entity the section was read from, e.g. IfcIShapeProfileDef, IfcArbitraryClosedProfileDef, IfcFacetedBrep. */
   ifcType: string;
   fabrication: Fabrication;
-  depth_mm: number;
-  webThickness_mm: number;
-  topFlange: ProfileFlange;
-  bottomFlange: ProfileFlange;
+  /**
+   * Sections along a varying member (both ends of a tapered extrusion, and any between), start to end. The profile's
+   * own dimensions are then the governing one: the smallest, never the larger end.
+   */
+  along?: ProfileStation[];
+  /** With `along`: where the governing section is, as a fraction of the length from the start. */
+  governingAt?: number;
+}
+
+/** The member's section: its family and that family's dimensions (SectionDimensions) at the top level. */
+export type MemberProfile = ProfileCommon & SectionDimensions;
+export type IMemberProfile = MemberProfile & { family: 'I' };
+
+/** The section's dimensions alone, without how it was found. */
+export function sectionDimensionsOf(profile: MemberProfile): SectionDimensions {
+  const { name: _name, source: _source, ifcType: _ifcType, fabrication: _fabrication, along: _along, governingAt: _at, ...dimensions } = profile;
+  return dimensions as SectionDimensions;
+}
+
+export function isIProfile(profile: MemberProfile | null | undefined): profile is IMemberProfile {
+  return profile?.family === 'I';
+}
+
+/** The profile of a member known to be an I-section; anything else is a programming error. */
+export function requireIProfile(profile: MemberProfile | null | undefined): IMemberProfile {
+  if (!isIProfile(profile)) throw new Error(`Expected an I-section profile, got ${profile ? profile.family : 'none'}`);
+  return profile;
 }
 
 export interface MemberSection {

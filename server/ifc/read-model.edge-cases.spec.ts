@@ -4,7 +4,7 @@
  */
 import * as path from 'node:path';
 import { MM_PER_FT } from '../engine/units';
-import type { MemberRecord, ModelReadResult } from './model-read-result';
+import { type MemberRecord, type ModelReadResult, requireIProfile } from './model-read-result';
 import { readModel } from './read-model';
 
 const FIXTURE = path.resolve(__dirname, '../../test/fixtures/ifc/edge-cases.ifc');
@@ -30,7 +30,7 @@ describe('edge-cases.ifc', () => {
   it('resolves a bare IfcProfileDef by its name through the catalogue (IPE 300, EN 10365: 300 × 150 × 7.1 × 10.7, r 15)', () => {
     expect(member('B-arc').profile).toMatchObject({
       name: 'IPE 300',
-      source: 'catalogue',
+      family: 'I', source: 'catalogue',
       ifcType: 'IfcProfileDef',
       fabrication: 'rolled',
       depth_mm: 300,
@@ -46,10 +46,10 @@ describe('edge-cases.ifc', () => {
     const column = member('C-mirrored');
     expect(column.profile).toMatchObject({ ifcType: 'IfcAsymmetricIShapeProfileDef', fabrication: 'welded' });
     // #217 bottom 1.25 × 0.1 ft, top 1 × 0.08 ft; the operator's Axis2 (0,−1) swaps them.
-    expect(column.profile!.topFlange.width_mm).toBeCloseTo(1.25 * MM_PER_FT, 9);
-    expect(column.profile!.topFlange.thickness_mm).toBeCloseTo(0.1 * MM_PER_FT, 9);
-    expect(column.profile!.bottomFlange.width_mm).toBeCloseTo(1 * MM_PER_FT, 9);
-    expect(column.profile!.depth_mm).toBeCloseTo(3 * MM_PER_FT, 9);
+    expect(requireIProfile(column.profile).topFlange.width_mm).toBeCloseTo(1.25 * MM_PER_FT, 9);
+    expect(requireIProfile(column.profile).topFlange.thickness_mm).toBeCloseTo(0.1 * MM_PER_FT, 9);
+    expect(requireIProfile(column.profile).bottomFlange.width_mm).toBeCloseTo(1 * MM_PER_FT, 9);
+    expect(requireIProfile(column.profile).depth_mm).toBeCloseTo(3 * MM_PER_FT, 9);
     expect(column.flags).toContain('derived-profile');
     expect(column.length_mm).toBeCloseTo(12 * MM_PER_FT, 9);
   });
@@ -59,19 +59,19 @@ describe('edge-cases.ifc', () => {
     expect(member('C-mirrored').material).toEqual({ name: 'Fe 510', grade: 'S355', fy_MPa: 345, assumed: false });
   });
 
-  it('flags a faceted-brep member: it has no profile to read', () => {
+  it('flags a faceted-brep member whose body is too short to have an axis and that names no section', () => {
     expect(member('M-brep')).toMatchObject({
       status: 'flagged',
-      reason: 'No profile to read the section from: its body is IfcFacetedBrep.',
-      flags: expect.arrayContaining(['no-profile']),
+      reason: expect.stringContaining('its body gives no section (Its body (IfcFacetedBrep) is too short for its axis to be found'),
+      flags: expect.arrayContaining(['geometry-unread', 'profile-not-in-catalogue']),
     });
   });
 
   it('takes section, material and predefined type from the type, and the storey through the assembly', () => {
     const beam = member('B-assembly');
     expect(beam).toMatchObject({ status: 'ok', storey: 'Mezzanine', predefinedType: 'LINTEL' });
-    expect(beam.profile).toMatchObject({ name: 'IPE200', source: 'ifc', fabrication: 'rolled' });
-    expect(beam.profile!.depth_mm).toBeCloseTo(200, 9);
+    expect(beam.profile).toMatchObject({ name: 'IPE200', family: 'I', source: 'ifc-profile', fabrication: 'rolled' });
+    expect(requireIProfile(beam.profile).depth_mm).toBeCloseTo(200, 9);
     // ASTM A36: Fy = 36 ksi (AISC Manual Table 2-4) = 248.2 MPa.
     expect(beam.material).toMatchObject({ name: 'ASTM A36', grade: 'A36', assumed: false });
     expect(beam.material!.fy_MPa).toBeCloseTo(248.2, 1);

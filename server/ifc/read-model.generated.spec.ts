@@ -10,7 +10,7 @@ import { FAR_SITE_ORIGIN_MM, generateFrame } from '../../test/generator/generate
 import { type FrameSchema, type FrameUnit, pathOf, sectionOf } from '../../test/generator/frame-writer';
 import { frameLayout } from '../../test/generator/frame-layout';
 import { MM_PER_FT, MM_PER_IN } from '../engine/units';
-import type { MemberRecord, ModelReadResult } from './model-read-result';
+import { type MemberRecord, type ModelReadResult, requireIProfile } from './model-read-result';
 import { readModel } from './read-model';
 
 const MEMBERS = 100;
@@ -56,13 +56,18 @@ describe.each(SCHEMAS.flatMap((schema) => UNITS.map((unit) => [schema, unit] as 
       const path = pathOf(slotOf(layout, member));
       const spec = sectionOf(path, sections, schema);
       if (spec.kind !== 'i') {
+        // Listed with the family and dimensions the file gives, unchecked until that family's web check exists.
         expect(member.status).toBe('not-applicable');
-        expect(member.reason).toContain(spec.kind === 'tube' ? 'IfcCircleHollowProfileDef' : 'IfcLShapeProfileDef');
+        expect(member.reason).toContain('listed with its dimensions');
+        expect(member.profile).toMatchObject(
+          spec.kind === 'tube' ? { family: 'tube', source: 'ifc-profile', ifcType: 'IfcCircleHollowProfileDef' } : { family: 'angle', source: 'ifc-profile', ifcType: 'IfcLShapeProfileDef' },
+        );
         continue;
       }
       expect({ path, status: member.status, reason: member.reason }).toEqual({ path, status: 'ok', reason: undefined });
-      const profile = member.profile!;
-      expect(profile.source).toBe(path === 'name-only-outline' ? 'catalogue' : 'ifc');
+      const profile = requireIProfile(member.profile);
+      // Geometry first: an outline is measured, its name only cross-checked.
+      expect(profile.source).toBe(path === 'name-only-outline' ? 'outline' : 'ifc-profile');
       expect(profile.ifcType).toBe(
         path === 'name-only-outline' ? 'IfcArbitraryClosedProfileDef' : path === 'asymmetric' ? 'IfcAsymmetricIShapeProfileDef' : 'IfcIShapeProfileDef',
       );
@@ -72,7 +77,8 @@ describe.each(SCHEMAS.flatMap((schema) => UNITS.map((unit) => [schema, unit] as 
       for (const flange of ['topFlange', 'bottomFlange'] as const) {
         expectClose(profile[flange].width_mm, spec.input[flange].width_mm);
         expectClose(profile[flange].thickness_mm, spec.input[flange].thickness_mm);
-        expectClose(profile[flange].filletRadius_mm, spec.input[flange].filletRadius_mm);
+        // The generator draws this outline without root fillets: the section is measured as drawn, not as named.
+        expectClose(profile[flange].filletRadius_mm, path === 'name-only-outline' ? 0 : spec.input[flange].filletRadius_mm);
         if (spec.input[flange].slope_rad && schema !== 'IFC2X3') expectClose(profile[flange].slope_rad, spec.input[flange].slope_rad!);
       }
       expect(member.section!.area_mm2).toBeGreaterThan(0);
@@ -86,7 +92,7 @@ describe.each(SCHEMAS.flatMap((schema) => UNITS.map((unit) => [schema, unit] as 
       expectClose(member.length_mm, span);
       expect(member.storey).toBe(`Level ${String(slot.storey + 1).padStart(2, '0')}`);
       // Beams without an Axis representation take the extrusion's centre line, half the depth below the reference line.
-      const drop = pathOf(slot) === 'extrusion-only' ? member.profile!.depth_mm / 2 : 0;
+      const drop = pathOf(slot) === 'extrusion-only' ? requireIProfile(member.profile).depth_mm / 2 : 0;
       slot.start_mm.forEach((v, i) => expectClose(member.axis!.start_mm[i], i === 2 ? v - drop : v, 1e-9));
       slot.end_mm.forEach((v, i) => expectClose(member.axis!.end_mm[i], i === 2 ? v - drop : v, 1e-9));
     }

@@ -10,7 +10,7 @@ import { readModel } from './read-model';
 /** #203 IFCISHAPEPROFILEDEF(.AREA.,'IPE200',$,100.0,200.0,5.6,8.5,12.0,$,$), shared by all three files (SOURCE.md). */
 const IPE200_FROM_FILE = {
   name: 'IPE200',
-  source: 'ifc',
+  family: 'I', source: 'ifc-profile',
   ifcType: 'IfcIShapeProfileDef',
   fabrication: 'rolled',
   depth_mm: 200,

@@ -15,7 +15,7 @@ import { lengthUnitOf } from './length-unit';
 import { fromColumns, type Mat4, multiply, type Vec3 } from './matrix4';
 import { MemberReader } from './member-reader';
 import { offsetFor, streamModelMeshes } from './model-meshes';
-import type { MemberRecord, ModelReadResult } from './model-read-result';
+import { isIProfile, type MemberRecord, type ModelReadResult } from './model-read-result';
 import { openModel } from './open-model';
 import { StepLines, textOf } from './step-lines';
 import { projectUnits, radiansPerAngleUnit } from './unit-assignment';
@@ -62,9 +62,9 @@ interface OwnMeshInput {
 /** Transform and model-unit mesh of a member's extruded I-section, built by us; undefined if it is not extruded. */
 function ownMeshPieces({ record, reader, toGltf, scaleToMm, outlines }: OwnMeshInput): { vertices: Float32Array; indices: Uint32Array; transform: Mat4 } | undefined {
   const { profile } = record;
-  const solid = profile ? reader.solidOf(record.expressId) : undefined;
+  const solid = isIProfile(profile) ? reader.solidOf(record.expressId) : undefined;
   const extrusion = solid && reader.extrusionOf(solid.solid);
-  if (!extrusion || !profile) return undefined;
+  if (!extrusion || !isIProfile(profile)) return undefined;
   let outline = outlines.get(profile);
   if (!outline) {
     outline = outlineWithCap(iSectionOutline(profile).map(([x, y]) => [x / scaleToMm, y / scaleToMm] as [number, number]));

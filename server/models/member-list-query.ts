@@ -1,6 +1,7 @@
 /** The members table's query string: sort, filters and page, validated at the edge. */
 import { z } from 'zod';
-import type { MemberStatus } from '../ifc/model-read-result';
+import { SECTION_FAMILIES } from '../engine/section-family';
+import { type MemberStatus, PROFILE_SOURCES, type ProfileSource } from '../ifc/model-read-result';
 import { MEMBER_ROW_COLUMNS, MEMBER_STATUSES } from './member-row';
 
 export const MEMBER_SORT_FIELDS = MEMBER_ROW_COLUMNS.filter((c) => c !== 'flags' && c !== 'reason' && c !== 'gradeAssumed');
@@ -24,6 +25,8 @@ export const memberListQuery = z.object({
   status: statusList,
   storey: optionalText,
   profile: optionalText,
+  family: z.preprocess((v) => (v === '' ? undefined : v), z.enum(SECTION_FAMILIES, `must be one of ${SECTION_FAMILIES.join(', ')}`).optional()),
+  source: z.preprocess((v) => (v === '' ? undefined : v), z.enum(PROFILE_SOURCES as [ProfileSource, ...ProfileSource[]], `must be one of ${PROFILE_SOURCES.join(', ')}`).optional()),
   q: optionalText,
 });
 

@@ -3,6 +3,7 @@
  * the whole MemberRecord. Lengths in millimetres, fy in MPa, as in the record.
  */
 import type { Fabrication } from '../engine/section';
+import { flangeThickness_mm, overallDepth_mm, overallWidth_mm, type SectionFamily, webThickness_mm } from '../engine/section-family';
 import type { MemberFlag, MemberProfile, MemberRecord, MemberStatus } from '../ifc/model-read-result';
 
 export const MEMBER_STATUSES: readonly MemberStatus[] = ['ok', 'not-applicable', 'flagged'];
@@ -27,6 +28,7 @@ export interface MemberRow {
   profileName: string | null;
   profileSource: MemberProfile['source'] | null;
   profileType: string | null;
+  profileFamily: SectionFamily | null;
   fabrication: Fabrication | null;
   depth_mm: number | null;
   webThickness_mm: number | null;
@@ -52,6 +54,7 @@ export const MEMBER_ROW_COLUMNS = [
   'profileName',
   'profileSource',
   'profileType',
+  'profileFamily',
   'fabrication',
   'depth_mm',
   'webThickness_mm',
@@ -79,10 +82,11 @@ export function memberRowOf(record: MemberRecord): MemberRow {
     profileSource: profile?.source ?? null,
     profileType: profile?.ifcType ?? null,
     fabrication: profile?.fabrication ?? null,
-    depth_mm: profile?.depth_mm ?? null,
-    webThickness_mm: profile?.webThickness_mm ?? null,
-    flangeWidth_mm: profile?.topFlange.width_mm ?? null,
-    flangeThickness_mm: profile?.topFlange.thickness_mm ?? null,
+    profileFamily: profile?.family ?? null,
+    depth_mm: profile ? overallDepth_mm(profile) : null,
+    webThickness_mm: profile ? webThickness_mm(profile) : null,
+    flangeWidth_mm: profile ? (profile.family === 'I' ? profile.topFlange.width_mm : overallWidth_mm(profile)) : null,
+    flangeThickness_mm: profile ? flangeThickness_mm(profile) : null,
     grade: record.material?.grade ?? null,
     fy_MPa: record.material?.fy_MPa ?? null,
     gradeAssumed: record.material ? record.material.assumed : null,

@@ -1,5 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import type { Fabrication } from '../engine/section';
+import type { SectionFamily } from '../engine/section-family';
 import type { MemberFlag, MemberProfile, MemberStatus } from '../ifc/model-read-result';
 import { MEMBER_STATUSES } from './member-row';
 import { ModelRevision } from './model-revision.entity';
@@ -18,6 +19,7 @@ import { ModelRevision } from './model-revision.entity';
 @Index(['revisionId', 'name'])
 @Index(['revisionId', 'depth_mm'])
 @Index(['revisionId', 'length_mm'])
+@Index(['revisionId', 'profileFamily'])
 export class ModelMember {
   @PrimaryColumn({ type: String })
   revisionId: string;
@@ -50,11 +52,14 @@ export class ModelMember {
   @Column({ type: 'text', nullable: true })
   profileName: string | null;
 
-  @Column({ type: String, length: 16, nullable: true })
+  @Column({ type: String, length: 20, nullable: true })
   profileSource: MemberProfile['source'] | null;
 
   @Column({ type: String, length: 64, nullable: true })
   profileType: string | null;
+
+  @Column({ type: String, length: 16, nullable: true })
+  profileFamily: SectionFamily | null;
 
   @Column({ type: String, length: 16, nullable: true })
   fabrication: Fabrication | null;

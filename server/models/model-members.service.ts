@@ -1,6 +1,7 @@
 import type { DataSource, SelectQueryBuilder } from 'typeorm';
 import { NotFoundError, ValidationError } from '../http/errors';
-import type { MemberRecord } from '../ifc/model-read-result';
+import { SECTION_FAMILIES, type SectionFamily } from '../engine/section-family';
+import { type MemberRecord, PROFILE_SOURCES, type ProfileSource } from '../ifc/model-read-result';
 import type { MemberListQuery } from './member-list-query';
 import { MEMBER_ROW_COLUMNS, type MemberLabels, type MemberRow } from './member-row';
 import { ModelMember } from './model-member.entity';
@@ -19,6 +20,12 @@ export interface MemberPage {
 export interface MemberFacets {
   storeys: string[];
   profiles: string[];
+  /** Section families present, in SECTION_FAMILIES order. */
+  families: SectionFamily[];
+  /** How the sections were found, in PROFILE_SOURCES order. */
+  sources: ProfileSource[];
+  /** Members that will not be checked, counted by reason, most frequent first. */
+  skipped: { reason: string; count: number }[];
 }
 
 export interface ComparisonView extends RevisionComparison {
@@ -62,7 +69,7 @@ export class ModelMembersService {
 
   async facets(projectId: string, revisionId: string): Promise<MemberFacets> {
     await this.readyRevision(projectId, revisionId);
-    const distinct = async (column: 'storey' | 'profileName'): Promise<string[]> => {
+    const distinct = async (column: 'storey' | 'profileName' | 'profileFamily' | 'profileSource'): Promise<string[]> => {
       const rows = await this.members()
         .createQueryBuilder('m')
         .select(`DISTINCT m.${column}`, 'value')
@@ -71,8 +78,30 @@ export class ModelMembersService {
         .getRawMany<{ value: string }>();
       return rows.map((r) => r.value).sort(naturalOrder);
     };
-    const [storeys, profiles] = await Promise.all([distinct('storey'), distinct('profileName')]);
-    return { storeys, profiles };
+    const skippedRows = this.members()
+      .createQueryBuilder('m')
+      .select('m.reason', 'reason')
+      .addSelect('COUNT(*)', 'count')
+      .where('m.revisionId = :revisionId', { revisionId })
+      .andWhere("m.status != 'ok'")
+      .groupBy('m.reason')
+      .orderBy('count', 'DESC')
+      .addOrderBy('m.reason', 'ASC')
+      .getRawMany<{ reason: string | null; count: number | string }>();
+    const [storeys, profiles, families, sources, skipped] = await Promise.all([
+      distinct('storey'),
+      distinct('profileName'),
+      distinct('profileFamily'),
+      distinct('profileSource'),
+      skippedRows,
+    ]);
+    return {
+      storeys,
+      profiles,
+      families: SECTION_FAMILIES.filter((f) => families.includes(f)),
+      sources: PROFILE_SOURCES.filter((s) => sources.includes(s)),
+      skipped: skipped.map((r) => ({ reason: r.reason ?? 'No reason recorded.', count: Number(r.count) })),
+    };
   }
 
   /** The labels of every member in file order, in one answer: the 3D view names and filters all of them at once. */
@@ -114,6 +143,8 @@ export class ModelMembersService {
     if (query.status?.length) builder.andWhere('m.status IN (:...status)', { status: query.status });
     if (query.storey !== undefined) builder.andWhere('m.storey = :storey', { storey: query.storey });
     if (query.profile !== undefined) builder.andWhere('m.profileName = :profile', { profile: query.profile });
+    if (query.family !== undefined) builder.andWhere('m.profileFamily = :family', { family: query.family });
+    if (query.source !== undefined) builder.andWhere('m.profileSource = :source', { source: query.source });
     if (query.q !== undefined) {
       builder.andWhere(
         "(m.name LIKE :q ESCAPE '\\' OR m.tag LIKE :q ESCAPE '\\' OR m.globalId LIKE :q ESCAPE '\\' OR m.profileName LIKE :q ESCAPE '\\')",

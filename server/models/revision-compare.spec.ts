@@ -1,4 +1,4 @@
-import type { MemberRecord } from '../ifc/model-read-result';
+import { type MemberRecord, requireIProfile } from '../ifc/model-read-result';
 import { COMPARE_TOLERANCES, compareRevisions, memberChanges } from './revision-compare';
 
 // The beam 'TopMid' of the shared sample beam-varying-cardinal-points.ifc as its SOURCE.md lists it: IPE200
@@ -20,7 +20,7 @@ function topMid(changes: Partial<MemberRecord> = {}): MemberRecord {
     status: 'ok',
     profile: {
       name: 'IPE200',
-      source: 'ifc',
+      family: 'I', source: 'ifc-profile',
       ifcType: 'IfcIShapeProfileDef',
       fabrication: 'rolled',
       depth_mm: 200,
@@ -50,7 +50,7 @@ describe('memberChanges', () => {
   it('names a new section by its name, and shows the dimensions when only they changed', () => {
     const ipe220 = topMid({ profile: { ...topMid().profile!, name: 'IPE220' } });
     expect(memberChanges(topMid(), ipe220)).toEqual([{ field: 'section', from: 'IPE200', to: 'IPE220' }]);
-    const thinnerWeb = topMid({ profile: { ...topMid().profile!, webThickness_mm: 5.0 } });
+    const thinnerWeb = topMid({ profile: { ...requireIProfile(topMid().profile), webThickness_mm: 5.0 } });
     expect(memberChanges(topMid(), thinnerWeb)).toEqual([
       { field: 'section', from: 'IPE200 (d 200, tw 5.6, flanges 100×8.5 mm)', to: 'IPE200 (d 200, tw 5, flanges 100×8.5 mm)' },
     ]);

@@ -2,7 +2,8 @@
  * Compares two revisions' members by GlobalId: added, removed, and changed in section, grade, fabrication, length or
  * position. Differences within the tolerances are modelling noise (re-exported coordinates, rounding), not changes.
  */
-import type { MemberProfile, MemberRecord, Point3_mm } from '../ifc/model-read-result';
+import { dimensionsLabel } from '../engine/section-family';
+import { type MemberProfile, type MemberRecord, type Point3_mm, sectionDimensionsOf } from '../ifc/model-read-result';
 import { type MemberRow, memberRowOf } from './member-row';
 
 /** Our product tolerances, in millimetres: common practice, no source. */
@@ -38,27 +39,30 @@ export interface RevisionComparison {
 
 const round = (value: number, decimals: number): number => Math.round(value * 10 ** decimals) / 10 ** decimals;
 
+/** Every dimension of the section in a fixed order (flanges, radii and slopes included), for comparing two revisions. */
 function dimensionsOf(profile: MemberProfile): number[] {
-  const flange = (f: MemberProfile['topFlange']) => [f.width_mm, f.thickness_mm, f.filletRadius_mm, f.edgeRadius_mm ?? 0, f.slope_rad ?? 0];
-  return [profile.depth_mm, profile.webThickness_mm, ...flange(profile.topFlange), ...flange(profile.bottomFlange)];
+  const values: number[] = [];
+  const collect = (value: unknown): void => {
+    if (typeof value === 'number') values.push(value);
+    else if (value && typeof value === 'object') for (const key of Object.keys(value).sort()) collect((value as Record<string, unknown>)[key]);
+  };
+  collect(sectionDimensionsOf(profile));
+  return values;
 }
 
 function sameSection(a: MemberProfile | null, b: MemberProfile | null): boolean {
   if (!a || !b) return a === b;
-  if (a.name !== b.name) return false;
+  if (a.name !== b.name || a.family !== b.family) return false;
   const da = dimensionsOf(a);
   const db = dimensionsOf(b);
-  return da.every((value, i) => Math.abs(value - db[i]) <= COMPARE_TOLERANCES.dimension_mm);
+  return da.length === db.length && da.every((value, i) => Math.abs(value - db[i]) <= COMPARE_TOLERANCES.dimension_mm);
 }
 
 /** The name, and the dimensions when the name alone would not show the change. */
 function sectionLabel(profile: MemberProfile | null, withDimensions: boolean): string | null {
   if (!profile) return null;
-  if (!withDimensions) return profile.name || profile.ifcType;
-  const top = profile.topFlange;
-  const bottom = profile.bottomFlange;
-  const flanges = top.width_mm === bottom.width_mm && top.thickness_mm === bottom.thickness_mm ? `${top.width_mm}×${top.thickness_mm}` : `${top.width_mm}×${top.thickness_mm} / ${bottom.width_mm}×${bottom.thickness_mm}`;
-  return `${profile.name || profile.ifcType} (d ${profile.depth_mm}, tw ${profile.webThickness_mm}, flanges ${flanges} mm)`;
+  const name = profile.name || profile.ifcType;
+  return withDimensions ? `${name} (${dimensionsLabel(sectionDimensionsOf(profile))} mm)` : name;
 }
 
 const distance = (a: Point3_mm, b: Point3_mm): number => Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);

@@ -85,7 +85,7 @@ function model(count = MEMBERS): MemberRecord[] {
       length_mm: 6000,
       axis: null,
       status: 'ok',
-      profile: { name: section.name, source: 'ifc', ifcType: 'IfcIShapeProfileDef', ...toSectionInput(section) },
+      profile: { name: section.name, family: 'I', source: 'ifc-profile', ifcType: 'IfcIShapeProfileDef', ...toSectionInput(section) },
       section: null,
       flags: [],
     };

@@ -73,7 +73,7 @@ export function memberSheet(overrides: Partial<MemberSheet> = {}): MemberSheet {
       length_mm: 6000,
       axis: { start_mm: [0, 0, 3000], end_mm: [6000, 0, 3000] },
       status: 'ok',
-      profile: { name: 'IPE 300', source: 'ifc', ifcType: 'IfcIShapeProfileDef', ...input },
+      profile: { name: 'IPE 300', family: 'I', source: 'ifc-profile', ifcType: 'IfcIShapeProfileDef', ...input },
       section: null,
       flags: ['assumed-grade'],
     },

@@ -27,6 +27,7 @@ describe('RevisionMembers', () => {
     profileName: null,
     profileSource: null,
     profileType: null,
+    profileFamily: null,
     fabrication: null,
     depth_mm: null,
     webThickness_mm: null,
