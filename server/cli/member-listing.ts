@@ -82,7 +82,7 @@ function cell(text: string, width: number): string {
 /** The readable listing: model line, one row per member, the reasons, the counts and the cautions. */
 export function memberTable(model: ModelInfo, members: readonly ListedMember[], cautions: string): string {
   const lines = [
-    `${model.fileName ?? 'model'}: ${model.fileSchema}, length unit ${model.lengthUnit}${model.application ? `, from ${model.application}` : ''}`,
+    `${model.fileName ?? 'model'}: ${model.fileSchema}${model.schemaReadAs ? ` (read as ${model.schema})` : ''}, length unit ${model.lengthUnit}${model.application ? `, from ${model.application}` : ''}`,
     '',
     COLUMNS.map((c) => cell(c.title, c.width)).join('  ').trimEnd(),
     COLUMNS.map((c) => '-'.repeat(c.width)).join('  '),

@@ -25,6 +25,8 @@ export interface ModelInfo {
   /** The schema as web-ifc reads it; `fileSchema` is the name in the header (e.g. IFC4X3_ADD2). */
   schema: IfcSchema;
   fileSchema: string;
+  /** The header names a pre-release schema (IFC4X3_RC2…), read as `schema`. */
+  schemaReadAs?: true;
   /** Unit name as declared, e.g. 'millimetre', 'metre', 'inch', 'foot'. */
   lengthUnit: string;
   lengthScaleToMm: number;
@@ -52,7 +54,6 @@ export type MemberFlag =
   | 'curved'
   | 'several-profiles'
   | 'name-and-geometry-differ'
-  | 'schema-name-read-as'
   | 'section-unrecognised'
   | 'geometry-unread';
 

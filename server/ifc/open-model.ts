@@ -110,10 +110,13 @@ function opened(api: IfcAPI, modelId: number, header: StepHeader, source: StepBy
 
 /** Checks the header, then opens the model. Throws IfcReadError for a file that is not a complete, supported IFC. */
 export async function openModel(source: Uint8Array | string, settings: LoaderSettings = {}): Promise<OpenedModel> {
-  const loaderSettings: LoaderSettings = { ...settings, ALLOW_INCOMPATIBLE_SCHEMA_ALIASES: false };
+  // web-ifc parses a pre-release name (IFC4X3_RC2) with the released schema only when allowed; the header check lets
+  // through only the names it reads as (step-header.ts), never an arbitrary one.
+  const loaderSettingsFor = (header: StepHeader): LoaderSettings => ({ ...settings, ALLOW_INCOMPATIBLE_SCHEMA_ALIASES: header.readAs === true });
   const offsets = new StepOffsets();
   if (typeof source !== 'string') {
     const header = headerOfBytes(source);
+    const loaderSettings = loaderSettingsFor(header);
     const api = await ifcApi();
     offsets.scan(source, 0);
     return opened(api, api.OpenModel(source, loaderSettings), header, { kind: 'bytes', bytes: source }, offsets);
@@ -122,6 +125,7 @@ export async function openModel(source: Uint8Array | string, settings: LoaderSet
   try {
     const size = fs.fstatSync(fd).size;
     const header = headerOfFile(fd, size);
+    const loaderSettings = loaderSettingsFor(header);
     const api = await ifcApi();
     let chunk = Buffer.alloc(0);
     // web-ifc reads the file twice, in TAPE_SIZE chunks; the offsets are taken on the first pass only.

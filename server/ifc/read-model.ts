@@ -161,6 +161,7 @@ export async function readModel(source: Uint8Array | string, options: ReadModelO
       model: {
         schema: opened.header.schema,
         fileSchema: opened.header.fileSchema,
+        ...(opened.header.readAs ? { schemaReadAs: true as const } : {}),
         lengthUnit: length.name,
         lengthScaleToMm: length.scaleToMm,
         ...(opened.header.application ? { application: opened.header.application } : {}),

@@ -39,6 +39,12 @@ describe('readStepHeader', () => {
     expect(check(minimal(written)).schema).toBe(schema);
   });
 
+  it.each(['IFC4X3_RC2', 'IFC4X3_RC4', 'IFC4X3_ADD1'])('reads the pre-release schema name %s as IFC4X3, and says so', (written) => {
+    // Names of IFC 4.3 before its release (buildingSMART IFC 4.3 release candidates and addendum 1; common practice).
+    expect(check(minimal(written))).toMatchObject({ fileSchema: written, schema: 'IFC4X3', readAs: true });
+    expect(check(minimal('IFC4X3_ADD2'))).not.toHaveProperty('readAs');
+  });
+
   it('takes the file name and originating system from FILE_NAME', () => {
     expect(check(minimal('IFC4'))).toMatchObject({ fileName: 'frame.ifc', application: 'Author tool 7' });
   });

@@ -19,6 +19,12 @@ const SCHEMAS: Readonly<Record<string, IfcSchema>> = {
 };
 export const SUPPORTED_SCHEMAS = Object.keys(SCHEMAS);
 
+/**
+ * Pre-release names of IFC 4.3 that exporters still write (release candidates, the first addendum): read as IFC4X3,
+ * whose entities they share for everything a steel member uses, and flagged so the user knows.
+ */
+const IFC4X3_PRE_RELEASE = /^IFC4X3_(RC[1-4]|ADD1)$/;
+
 export interface StepHeader {
   /** Schema name as written in FILE_SCHEMA. */
   fileSchema: string;
@@ -26,6 +32,8 @@ export interface StepHeader {
   fileName?: string;
   /** FILE_NAME's originating system, else its preprocessor version. */
   application?: string;
+  /** A pre-release schema name (e.g. IFC4X3_RC2) read as `schema`. */
+  readAs?: true;
 }
 
 type HeaderValue = string | null | HeaderValue[];
@@ -125,7 +133,8 @@ export function readStepHeader(head: Uint8Array, tail: Uint8Array, totalBytes: n
   const header = body.slice(headerStart, headerEnd);
   const fileSchema = firstString(headerEntity(header, 'FILE_SCHEMA'))?.trim().toUpperCase();
   if (!fileSchema) throw new IfcReadError('unknown-schema', 'The IFC header names no schema (FILE_SCHEMA is missing or empty).');
-  const schema = SCHEMAS[fileSchema];
+  const readAs = IFC4X3_PRE_RELEASE.test(fileSchema);
+  const schema = readAs ? 'IFC4X3' : SCHEMAS[fileSchema];
   if (!schema) {
     throw new IfcReadError(
       'unknown-schema',
@@ -138,5 +147,6 @@ export function readStepHeader(head: Uint8Array, tail: Uint8Array, totalBytes: n
     schema,
     fileName: firstString(fileName?.[0]),
     application: firstString(fileName?.[5]) ?? firstString(fileName?.[4]),
+    ...(readAs ? { readAs } : {}),
   };
 }
