@@ -1,22 +1,53 @@
 import { HttpClient, HttpEventType } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { filter, map, Observable } from 'rxjs';
-import type { MemberFlag, MemberRecord, MemberStatus } from '../../../server/ifc/model-read-result';
+import type { SectionDimensions, SectionFamily } from '../../../server/engine/section-family';
+import type { MemberFlag, MemberProfile, MemberRecord, MemberStatus, ProfileSource, ProfileStation } from '../../../server/ifc/model-read-result';
 import type { MemberLabelRow, MemberLabels, MemberRow } from '../../../server/models/member-row';
 import type { ChangedField, ChangedMember, FieldChange, RevisionComparison } from '../../../server/models/revision-compare';
 import type { RevisionCounts, RevisionStatus, RevisionView } from '../../../server/models/revision-view';
 
 // The API's own types (plain, entity-free server modules), so client and server cannot drift apart.
-export type { ChangedField, ChangedMember, FieldChange, MemberFlag, MemberLabelRow, MemberLabels, MemberRecord, MemberRow, MemberStatus, RevisionCounts, RevisionStatus, RevisionView };
+export type {
+  ChangedField,
+  ChangedMember,
+  FieldChange,
+  MemberFlag,
+  MemberLabelRow,
+  MemberLabels,
+  MemberProfile,
+  MemberRecord,
+  MemberRow,
+  MemberStatus,
+  ProfileSource,
+  ProfileStation,
+  RevisionCounts,
+  RevisionStatus,
+  RevisionView,
+  SectionDimensions,
+  SectionFamily,
+};
 
 export interface MemberPage {
   total: number;
   members: MemberRow[];
 }
 
+/** `GET …/members/facets`; the server's MemberFacets sits in its service module, beside entities the client cannot import. */
 export interface MemberFacets {
   storeys: string[];
   profiles: string[];
+  /** Families present, in SECTION_FAMILIES order. */
+  families: SectionFamily[];
+  /** How the sections were found, in PROFILE_SOURCES order. */
+  sources: ProfileSource[];
+  /** Members that will not be checked, counted by reason, most frequent first. */
+  skipped: SkippedReason[];
+}
+
+export interface SkippedReason {
+  reason: string;
+  count: number;
 }
 
 export interface Comparison extends RevisionComparison {
