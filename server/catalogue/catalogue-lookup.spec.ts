@@ -27,6 +27,15 @@ describe('findCatalogueEntry', () => {
     ['SHS 100x100x6', '100x100x6.0 SHS', 'box'],
     ['100x50x4RHS', '100x50x4.0 RHS', 'box'],
     ['168.3x4.8CHS', '168.3x4.8 CHS', 'tube'],
+    ['UPN 200', 'UPN 200', 'channel'],
+    ['UPN200', 'UPN 200', 'channel'],
+    ['UPE 200', 'UPE 200', 'channel'],
+    ['IPN 200', 'IPN 200', 'I'],
+    ['Beam:IPN200:77', 'IPN 200', 'I'],
+    ['HD 320x300', 'HD 320x300', 'I'],
+    ['HD320X300', 'HD 320x300', 'I'],
+    ['PFC 300x90x41', '300x90x41 PFC', 'channel'],
+    ['300x90x41PFC', '300x90x41 PFC', 'channel'],
   ])('finds %s as %s (%s)', (text, name, family) => {
     const hit = findCatalogueEntry(text);
     expect(hit).toMatchObject({ entry: { name, family }, origin: 'catalogue' });

@@ -9,8 +9,16 @@ import { AU_HOLLOW_ENTRIES } from './au-hollow';
 import { BUILT_IN_SECTIONS, entryOfSection, sectionKey } from './catalogue';
 import type { CatalogueEntry, CatalogueHit, CatalogueOrigin, CatalogueSection } from './catalogue-section';
 import { designationIn, designationKey, keysOf } from './designation';
+import { EN_CHANNEL_ENTRIES } from './en-channels';
+import { UK_PFC_ENTRIES } from './uk-channels';
 
-export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [...BUILT_IN_SECTIONS.map(entryOfSection), ...AU_PFC_ENTRIES, ...AU_HOLLOW_ENTRIES];
+export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
+  ...BUILT_IN_SECTIONS.map(entryOfSection),
+  ...EN_CHANNEL_ENTRIES,
+  ...UK_PFC_ENTRIES,
+  ...AU_PFC_ENTRIES,
+  ...AU_HOLLOW_ENTRIES,
+];
 
 /** A key naming sections whose dimensions differ: looked up, it finds nothing. */
 const AMBIGUOUS = 'ambiguous';
@@ -21,19 +29,20 @@ interface EntryIndex {
   byDesignation: Map<string, CatalogueEntry | typeof AMBIGUOUS>;
 }
 
-function sameDimensions(a: CatalogueEntry, b: CatalogueEntry): boolean {
-  return JSON.stringify(a.dimensions) === JSON.stringify(b.dimensions);
+/** Two tables name the same section only when shape and making agree (a cold-formed and a hot-finished tube differ). */
+function sameSection(a: CatalogueEntry, b: CatalogueEntry): boolean {
+  return a.process === b.process && JSON.stringify(a.dimensions) === JSON.stringify(b.dimensions);
 }
 
 function indexOf(entries: readonly CatalogueEntry[]): EntryIndex {
   const index: EntryIndex = { byName: new Map(), byDesignation: new Map() };
   for (const entry of entries) {
     index.byName.set(sectionKey(entry.name), entry);
-    const key = designationKey(entry.name);
+    const key = designationKey(entry.designation ?? entry.name);
     if (!key) continue;
     for (const k of keysOf(key)) {
       const there = index.byDesignation.get(k);
-      index.byDesignation.set(k, there === undefined || (there !== AMBIGUOUS && sameDimensions(there, entry)) ? entry : AMBIGUOUS);
+      index.byDesignation.set(k, there === undefined || (there !== AMBIGUOUS && sameSection(there, entry)) ? entry : AMBIGUOUS);
     }
   }
   return index;

@@ -39,6 +39,11 @@ export type SectionProcess = 'hot-rolled' | 'welded' | 'cold-formed' | 'hot-fini
 export interface CatalogueEntry {
   /** Display name as the table writes it: 'IPE 300', '300PFC40.1', 'HSS6X6X3/8', '100x100x6.0 SHS'. */
   readonly name: string;
+  /**
+   * The bare designation, when the name adds to it what tells two tables apart ('SHS 100x100x6' of
+   * 'SHS 100x100x6 EN 10219'): the entry answers to it, and where it names different sections, finds nothing.
+   */
+  readonly designation?: string;
   readonly series: string;
   readonly family: SectionFamily;
   readonly dimensions: SectionDimensions;

@@ -1,9 +1,11 @@
 /**
  * Cross-section areas of channels, hollow boxes and tubes in closed form (quarter-circle fillets and corners, flange
- * slope linear), which let the tests compare each table with its published areas and masses. I-sections go through
- * the engine's section mechanics instead.
+ * slope linear), which let the tests compare each table with its published areas and masses; and the area of the
+ * engine's own outline of any family, the strongest check of a table converted to our conventions.
  */
-import type { BoxDimensions, ChannelDimensions, TubeDimensions } from '../engine/section-family';
+import type { BoxDimensions, ChannelDimensions, SectionDimensions, TubeDimensions } from '../engine/section-family';
+import { sectionOutline } from '../engine/section-outline';
+import { polygonProperties } from '../engine/section-polygon';
 
 /** Material added by a quarter-circle fillet of radius r in a right-angled corner. */
 function filletArea_mm2(radius_mm: number): number {
@@ -28,4 +30,9 @@ export function boxArea_mm2(b: BoxDimensions): number {
 export function tubeArea_mm2(t: TubeDimensions): number {
   const inner_mm = t.diameter_mm - 2 * t.wallThickness_mm;
   return (Math.PI / 4) * (t.diameter_mm * t.diameter_mm - inner_mm * inner_mm);
+}
+
+/** Area of the idealised outline the engine draws for any family (chords within 1 µm of their arcs). */
+export function outlineArea_mm2(d: SectionDimensions): number {
+  return polygonProperties(sectionOutline(d, 0.001)).area_mm2;
 }
