@@ -80,6 +80,8 @@ export interface MemberSheet {
   /** The member's result as the run recorded it (with its per-combination list). */
   check: MemberCheck;
   section: { input: ISectionInput; properties: SectionPropertyValues } | null;
+  /** How the section was found and, for a tapered member, which of its sections the check used and why. */
+  sectionNote: string | null;
   grade: GradeId | null;
   fy_MPa: number | null;
   gradeRule: string | null;

@@ -14,7 +14,8 @@ import type { ISectionInput } from '../engine/section';
 import { sectionPropertyValues } from '../engine/section-properties';
 import { shearStressProfile } from '../engine/shear-stress';
 import { requiredWebThickness_mm } from '../engine/web-thickness';
-import type { MemberRecord } from '../ifc/model-read-result';
+import { dimensionsLabel } from '../engine/section-family';
+import { type MemberRecord, PROFILE_SOURCE_LABELS } from '../ifc/model-read-result';
 import { REPORT_CAUTIONS } from '../reports/report-cautions';
 import type { CheckParameters } from './check-parameters';
 import { engineParamsOf, evaluateMember, type MemberCheck } from './check-run-compute';
@@ -33,6 +34,22 @@ export interface SheetInput {
 const ENGINE_CHANGED =
   'The engine has changed since this run: the trace and τ(y) below were recomputed by the current engine; the recorded values of the run are the governing row above.';
 
+const percent = (fraction: number): string => `${Math.round(fraction * 100)} %`;
+
+/**
+ * Where the section came from and, for a tapered member, its sections along the axis and the one checked: the smaller
+ * one, since the imported results keep only the largest shear of each combination, not the force at every station.
+ */
+export function sectionNoteOf(member: MemberRecord): string | null {
+  const profile = member.profile;
+  if (!profile) return null;
+  const found = `Section ${PROFILE_SOURCE_LABELS[profile.source]}.`;
+  if (!profile.along?.length) return found;
+  const sections = profile.along.map((s) => `at ${percent(s.at)} of the length: ${dimensionsLabel(s.dimensions)} mm`).join('; ');
+  const governing = profile.governingAt === undefined ? '' : ` Checked with the smaller section, at ${percent(profile.governingAt)} of the length, for every combination (safe side).`;
+  return `${found} Tapered member — ${sections}.${governing}`;
+}
+
 export function buildMemberSheet(input: SheetInput): MemberSheet {
   const { member, check, parameters } = input;
   const governing = check.governing;
@@ -44,6 +61,7 @@ export function buildMemberSheet(input: SheetInput): MemberSheet {
     reason: check.reason ?? null,
     check,
     section: null,
+    sectionNote: sectionNoteOf(member),
     grade: check.grade,
     fy_MPa: check.fy_MPa,
     gradeRule: null,

@@ -46,6 +46,7 @@ export class RunReportService {
         profileName: sheet.member.profile?.name ?? result.profileName ?? '',
         storey: sheet.member.storey ?? undefined,
         section: sheet.section.input,
+        ...(sheet.sectionNote ? { sectionNote: sheet.sectionNote } : {}),
         check: sheet.check,
         trace: sheet.trace,
         elasticLimit_MPa: sheet.stress?.elasticLimit_MPa,

@@ -32,6 +32,8 @@ export interface CalculationSheetData {
   storey?: string;
   /** The section as checked (after any fabrication override of the run). */
   section: ISectionInput;
+  /** How the section was found and, for a tapered member, which section was checked (member-sheet.ts sectionNoteOf). */
+  sectionNote?: string;
   /** The member's result in the run: failing, or passing with a warning; it must have a governing combination. */
   check: MemberCheck;
   /** Clause-by-clause trace of the governing combination, as the engine's evaluateCapacity wrote it. */

@@ -284,6 +284,7 @@ function calculationSheet(doc: Pdf, sheet: CalculationSheetData, data: CheckRepo
       ['Storey', sheet.storey ?? '—', 'Utilisation', { text: `${percentText(governing.utilisation)} · ${status.label}`, fill: status.fill }],
     ],
   );
+  if (sheet.sectionNote) paragraph(doc, sheet.sectionNote, { size: TEXT_SIZE.small });
   sheetDrawings(doc, sheet, governing);
   if (check.flags.length > 0) paragraph(doc, check.flags.map((flag) => `• ${flagText(flag)}`).join('\n'), { size: TEXT_SIZE.small });
 

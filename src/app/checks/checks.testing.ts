@@ -116,6 +116,7 @@ export function memberSheet(overrides: Partial<MemberSheet> = {}): MemberSheet {
       { combination: 'ULS-2', station_mm: 0, VEd_kN: 405.2, utilisation: 1.1241, memberKey: 'G-101', row: 3 },
     ],
     suggestion: { lighterPassing: null, requiredWebThickness_mm: 8.2 },
+    sectionNote: 'Section dimensions written in the model.',
     engineVersion: { run: 'engine-test', sheet: 'engine-test' },
     cautions: [...CAUTIONS],
     ...overrides,
