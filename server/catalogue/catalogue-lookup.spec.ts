@@ -23,8 +23,10 @@ describe('findCatalogueEntry', () => {
     ['300PFC40.1', '300PFC40.1', 'channel'],
     ['300PFC', '300PFC40.1', 'channel'],
     ['150PFC17.7', '150PFC17.7', 'channel'],
-    ['100x6.0SHS', '100x100x6.0 SHS', 'box'],
-    ['SHS 100x100x6', '100x100x6.0 SHS', 'box'],
+    ['100x100x6.0 SHS', '100x100x6.0 SHS', 'box'],
+    ['SHS 100x100x6.0 EN 10219', 'SHS 100x100x6.0 EN 10219', 'box'],
+    ['SHS 100x100x6.3', 'SHS 100x100x6.3 EN 10210', 'box'],
+    ['CHS 168.3x5', 'CHS 168.3x5.0 EN 10210', 'tube'],
     ['100x50x4RHS', '100x50x4.0 RHS', 'box'],
     ['168.3x4.8CHS', '168.3x4.8 CHS', 'tube'],
     ['UPN 200', 'UPN 200', 'channel'],
@@ -43,6 +45,12 @@ describe('findCatalogueEntry', () => {
   });
 
   it.each(['310UC97', '300PFC41', 'U200', 'IPE 301', 'IPE270A', 'PL-GIRDER-7', 'W12X27', '', '   '])('finds nothing for %s', (text) => {
+    expect(findCatalogueEntry(text)).toBeNull();
+  });
+
+  it.each(['SHS 100x100x6', '100x6.0SHS', '100x100x5SHS'])('finds nothing for %s, which names sections of different standards', (text) => {
+    // 100x100x6.0: AS/NZS 1163 corners 2.5t (15 mm) against EN 10219 2t (12 mm); 100x100x5.0 is also an EN 10210 size
+    // with 1.5t corners. Guessing would pick a section whose area differs by a few per cent.
     expect(findCatalogueEntry(text)).toBeNull();
   });
 

@@ -10,6 +10,7 @@ import { BUILT_IN_SECTIONS, entryOfSection, sectionKey } from './catalogue';
 import type { CatalogueEntry, CatalogueHit, CatalogueOrigin, CatalogueSection } from './catalogue-section';
 import { designationIn, designationKey, keysOf } from './designation';
 import { EN_CHANNEL_ENTRIES } from './en-channels';
+import { EN_HOLLOW_ENTRIES } from './en-hollow';
 import { UK_PFC_ENTRIES } from './uk-channels';
 
 export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
@@ -18,6 +19,7 @@ export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
   ...UK_PFC_ENTRIES,
   ...AU_PFC_ENTRIES,
   ...AU_HOLLOW_ENTRIES,
+  ...EN_HOLLOW_ENTRIES,
 ];
 
 /** A key naming sections whose dimensions differ: looked up, it finds nothing. */
