@@ -1,5 +1,5 @@
 /** Our words for the states of revisions and members, and small formatting rules the Models pages share. */
-import type { MemberStatus, RevisionStatus, RevisionView } from './models-api';
+import type { MemberFlag, MemberStatus, RevisionStatus, RevisionView } from './models-api';
 
 export const REVISION_STATUS_LABELS: Readonly<Record<RevisionStatus, string>> = {
   queued: 'Waiting to be read',
@@ -20,6 +20,14 @@ export const MEMBER_STATUS_LABELS: Readonly<Record<MemberStatus, string>> = {
   ok: 'Section read',
   'not-applicable': 'Not an I-section',
   flagged: 'Needs a look',
+};
+
+/** What the flags about reading a section mean, for the member panel; their short labels are in checks/flag-labels.ts. */
+export const SECTION_FLAG_NOTES: Readonly<Partial<Record<MemberFlag, string>>> = {
+  'name-and-geometry-differ': "The section's name and its measured geometry disagree; the geometry is used. Ask the modeller which one is meant.",
+  'section-unrecognised': 'The outline or the cut through the body is not a shape Taulens recognises, so the member is not checked.',
+  'geometry-unread': 'The body could not be cut to measure the section, so only a section name found in a catalogue can give its dimensions.',
+  tapered: 'The section varies along the member: the end sections are kept and the checks use the smaller one, never the larger.',
 };
 
 export function isRunning(revision: Pick<RevisionView, 'status'>): boolean {

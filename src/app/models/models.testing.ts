@@ -1,6 +1,6 @@
 // Revisions and members for the Models specs. Not imported by the app. The member is the beam 'TopMid' of the shared
 // sample beam-varying-cardinal-points.ifc (IPE200, S355JR, 1000 mm) as its SOURCE.md lists it.
-import type { MemberRecord, MemberRow, RevisionView } from './models-api';
+import type { MemberFacets, MemberRecord, MemberRow, RevisionView } from './models-api';
 
 export function revision(overrides: Partial<RevisionView> = {}): RevisionView {
   return {
@@ -50,6 +50,62 @@ export function memberRow(overrides: Partial<MemberRow> = {}): MemberRow {
   };
 }
 
+// Sections of other families, with dimensions from EN 10365 (UPN 200, IPE 300, IPE 400) and EN 10210-2
+// (CHS 168.3 × 8.0), from memory. Members, tags and storeys are invented.
+
+/** A UPN 200 channel measured from its profile outline: listed with its dimensions, not checked yet. */
+export const CHANNEL_ROW = memberRow({
+  globalId: '2O2Fr$t4X7Zf8NOew3FLOH',
+  expressId: 412,
+  ifcClass: 'IfcMember',
+  name: 'Purlin P4',
+  tag: 'P4',
+  status: 'not-applicable',
+  reason: "'UPN 200': channel. Its web check is not available yet; it is listed with its dimensions only.",
+  profileName: 'UPN 200',
+  profileSource: 'outline',
+  profileType: 'IfcArbitraryClosedProfileDef',
+  profileFamily: 'channel',
+  depth_mm: 200,
+  webThickness_mm: 8.5,
+  flangeWidth_mm: 75,
+  flangeThickness_mm: 11.5,
+});
+
+/** A CHS 168.3 × 8.0 brace from a parametric profile: no flanges, so only its width (the diameter) in that column. */
+export const TUBE_ROW = memberRow({
+  globalId: '1xe23DCTfXVVqeTb00000T',
+  expressId: 365,
+  ifcClass: 'IfcMember',
+  name: 'Brace BR1',
+  tag: 'BR1',
+  status: 'not-applicable',
+  reason: "'CHS 168.3x8': circular hollow section. Its web check is not available yet; it is listed with its dimensions only.",
+  profileName: 'CHS 168.3x8',
+  profileSource: 'ifc-profile',
+  profileType: 'IfcCircleHollowProfileDef',
+  profileFamily: 'tube',
+  depth_mm: 168.3,
+  webThickness_mm: 8,
+  flangeWidth_mm: 168.3,
+  flangeThickness_mm: null,
+});
+
+/** The facets of a revision holding the members above, with two reasons for skipping. */
+export function memberFacets(overrides: Partial<MemberFacets> = {}): MemberFacets {
+  return {
+    storeys: ['Level 01'],
+    profiles: ['CHS 168.3x8', 'IPE200', 'UPN 200'],
+    families: ['I', 'channel', 'tube'],
+    sources: ['ifc-profile', 'outline'],
+    skipped: [
+      { reason: TUBE_ROW.reason!, count: 6 },
+      { reason: CHANNEL_ROW.reason!, count: 2 },
+    ],
+    ...overrides,
+  };
+}
+
 /** The same member's whole record, as `GET …/members/:globalId` answers. */
 export function memberRecord(): MemberRecord {
   const row = memberRow();
@@ -77,6 +133,90 @@ export function memberRecord(): MemberRecord {
       bottomFlange: { width_mm: 100, thickness_mm: 8.5, filletRadius_mm: 12 },
     },
     section: null,
+    flags: [],
+  };
+}
+
+/** A column tapering from an IPE 400 section at its foot to an IPE 300 section at its head: the smaller end governs. */
+export function taperedRecord(): MemberRecord {
+  const ipe400 = {
+    family: 'I' as const,
+    depth_mm: 400,
+    webThickness_mm: 8.6,
+    topFlange: { width_mm: 180, thickness_mm: 13.5, filletRadius_mm: 21 },
+    bottomFlange: { width_mm: 180, thickness_mm: 13.5, filletRadius_mm: 21 },
+  };
+  const ipe300 = {
+    family: 'I' as const,
+    depth_mm: 300,
+    webThickness_mm: 7.1,
+    topFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
+    bottomFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
+  };
+  return {
+    ...memberRecord(),
+    globalId: '0K7w7JbDL1Fxw8$U8zB1Ta',
+    ifcClass: 'IfcColumn',
+    name: 'Tapered column C7',
+    tag: 'C7',
+    predefinedType: 'COLUMN',
+    profile: {
+      ...ipe300,
+      name: '',
+      source: 'ifc-profile',
+      ifcType: 'IfcExtrudedAreaSolidTapered',
+      fabrication: 'welded',
+      along: [
+        { at: 0, dimensions: ipe400 },
+        { at: 1, dimensions: ipe300 },
+      ],
+      governingAt: 1,
+    },
+    flags: ['tapered'],
+  };
+}
+
+/** The channel's whole record, with the sloped flanges and radii its outline was measured with. */
+export function channelRecord(): MemberRecord {
+  return {
+    ...memberRecord(),
+    globalId: CHANNEL_ROW.globalId,
+    ifcClass: CHANNEL_ROW.ifcClass,
+    name: CHANNEL_ROW.name,
+    tag: CHANNEL_ROW.tag,
+    predefinedType: 'PURLIN',
+    status: 'not-applicable',
+    reason: CHANNEL_ROW.reason!,
+    profile: {
+      family: 'channel',
+      name: 'UPN 200',
+      source: 'outline',
+      ifcType: 'IfcArbitraryClosedProfileDef',
+      fabrication: 'rolled',
+      depth_mm: 200,
+      width_mm: 75,
+      webThickness_mm: 8.5,
+      flangeThickness_mm: 11.5,
+      rootRadius_mm: 11.5,
+      edgeRadius_mm: 6,
+      slope_rad: Math.atan(0.08),
+    },
+    flags: [],
+  };
+}
+
+/** The tube's whole record. */
+export function tubeRecord(): MemberRecord {
+  return {
+    ...memberRecord(),
+    globalId: TUBE_ROW.globalId,
+    ifcClass: TUBE_ROW.ifcClass,
+    name: TUBE_ROW.name,
+    tag: TUBE_ROW.tag,
+    predefinedType: 'BRACE',
+    status: 'not-applicable',
+    reason: TUBE_ROW.reason!,
+    profile: { family: 'tube', name: 'CHS 168.3x8', source: 'ifc-profile', ifcType: 'IfcCircleHollowProfileDef', fabrication: 'rolled', diameter_mm: 168.3, wallThickness_mm: 8 },
     flags: [],
   };
 }

@@ -2,7 +2,7 @@ import { HttpTestingController, TestRequest } from '@angular/common/http/testing
 import { nextRequest, settle } from '../../core/http.testing';
 import { TEST_PROJECT_ID } from '../../core/session.testing';
 import { configureProjectPagesForTests, openProjectSection } from '../../projects/project.testing';
-import { memberRecord, memberRow, revision } from '../models.testing';
+import { memberFacets, memberRecord, memberRow, revision } from '../models.testing';
 
 const api = `/api/projects/${TEST_PROJECT_ID}/models/rev-1`;
 const membersRequest = (params: Record<string, string>) => (request: { url: string; params: { get(name: string): string | null } }) =>
@@ -42,7 +42,7 @@ describe('RevisionMembers', () => {
     (await nextRequest(backend, api)).flush({ revision: revision({ counts: { members: 3, ok: 2, notApplicable: 1, flagged: 0, context: 2 } }) });
     await settle();
     (await nextRequest(backend, membersRequest({ sort: 'expressId', dir: 'asc', page: '0', pageSize: '50' }))).flush({ total: 2, members: [memberRow(), assumed] });
-    (await nextRequest(backend, `${api}/members/facets`)).flush({ storeys: ['Level 01'], profiles: ['IPE200'] });
+    (await nextRequest(backend, `${api}/members/facets`)).flush(memberFacets({ profiles: ['IPE200'], families: ['I'], sources: ['ifc-profile'], skipped: [] }));
     await settle();
     return harness.routeNativeElement!.querySelector<HTMLElement>('tl-revision-members')!;
   }
