@@ -10,7 +10,7 @@ import { thickestPlate_mm } from '../engine/section-family';
 import { type Mat4, transformPoint, type Vec3 } from './matrix4';
 import { MaterialReader, type MaterialReading } from './material-reader';
 import { type BodyCut, cutMemberBody } from './body-cut';
-import { governingOfEnds, SectionResolver, type SectionOutcome } from './member-section';
+import { governingOfSections, SectionResolver, type SectionOutcome } from './member-section';
 import type { MemberFlag, MemberMaterial, MemberRecord, MemberStatus, Point3_mm } from './model-read-result';
 import { readObjectPlacement } from './placement-reader';
 import { ProfileReader } from './profile-reader';
@@ -160,14 +160,17 @@ export class MemberReader {
   }
 
   /**
-   * A tapered solid between two profiles: both end sections are kept, and the member takes the smaller one (the
-   * smaller web area), never the larger; a check with forces at stations interpolates between them.
+   * A tapered solid between two profiles, or a sectioned solid through several: every section is kept, and the member
+   * takes the smallest (web area), never a larger one.
    */
   private taperedSection(solid: SweptSolid, names: (string | null)[]): SectionOutcome {
-    const ends = [solid.profileId, refOf(solid.args[TAPERED_END_PROFILE_AT])].map((id) =>
-      id === undefined ? undefined : this.sections.resolve(this.profiles.read(id), names),
+    const sections = solid.crossSections ?? [
+      { profileId: solid.profileId, at: 0 },
+      { profileId: refOf(solid.args[TAPERED_END_PROFILE_AT]), at: 1 },
+    ];
+    return governingOfSections(
+      sections.map(({ profileId, at }) => ({ at, outcome: profileId === undefined ? undefined : this.sections.resolve(this.profiles.read(profileId), names) })),
     );
-    return governingOfEnds(ends[0], ends[1]);
   }
 
   private typeName(typeId: number | undefined): string | null {

@@ -240,23 +240,37 @@ function webArea_mm2(profile: MemberProfile): number {
   return overallDepth_mm(d) * (webThickness_mm(d) ?? overallWidth_mm(d));
 }
 
+/** A section read at a point of a varying member: `at` is the fraction of the length from the start. */
+export interface SectionAlong {
+  at: number;
+  outcome: SectionOutcome | undefined;
+}
+
 /**
- * The section of a tapered member from its two end sections: both kept in `along`, the smaller web area governing —
- * never the larger end. An end that cannot be read makes the member flagged with that end's reason.
+ * The section of a varying member (a tapered solid's two ends, a sectioned solid's cross sections): every section kept
+ * in `along`, the smallest web area governing — never a larger one. A section that cannot be read makes the member
+ * flagged with its reason; sections of different families are not one member's taper, so they are flagged too.
  */
-export function governingOfEnds(start: SectionOutcome | undefined, end: SectionOutcome | undefined): SectionOutcome {
-  const missing = !start ? 'start' : !end ? 'end' : undefined;
-  if (missing) return { status: 'flagged', reason: `The tapered member's ${missing} section is missing from the file.`, flags: ['tapered', 'invalid-profile'] };
-  for (const [which, outcome] of [['start', start!], ['end', end!]] as const) {
-    if (outcome.status === 'flagged') return { ...outcome, reason: `The tapered member's ${which} section: ${outcome.reason}`, flags: [...outcome.flags, 'tapered'] };
+export function governingOfSections(sections: readonly SectionAlong[]): SectionOutcome {
+  const percent = (at: number) => `${Math.round(at * 100)} %`;
+  const missing = sections.find((s) => !s.outcome);
+  if (missing || sections.length === 0) {
+    const where = missing ? `at ${percent(missing.at)} of its length ` : '';
+    return { status: 'flagged', reason: `The varying member's section ${where}is missing from the file.`, flags: ['tapered', 'invalid-profile'] };
   }
-  const [a, b] = [start!, end!] as Exclude<SectionOutcome, { status: 'flagged' }>[];
-  if (!a.profile || !b.profile) return a.profile ? b : a;
-  const governingAt = webArea_mm2(b.profile) < webArea_mm2(a.profile) ? 1 : 0;
-  const governing = governingAt === 1 ? b : a;
-  const along = [
-    { at: 0, dimensions: sectionDimensionsOf(a.profile) },
-    { at: 1, dimensions: sectionDimensionsOf(b.profile) },
-  ];
-  return { ...governing, profile: { ...governing.profile!, along, governingAt }, flags: [...new Set([...a.flags, ...b.flags, 'tapered' as const])] };
+  const read: { at: number; outcome: Exclude<SectionOutcome, { status: 'flagged' }> }[] = [];
+  for (const { at, outcome } of sections) {
+    if (outcome!.status === 'flagged') return { ...outcome!, reason: `The varying member's section at ${percent(at)} of its length: ${outcome!.reason}`, flags: [...outcome!.flags, 'tapered'] };
+    read.push({ at, outcome: outcome! });
+  }
+  const profiles = read.map((s) => s.outcome.profile);
+  if (profiles.some((p) => !p)) return read.find((s) => !s.outcome.profile)!.outcome;
+  if (new Set(profiles.map((p) => p!.family)).size > 1) {
+    return { status: 'flagged', reason: 'The varying member changes from one section family to another along its length.', flags: ['tapered', 'invalid-profile'] };
+  }
+  let governing = read[0];
+  for (const s of read) if (webArea_mm2(s.outcome.profile!) < webArea_mm2(governing.outcome.profile!)) governing = s;
+  const along = read.map((s) => ({ at: s.at, dimensions: sectionDimensionsOf(s.outcome.profile!) }));
+  const flags = [...new Set([...read.flatMap((s) => s.outcome.flags), 'tapered' as const])];
+  return { ...governing.outcome, profile: { ...governing.outcome.profile!, along, governingAt: governing.at }, flags };
 }

@@ -14,6 +14,9 @@ import {
   IFCMAPPEDITEM,
   IFCREVOLVEDAREASOLID,
   IFCREVOLVEDAREASOLIDTAPERED,
+  IFCSECTIONEDSOLID,
+  IFCSECTIONEDSOLIDHORIZONTAL,
+  IFCSECTIONEDSPINE,
   IFCSURFACECURVESWEPTAREASOLID,
 } from 'web-ifc';
 import { type AxisCurve, axisCurve } from './axis-curve';
@@ -30,6 +33,11 @@ export interface SweptSolid {
   transform: Mat4 | undefined;
   clipped: boolean;
   tapered: boolean;
+  /**
+   * The cross sections of an IFC4X3 sectioned solid or spine, each with where it sits as a fraction of the length
+   * (from the positions' distances along; evenly spaced when the file gives none); `profileId` is the first.
+   */
+  crossSections?: { profileId: number; at: number }[];
 }
 
 export interface ElementShape {
@@ -59,6 +67,7 @@ const SWEPT = new Set([
   IFCFIXEDREFERENCESWEPTAREASOLID,
 ]);
 const TAPERED = new Set([IFCEXTRUDEDAREASOLIDTAPERED, IFCREVOLVEDAREASOLIDTAPERED]);
+const SECTIONED = new Set([IFCSECTIONEDSOLID, IFCSECTIONEDSOLIDHORIZONTAL, IFCSECTIONEDSPINE]);
 /** Identifiers of representations that are never the body (ISO 16739 representation identifiers). */
 const NOT_BODY = new Set(['AXIS', 'BOX', 'FOOTPRINT', 'ANNOTATION', 'REFERENCE', 'CLEARANCE', 'COG', 'PROFILE', 'LIGHTING', 'SURFACE']);
 const MAX_DEPTH = 12;
@@ -122,6 +131,14 @@ export class ShapeReader {
       shape.solids.push({ solidType: type, profileId: refOf(args[0]), args, transform, clipped, tapered: TAPERED.has(type) });
       return;
     }
+    if (SECTIONED.has(type)) {
+      const args = transform ? this.mappedSolidArgs(itemId) : (this.lines.line(itemId)?.args ?? []);
+      const profileIds = refsOf(args[1]);
+      const at = this.sectionFractions(type, refsOf(args[2]), profileIds.length);
+      const crossSections = profileIds.map((profileId, i) => ({ profileId, at: at[i] }));
+      shape.solids.push({ solidType: type, profileId: profileIds[0], args, transform, clipped, tapered: profileIds.length > 1, crossSections });
+      return;
+    }
     if (type === IFCBOOLEANRESULT || type === IFCBOOLEANCLIPPINGRESULT) {
       const first = refOf(this.lines.line(itemId)?.args[1]);
       if (first !== undefined) this.collect(first, transform, true, shape, depth + 1, booleanRoot ?? itemId);
@@ -145,6 +162,40 @@ export class ShapeReader {
     shape.otherBodyTypes.push(this.lines.typeName(type));
     const bodyItem = booleanRoot ?? itemId;
     shape.bodyItems.push({ itemId: bodyItem, type: this.lines.typeOf(bodyItem), transform });
+  }
+
+  /**
+   * Where each cross section of a sectioned solid sits, as a fraction of the length: IfcSectionedSolidHorizontal places
+   * them by IfcAxis2PlacementLinear (a point's DistanceAlong its curve), IfcSectionedSpine by IfcAxis2Placement3D
+   * (distances between the locations); without readable positions they are taken as evenly spaced.
+   */
+  private sectionFractions(type: number, positionIds: number[], count: number): number[] {
+    const even = Array.from({ length: count }, (_, i) => (count > 1 ? i / (count - 1) : 0));
+    if (positionIds.length !== count || count < 2) return even;
+    const distances: number[] = [];
+    if (type === IFCSECTIONEDSPINE) {
+      let along = 0;
+      let previous: Vec3 | undefined;
+      for (const id of positionIds) {
+        const point = readPoint(this.lines, refOf(this.lines.line(id)?.args[0]));
+        if (!point) return even;
+        if (previous) along += norm(subtract(point, previous));
+        distances.push(along);
+        previous = point;
+      }
+    } else {
+      for (const id of positionIds) {
+        // IfcAxis2PlacementLinear.Location → IfcPointByDistanceExpression.DistanceAlong (a typed length measure).
+        const location = this.lines.line(refOf(this.lines.line(id)?.args[0]));
+        const along = numberOf(location?.args[0]);
+        if (along === undefined) return even;
+        distances.push(along);
+      }
+    }
+    const first = distances[0];
+    const span = distances[distances.length - 1] - first;
+    if (!(span > 0) || distances.some((d, i) => i > 0 && d < distances[i - 1])) return even;
+    return distances.map((d) => (d - first) / span);
   }
 
   /** Position of a swept solid in element coordinates (model units). */
