@@ -38,6 +38,10 @@ describe('findCatalogueEntry', () => {
     ['HD320X300', 'HD 320x300', 'I'],
     ['PFC 300x90x41', '300x90x41 PFC', 'channel'],
     ['300x90x41PFC', '300x90x41 PFC', 'channel'],
+    ['S12x50', 'S12X50', 'I'],
+    ['S 12 x 50', 'S12X50', 'I'],
+    ['M5X18.9', 'M5X18.9', 'I'],
+    ['C15x33.9', 'C15X33.9', 'channel'],
   ])('finds %s as %s (%s)', (text, name, family) => {
     const hit = findCatalogueEntry(text);
     expect(hit).toMatchObject({ entry: { name, family }, origin: 'catalogue' });

@@ -12,11 +12,13 @@ import { designationIn, designationKey, keysOf } from './designation';
 import { EN_CHANNEL_ENTRIES } from './en-channels';
 import { EN_HOLLOW_ENTRIES } from './en-hollow';
 import { UK_PFC_ENTRIES } from './uk-channels';
+import { US_CHANNEL_ENTRIES } from './us-shapes';
 
 export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
   ...BUILT_IN_SECTIONS.map(entryOfSection),
   ...EN_CHANNEL_ENTRIES,
   ...UK_PFC_ENTRIES,
+  ...US_CHANNEL_ENTRIES,
   ...AU_PFC_ENTRIES,
   ...AU_HOLLOW_ENTRIES,
   ...EN_HOLLOW_ENTRIES,
