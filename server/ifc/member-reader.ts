@@ -14,6 +14,7 @@ import { governingOfSections, SectionResolver, type SectionOutcome } from './mem
 import type { MemberFlag, MemberMaterial, MemberRecord, MemberStatus, Point3_mm } from './model-read-result';
 import { readObjectPlacement } from './placement-reader';
 import { ProfileReader } from './profile-reader';
+import { PropertyNames } from './property-names';
 import { type ElementShape, type MemberLine, ShapeReader, type SweptSolid } from './shape-reader';
 import { SpatialIndex } from './spatial-index';
 import { enumOf, refOf, type StepLines, textOf } from './step-lines';
@@ -39,6 +40,8 @@ export interface MemberSolid {
 
 /** IfcElementType.PredefinedType: position 9 of IfcBeamType, IfcColumnType and IfcMemberType. */
 const TYPE_PREDEFINED_AT = 9;
+/** Flags of a section that a designation might still resolve. */
+const NAME_COULD_HELP: ReadonlySet<MemberFlag> = new Set(['profile-not-in-catalogue', 'section-unrecognised', 'geometry-unread']);
 /** EndSweptArea of IfcExtrudedAreaSolidTapered and IfcRevolvedAreaSolidTapered. */
 const TAPERED_END_PROFILE_AT = 4;
 const UNSET_PREDEFINED = new Set(['NOTDEFINED']);
@@ -49,6 +52,7 @@ export class MemberReader {
   private readonly shapes: ShapeReader;
   private readonly profiles: ProfileReader;
   private readonly sections: SectionResolver;
+  private readonly properties: PropertyNames;
   private readonly typePredefined = new Map<number, string | null>();
 
   constructor(
@@ -60,6 +64,7 @@ export class MemberReader {
     this.shapes = new ShapeReader(lines, options.radiansPerAngleUnit);
     this.profiles = new ProfileReader(lines, options.ifc2x3, options.scaleToMm, options.radiansPerAngleUnit);
     this.sections = new SectionResolver(options.projectCatalogue);
+    this.properties = new PropertyNames(lines);
   }
 
   /** Express ids of all beams, columns and members, in file order. */
@@ -82,7 +87,12 @@ export class MemberReader {
     const names = [material?.profileName ?? null, objectType, textOf(args[2]), this.typeName(typeId)];
     const axisLine = this.shapes.axisLine(shape);
     const cut = material?.profileId === undefined && solid?.profileId === undefined && shape.bodyItems.length > 0 ? this.cutBody(shape, axisLine) : undefined;
-    const outcome = this.section(shape, material, names, cut);
+    let outcome = this.section(shape, material, names, cut);
+    if (outcome.status === 'flagged' && outcome.flags.some((f) => NAME_COULD_HELP.has(f))) {
+      // Some exporters name the section only in a property set: looked up only when the other names gave nothing.
+      const fromProperties = this.properties.sectionNamesOf(expressId, typeId);
+      if (fromProperties.length > 0) outcome = this.section(shape, material, [...names, ...fromProperties], cut);
+    }
     flags.push(...outcome.flags);
 
     const placement = readObjectPlacement(this.lines, refOf(args[5]));

@@ -67,6 +67,11 @@ describe('edge-cases.ifc', () => {
     });
   });
 
+  it('finds a section named only in a property set when the profile gives neither dimensions nor a name', () => {
+    // IPE 300 from the built-in EN 10365 table (server/catalogue/en-sections.ts: h 300, tw 7.1 — from memory).
+    expect(member('P-pset')).toMatchObject({ status: 'ok', profile: { name: 'IPE 300', source: 'catalogue', depth_mm: 300, webThickness_mm: 7.1 } });
+  });
+
   it('takes section, material and predefined type from the type, and the storey through the assembly', () => {
     const beam = member('B-assembly');
     expect(beam).toMatchObject({ status: 'ok', storey: 'Mezzanine', predefinedType: 'LINTEL' });
