@@ -12,6 +12,7 @@ import { designationIn, designationKey, keysOf } from './designation';
 import { EN_CHANNEL_ENTRIES } from './en-channels';
 import { EN_HOLLOW_ENTRIES } from './en-hollow';
 import { UK_PFC_ENTRIES } from './uk-channels';
+import { US_HSS_ENTRIES } from './us-hollow';
 import { US_CHANNEL_ENTRIES } from './us-shapes';
 
 export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
@@ -22,6 +23,7 @@ export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
   ...AU_PFC_ENTRIES,
   ...AU_HOLLOW_ENTRIES,
   ...EN_HOLLOW_ENTRIES,
+  ...US_HSS_ENTRIES,
 ];
 
 /** A key naming sections whose dimensions differ: looked up, it finds nothing. */

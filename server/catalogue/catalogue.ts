@@ -17,11 +17,12 @@ import { EN_HD_SOURCE, EN_I_SECTIONS, EN_IPN_SOURCE } from './en-i-sections';
 import { EN_SECTIONS, EN_SOURCE } from './en-sections';
 import { UK_PFC_SOURCE } from './uk-channels';
 import { UK_SECTIONS, UK_SOURCE } from './uk-sections';
+import { US_HSS_SOURCE } from './us-hollow';
 import { US_I_SECTIONS, US_SHAPES_SOURCE } from './us-shapes';
 import { W_SECTIONS, W_SOURCE } from './w-shapes';
 
 export const CATALOGUE_SOURCES: Readonly<Record<string, CatalogueSource>> = Object.fromEntries(
-  [EN_SOURCE, EN_IPN_SOURCE, EN_HD_SOURCE, EN_UPN_SOURCE, EN_UPE_SOURCE, W_SOURCE, US_SHAPES_SOURCE, UK_SOURCE, UK_PFC_SOURCE, AU_HOT_ROLLED_SOURCE, AU_WELDED_SOURCE, AU_PFC_SOURCE, AU_HOLLOW_SOURCE, EN_10219_SOURCE, EN_10210_SOURCE].map((s) => [s.id, s]),
+  [EN_SOURCE, EN_IPN_SOURCE, EN_HD_SOURCE, EN_UPN_SOURCE, EN_UPE_SOURCE, W_SOURCE, US_SHAPES_SOURCE, US_HSS_SOURCE, UK_SOURCE, UK_PFC_SOURCE, AU_HOT_ROLLED_SOURCE, AU_WELDED_SOURCE, AU_PFC_SOURCE, AU_HOLLOW_SOURCE, EN_10219_SOURCE, EN_10210_SOURCE].map((s) => [s.id, s]),
 );
 
 export const BUILT_IN_SECTIONS: readonly CatalogueSection[] = [...EN_SECTIONS, ...EN_I_SECTIONS, ...W_SECTIONS, ...US_I_SECTIONS, ...UK_SECTIONS, ...AU_SECTIONS];
