@@ -127,6 +127,10 @@ export class MemberTable {
     return MEMBER_STATUS_LABELS[row.status];
   }
 
+  protected familyLabel(row: MemberRow): string {
+    return row.profileFamily ? SECTION_FAMILY_LABELS[row.profileFamily] : '—';
+  }
+
   /** How the section was found; for an I-section also whether it is rolled or welded (other families are not told apart yet). */
   protected sectionOrigin(row: MemberRow): string | null {
     if (!row.profileSource) return null;
