@@ -96,6 +96,12 @@ describe('computeCheckRun: stresses', () => {
 describe('computeCheckRun: statuses and flags', () => {
   const parameters = { standard: 'aisc360-22-lrfd' } as const;
 
+  it('never checks a member the reader flagged, even when it carries a section', () => {
+    const zeroLength: CheckableMember = { ...member('Z', profileOf('W24X62')), status: 'flagged', reason: 'The member has no length.' };
+    const [check] = run([zeroLength], { Z: [shear('ULS', 1)] }, parameters).members;
+    expect(check).toMatchObject({ status: 'not-checked', reason: 'The member has no length.', governing: null });
+  });
+
   it('marks not-applicable, not-checked (no results, no section, a section the engine refuses) with reasons', () => {
     const tube: CheckableMember = { globalId: 'T', status: 'not-applicable', reason: 'Profile IfcRectangleHollowProfileDef is not an I-section.', profile: null, material: null, flags: [] };
     const broken = profileOf('W24X62');

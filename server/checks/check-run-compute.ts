@@ -142,6 +142,8 @@ function checkOneMember(
     flags,
   });
   if (member.status === 'not-applicable') return unchecked('not-applicable', member.reason ?? 'The profile is not an I-section.');
+  // A flagged member may carry a section (read, but on a member of no length, say); it is never checked.
+  if (member.status === 'flagged') return unchecked('not-checked', member.reason ?? 'The model reader flagged this member.');
   if (!isIProfile(member.profile)) return unchecked('not-checked', member.reason ?? 'No I-section could be read for this member.');
   if (shears.length === 0) return unchecked('not-checked', 'No shear results were matched to this member.', [...memberFlags, 'no-results']);
 

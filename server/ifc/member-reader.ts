@@ -3,7 +3,7 @@
  * identity and placement in the building, material and grade, axis and length, and the section. A member that cannot
  * be read fully is kept with status 'flagged' and the reason, never dropped and never a crash.
  */
-import { IFCBEAM, IFCCOLUMN, IFCMEMBER } from 'web-ifc';
+import { IFCBEAM, IFCCOLUMN, IFCEXTRUDEDAREASOLID, IFCEXTRUDEDAREASOLIDTAPERED, IFCMEMBER } from 'web-ifc';
 import type { CatalogueSection } from '../catalogue/catalogue-section';
 import { type GradeId, gradeFromMaterialName, GradeError, yieldStrength, type EnYieldRule } from '../engine/grades';
 import { thickestPlate_mm } from '../engine/section-family';
@@ -17,7 +17,7 @@ import { ProfileReader } from './profile-reader';
 import { PropertyNames } from './property-names';
 import { type ElementShape, type MemberLine, ShapeReader, type SweptSolid } from './shape-reader';
 import { SpatialIndex } from './spatial-index';
-import { enumOf, refOf, type StepLines, textOf } from './step-lines';
+import { enumOf, numberOf, refOf, type StepLines, textOf } from './step-lines';
 
 const MEMBER_TYPES = [IFCBEAM, IFCCOLUMN, IFCMEMBER] as const;
 
@@ -40,6 +40,7 @@ export interface MemberSolid {
 
 /** IfcElementType.PredefinedType: position 9 of IfcBeamType, IfcColumnType and IfcMemberType. */
 const TYPE_PREDEFINED_AT = 9;
+const MIN_LENGTH_MM = 1;
 /** Flags of a section that a designation might still resolve. */
 const NAME_COULD_HELP: ReadonlySet<MemberFlag> = new Set(['profile-not-in-catalogue', 'section-unrecognised', 'geometry-unread']);
 /** EndSweptArea of IfcExtrudedAreaSolidTapered and IfcRevolvedAreaSolidTapered. */
@@ -107,6 +108,11 @@ export class MemberReader {
       status = 'flagged';
       const missing = shape.danglingReference === undefined ? 'has no shape representation' : `refers to representation #${shape.danglingReference}, which is not in the file`;
       reason = `The member ${missing}, so it has no axis, length or geometry.` + (reason ? ` ${reason}` : '');
+    }
+    if (status !== 'flagged' && this.hasZeroLength(line3d, solid)) {
+      flags.push('zero-length');
+      status = 'flagged';
+      reason = 'The member has no length (its axis or extrusion is shorter than 1 mm), so it is not checked.';
     }
     const grade = this.material(material, outcome, flags);
     if (grade.error && status === 'ok') {
@@ -181,6 +187,13 @@ export class MemberReader {
     return governingOfSections(
       sections.map(({ profileId, at }) => ({ at, outcome: profileId === undefined ? undefined : this.sections.resolve(this.profiles.read(profileId), names) })),
     );
+  }
+
+  /** An axis shorter than 1 mm, or an extrusion of no depth (which gives no axis at all). */
+  private hasZeroLength(line3d: MemberLine | undefined, solid: SweptSolid | undefined): boolean {
+    if (line3d) return line3d.length * this.options.scaleToMm < MIN_LENGTH_MM;
+    const depth = solid && (solid.solidType === IFCEXTRUDEDAREASOLID || solid.solidType === IFCEXTRUDEDAREASOLIDTAPERED) ? numberOf(solid.args[3]) : undefined;
+    return depth !== undefined && !(depth * this.options.scaleToMm >= MIN_LENGTH_MM);
   }
 
   private typeName(typeId: number | undefined): string | null {

@@ -55,6 +55,7 @@ export type MemberFlag =
   | 'several-profiles'
   | 'name-and-geometry-differ'
   | 'section-unrecognised'
+  | 'zero-length'
   | 'geometry-unread';
 
 export interface MemberMaterial {
