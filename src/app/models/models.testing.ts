@@ -1,6 +1,6 @@
 // Revisions and members for the Models specs. Not imported by the app. The member is the beam 'TopMid' of the shared
 // sample beam-varying-cardinal-points.ifc (IPE200, S355JR, 1000 mm) as its SOURCE.md lists it.
-import type { MemberFacets, MemberRecord, MemberRow, RevisionView } from './models-api';
+import type { MemberFacets, MemberProfile, MemberRecord, MemberRow, RevisionView, SectionDimensions } from './models-api';
 
 export function revision(overrides: Partial<RevisionView> = {}): RevisionView {
   return {
@@ -122,37 +122,22 @@ export function memberRecord(): MemberRecord {
     length_mm: row.length_mm,
     axis: { start_mm: [0, 0, 0], end_mm: [1000, 0, 0] },
     status: 'ok',
-    profile: {
-      name: 'IPE200',
-      family: 'I', source: 'ifc-profile',
-      ifcType: 'IfcIShapeProfileDef',
-      fabrication: 'rolled',
-      depth_mm: 200,
-      webThickness_mm: 5.6,
-      topFlange: { width_mm: 100, thickness_mm: 8.5, filletRadius_mm: 12 },
-      bottomFlange: { width_mm: 100, thickness_mm: 8.5, filletRadius_mm: 12 },
-    },
+    profile: { ...rolledI(200, 5.6, 100, 8.5, 12), name: 'IPE200', source: 'ifc-profile', ifcType: 'IfcIShapeProfileDef', fabrication: 'rolled' },
     section: null,
     flags: [],
   };
 }
 
+/** A doubly symmetric I-section with equal flanges. */
+function rolledI(depth_mm: number, webThickness_mm: number, width_mm: number, thickness_mm: number, filletRadius_mm: number): SectionDimensions {
+  const flange = { width_mm, thickness_mm, filletRadius_mm };
+  return { family: 'I', depth_mm, webThickness_mm, topFlange: flange, bottomFlange: flange };
+}
+
 /** A column tapering from an IPE 400 section at its foot to an IPE 300 section at its head: the smaller end governs. */
 export function taperedRecord(): MemberRecord {
-  const ipe400 = {
-    family: 'I' as const,
-    depth_mm: 400,
-    webThickness_mm: 8.6,
-    topFlange: { width_mm: 180, thickness_mm: 13.5, filletRadius_mm: 21 },
-    bottomFlange: { width_mm: 180, thickness_mm: 13.5, filletRadius_mm: 21 },
-  };
-  const ipe300 = {
-    family: 'I' as const,
-    depth_mm: 300,
-    webThickness_mm: 7.1,
-    topFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
-    bottomFlange: { width_mm: 150, thickness_mm: 10.7, filletRadius_mm: 15 },
-  };
+  const ipe400 = rolledI(400, 8.6, 180, 13.5, 21);
+  const ipe300 = rolledI(300, 7.1, 150, 10.7, 15);
   return {
     ...memberRecord(),
     globalId: '0K7w7JbDL1Fxw8$U8zB1Ta',
@@ -176,47 +161,39 @@ export function taperedRecord(): MemberRecord {
   };
 }
 
+/** The whole record of a row above that is listed with its dimensions only. */
+function listedRecord(row: MemberRow, predefinedType: string, profile: MemberProfile): MemberRecord {
+  const { globalId, ifcClass, name, tag } = row;
+  return { ...memberRecord(), globalId, ifcClass, name, tag, predefinedType, status: 'not-applicable', reason: row.reason!, profile, section: null, flags: [] };
+}
+
 /** The channel's whole record, with the sloped flanges and radii its outline was measured with. */
 export function channelRecord(): MemberRecord {
-  return {
-    ...memberRecord(),
-    globalId: CHANNEL_ROW.globalId,
-    ifcClass: CHANNEL_ROW.ifcClass,
-    name: CHANNEL_ROW.name,
-    tag: CHANNEL_ROW.tag,
-    predefinedType: 'PURLIN',
-    status: 'not-applicable',
-    reason: CHANNEL_ROW.reason!,
-    profile: {
-      family: 'channel',
-      name: 'UPN 200',
-      source: 'outline',
-      ifcType: 'IfcArbitraryClosedProfileDef',
-      fabrication: 'rolled',
-      depth_mm: 200,
-      width_mm: 75,
-      webThickness_mm: 8.5,
-      flangeThickness_mm: 11.5,
-      rootRadius_mm: 11.5,
-      edgeRadius_mm: 6,
-      slope_rad: Math.atan(0.08),
-    },
-    flags: [],
-  };
+  return listedRecord(CHANNEL_ROW, 'PURLIN', {
+    family: 'channel',
+    name: 'UPN 200',
+    source: 'outline',
+    ifcType: 'IfcArbitraryClosedProfileDef',
+    fabrication: 'rolled',
+    depth_mm: 200,
+    width_mm: 75,
+    webThickness_mm: 8.5,
+    flangeThickness_mm: 11.5,
+    rootRadius_mm: 11.5,
+    edgeRadius_mm: 6,
+    slope_rad: Math.atan(0.08),
+  });
 }
 
 /** The tube's whole record. */
 export function tubeRecord(): MemberRecord {
-  return {
-    ...memberRecord(),
-    globalId: TUBE_ROW.globalId,
-    ifcClass: TUBE_ROW.ifcClass,
-    name: TUBE_ROW.name,
-    tag: TUBE_ROW.tag,
-    predefinedType: 'BRACE',
-    status: 'not-applicable',
-    reason: TUBE_ROW.reason!,
-    profile: { family: 'tube', name: 'CHS 168.3x8', source: 'ifc-profile', ifcType: 'IfcCircleHollowProfileDef', fabrication: 'rolled', diameter_mm: 168.3, wallThickness_mm: 8 },
-    flags: [],
-  };
+  return listedRecord(TUBE_ROW, 'BRACE', {
+    family: 'tube',
+    name: 'CHS 168.3x8',
+    source: 'ifc-profile',
+    ifcType: 'IfcCircleHollowProfileDef',
+    fabrication: 'rolled',
+    diameter_mm: 168.3,
+    wallThickness_mm: 8,
+  });
 }
