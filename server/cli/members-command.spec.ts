@@ -41,6 +41,22 @@ describe('taulens members', () => {
     expect(run.stderr).toBe('');
   });
 
+  it('says for every member of a model of real-export patterns which family its section is and how it was found', () => {
+    const realExports = path.join(dir, 'real-exports.ifc');
+    writeFrameFile(realExports, { members: 120, schema: 'IFC4', unit: 'mm', patterns: 'real-exports' });
+    const run = taulens('members', realExports, '--json');
+    expect(run.status).toBe(0);
+    const members: { status: string; reason?: string; profile: { family: string; source: string } | null }[] = JSON.parse(run.stdout).members;
+    for (const member of members) {
+      if (member.profile) expect(member.profile).toEqual(expect.objectContaining({ family: expect.any(String), source: expect.any(String) }));
+      else expect(member.reason).toEqual(expect.any(String));
+    }
+    const sources = new Set(members.map((m) => m.profile?.source));
+    const families = new Set(members.map((m) => m.profile?.family));
+    for (const source of ['ifc-profile', 'outline', 'body-cut']) expect(sources).toContain(source);
+    for (const family of ['I', 'channel', 'tee', 'angle', 'box', 'tube', 'plate', 'other']) expect(families).toContain(family);
+  });
+
   it('prints a table with the reasons and the cautions without --json', () => {
     const run = taulens('members', model);
     expect(run.status).toBe(0);
