@@ -24,6 +24,7 @@ export const FLAG_LABELS: Readonly<Record<RunFlag, string>> = {
   'name-and-geometry-differ': 'name and geometry differ',
   'section-unrecognised': 'section not recognised',
   'geometry-unread': 'body not measured',
+  'zero-length': 'no length',
   'no-results': 'no results',
   'fabrication-overridden': 'fabrication set by run',
   'resistance-factor-overridden': 'factor overridden',
