@@ -4,7 +4,7 @@
  */
 import type { Fabrication } from '../engine/section';
 import { flangeThickness_mm, overallDepth_mm, overallWidth_mm, type SectionFamily, webThickness_mm } from '../engine/section-family';
-import type { MemberFlag, MemberProfile, MemberRecord, MemberStatus } from '../ifc/model-read-result';
+import type { MemberFlag, MemberProfile, MemberRecord, MemberStatus, ProfileSource } from '../ifc/model-read-result';
 
 export const MEMBER_STATUSES: readonly MemberStatus[] = ['ok', 'not-applicable', 'flagged'];
 
@@ -15,6 +15,30 @@ export interface MemberLabels {
   members: MemberLabelRow[];
 }
 export type MemberLabelRow = [globalId: string, tag: string | null, profileName: string | null, storey: string | null];
+
+/** `GET …/members`: one page of the sorted, filtered table. */
+export interface MemberPage {
+  total: number;
+  members: MemberRow[];
+}
+
+/** Members that will not be checked, counted by reason. */
+export interface SkippedReason {
+  reason: string;
+  count: number;
+}
+
+/** `GET …/members/facets`: the values the table's filters offer, and the skipped members counted by reason. */
+export interface MemberFacets {
+  storeys: string[];
+  profiles: string[];
+  /** Section families present, in SECTION_FAMILIES order. */
+  families: SectionFamily[];
+  /** How the sections were found, in PROFILE_SOURCES order. */
+  sources: ProfileSource[];
+  /** Most frequent first. */
+  skipped: SkippedReason[];
+}
 
 export interface MemberRow {
   globalId: string;

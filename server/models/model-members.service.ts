@@ -1,9 +1,9 @@
 import type { DataSource, SelectQueryBuilder } from 'typeorm';
 import { NotFoundError, ValidationError } from '../http/errors';
-import { SECTION_FAMILIES, type SectionFamily } from '../engine/section-family';
-import { type MemberRecord, PROFILE_SOURCES, type ProfileSource } from '../ifc/model-read-result';
+import { SECTION_FAMILIES } from '../engine/section-family';
+import { type MemberRecord, PROFILE_SOURCES } from '../ifc/model-read-result';
 import type { MemberListQuery } from './member-list-query';
-import { MEMBER_ROW_COLUMNS, type MemberLabels, type MemberRow } from './member-row';
+import { MEMBER_ROW_COLUMNS, type MemberFacets, type MemberLabels, type MemberPage, type MemberRow } from './member-row';
 import { ModelMember } from './model-member.entity';
 import { ModelMemberRecord } from './model-member-record.entity';
 import { loadMemberRecords, toRevisionView } from './model-queries';
@@ -11,22 +11,6 @@ import { ModelRevision } from './model-revision.entity';
 import { type RevisionComparison, compareRevisions } from './revision-compare';
 import { revisionNotFound, revisionNotReady } from './revision-errors';
 import type { RevisionView } from './revision-view';
-
-export interface MemberPage {
-  total: number;
-  members: MemberRow[];
-}
-
-export interface MemberFacets {
-  storeys: string[];
-  profiles: string[];
-  /** Section families present, in SECTION_FAMILIES order. */
-  families: SectionFamily[];
-  /** How the sections were found, in PROFILE_SOURCES order. */
-  sources: ProfileSource[];
-  /** Members that will not be checked, counted by reason, most frequent first. */
-  skipped: { reason: string; count: number }[];
-}
 
 export interface ComparisonView extends RevisionComparison {
   from: RevisionView;

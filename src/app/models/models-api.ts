@@ -3,7 +3,7 @@ import { inject, Injectable } from '@angular/core';
 import { filter, map, Observable } from 'rxjs';
 import type { SectionDimensions, SectionFamily } from '../../../server/engine/section-family';
 import type { MemberFlag, MemberProfile, MemberRecord, MemberStatus, ProfileSource, ProfileStation } from '../../../server/ifc/model-read-result';
-import type { MemberLabelRow, MemberLabels, MemberRow } from '../../../server/models/member-row';
+import type { MemberFacets, MemberLabelRow, MemberLabels, MemberPage, MemberRow, SkippedReason } from '../../../server/models/member-row';
 import type { ChangedField, ChangedMember, FieldChange, RevisionComparison } from '../../../server/models/revision-compare';
 import type { RevisionCounts, RevisionStatus, RevisionView } from '../../../server/models/revision-view';
 
@@ -12,12 +12,14 @@ export type {
   ChangedField,
   ChangedMember,
   FieldChange,
+  MemberFacets,
   MemberFlag,
   MemberLabelRow,
   MemberLabels,
   MemberProfile,
   MemberRecord,
   MemberRow,
+  MemberPage,
   MemberStatus,
   ProfileSource,
   ProfileStation,
@@ -26,29 +28,8 @@ export type {
   RevisionView,
   SectionDimensions,
   SectionFamily,
+  SkippedReason,
 };
-
-export interface MemberPage {
-  total: number;
-  members: MemberRow[];
-}
-
-/** `GET …/members/facets`; the server's MemberFacets sits in its service module, beside entities the client cannot import. */
-export interface MemberFacets {
-  storeys: string[];
-  profiles: string[];
-  /** Families present, in SECTION_FAMILIES order. */
-  families: SectionFamily[];
-  /** How the sections were found, in PROFILE_SOURCES order. */
-  sources: ProfileSource[];
-  /** Members that will not be checked, counted by reason, most frequent first. */
-  skipped: SkippedReason[];
-}
-
-export interface SkippedReason {
-  reason: string;
-  count: number;
-}
 
 export interface Comparison extends RevisionComparison {
   from: RevisionView;
