@@ -1,6 +1,8 @@
 /**
  * Australian and New Zealand cold-formed hollow sections (AS/NZS 1163): SHS and RHS with the makers' corner radii,
- * CHS. Sizes are named in the makers' style, '100x100x6.0 SHS', '100x50x4.0 RHS', '168.3x4.8 CHS'.
+ * CHS. Sizes are named in the makers' style, '100x100x6.0 SHS', '100x50x4.0 RHS', '168.3x4.8 CHS': size first, family
+ * last, wall in one decimal. Exports write it '100x6.0SHS' too; written so, a size that EN tables also list (with other
+ * corners) is this table's.
  */
 import type { CatalogueEntry, CatalogueSource } from './catalogue-section';
 import { asnzs1163Corners, hollowBox, tube } from './hollow-corners';
@@ -13,6 +15,7 @@ export const AU_HOLLOW_SOURCE: CatalogueSource = {
     'from the makers\' catalogues, one from the design capacity tables); only sizes found in both lists are kept. Corner radii by the makers\' rule (hollow-corners.ts, from ' +
     'memory), confirmed by tabulated masses in the spec. Verify before relying on it.',
   fromMemory: true,
+  namingForm: 'as-nzs',
 };
 
 const fmt = (t: number): string => t.toFixed(1);

@@ -52,10 +52,39 @@ describe('findCatalogueEntry', () => {
     expect(findCatalogueEntry(text)).toBeNull();
   });
 
-  it.each(['SHS 100x100x6', '100x6.0SHS', '100x100x5SHS'])('finds nothing for %s, which names sections of different standards', (text) => {
+  it.each(['SHS 100x100x6', 'SHS 100x100x6.0', '100x6SHS', '100x100x5SHS', 'CHS 139.7x5'])('finds nothing for %s, which names sections of different standards', (text) => {
     // 100x100x6.0: AS/NZS 1163 corners 2.5t (15 mm) against EN 10219 2t (12 mm); 100x100x5.0 is also an EN 10210 size
-    // with 1.5t corners. Guessing would pick a section whose area differs by a few per cent.
+    // with 1.5t corners; 139.7x5.0 CHS is made cold-formed (AS/NZS 1163) and hot-finished (EN 10210). Guessing would
+    // pick a section whose area or making differs. Written series first, or without the one-decimal wall, the name is
+    // no single region's form.
     expect(findCatalogueEntry(text)).toBeNull();
+  });
+
+  it.each([
+    // The AS/NZS makers' form: size first, family last, wall in one decimal (common practice, no source).
+    ['100x6.0SHS', '100x100x6.0 SHS', 'box'],
+    ['Steel - 100x6.0SHS', '100x100x6.0 SHS', 'box'],
+    ['100x100x6.0SHS', '100x100x6.0 SHS', 'box'],
+    ['100x5.0SHS', '100x100x5.0 SHS', 'box'],
+    ['100x50x4.0RHS', '100x50x4.0 RHS', 'box'],
+    ['168.3x7.1CHS', '168.3x7.1 CHS', 'tube'],
+    ['139.7x5.0CHS', '139.7x5.0 CHS', 'tube'],
+  ])('finds %s, written the AS/NZS way, in the AS/NZS table (%s) although EN tables list the size too', (text, name, family) => {
+    expect(findCatalogueEntry(text)).toMatchObject({ entry: { name, family, sourceId: 'asnzs-1163' }, origin: 'catalogue' });
+  });
+
+  it('lets the written form choose only among the tables that name the size', () => {
+    // SHS 100x100x6.3 is listed by EN 10210 only: written the AS/NZS way it still names that one section (the form
+    // only chooses among tables that list the size), and a size no table lists finds nothing, never a neighbour.
+    expect(findCatalogueEntry('100x6.3SHS')).toMatchObject({ entry: { name: 'SHS 100x100x6.3 EN 10210' } });
+    expect(findCatalogueEntry('100x6.1SHS')).toBeNull();
+  });
+
+  it('lets a project catalogue entry answer an AS/NZS-form name before any built-in table', () => {
+    const project: CatalogueSection[] = [
+      { name: '100x100x6.0 SHS', series: 'BOX', depth_mm: 100, width_mm: 100, webThickness_mm: 6, flangeThickness_mm: 6, rootRadius_mm: 0, sourceId: 'project' },
+    ];
+    expect(findCatalogueEntry('100x6.0SHS', project)).toMatchObject({ origin: 'project-catalogue' });
   });
 
   it('names the part of the text that was read', () => {

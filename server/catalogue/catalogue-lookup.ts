@@ -2,13 +2,14 @@
  * Sections of every family by the text an exporter wrote: a profile name, an ObjectType, an element or type name or a
  * property value ('Beam:IPE270:341211', 'HEA360-S355', 'Steel - 310UC96.8'). The project catalogue wins over the
  * built-in tables, and the hit says which one it came from. A designation that names two different sections
- * (the same size in two tables with different corners) finds nothing rather than a guess.
+ * (the same size in two tables with different corners) finds nothing rather than a guess, unless it is written in the
+ * naming form of exactly one of those tables ('100x6.0SHS' is the AS/NZS form; 'SHS 100x100x6' is no one's).
  */
 import { AU_PFC_ENTRIES } from './au-channels';
 import { AU_HOLLOW_ENTRIES } from './au-hollow';
-import { BUILT_IN_SECTIONS, entryOfSection, sectionKey } from './catalogue';
+import { BUILT_IN_SECTIONS, CATALOGUE_SOURCES, entryOfSection, sectionKey } from './catalogue';
 import type { CatalogueEntry, CatalogueHit, CatalogueOrigin, CatalogueSection } from './catalogue-section';
-import { designationIn, designationKey, keysOf } from './designation';
+import { type DesignationMatch, designationIn, designationKey, keysOf } from './designation';
 import { EN_CHANNEL_ENTRIES } from './en-channels';
 import { EN_HOLLOW_ENTRIES } from './en-hollow';
 import { UK_PFC_ENTRIES } from './uk-channels';
@@ -26,13 +27,11 @@ export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
   ...US_HSS_ENTRIES,
 ];
 
-/** A key naming sections whose dimensions differ: looked up, it finds nothing. */
-const AMBIGUOUS = 'ambiguous';
-
 interface EntryIndex {
   /** Whole names, compared as sectionKey does ('HE 200 A' = 'HEA200'), for project names that are not designations. */
   byName: Map<string, CatalogueEntry>;
-  byDesignation: Map<string, CatalogueEntry | typeof AMBIGUOUS>;
+  /** The different sections each designation key names, in table order (one for most keys). */
+  byDesignation: Map<string, CatalogueEntry[]>;
 }
 
 /** Two tables name the same section only when shape and making agree (a cold-formed and a hot-finished tube differ). */
@@ -48,7 +47,8 @@ function indexOf(entries: readonly CatalogueEntry[]): EntryIndex {
     if (!key) continue;
     for (const k of keysOf(key)) {
       const there = index.byDesignation.get(k);
-      index.byDesignation.set(k, there === undefined || (there !== AMBIGUOUS && sameSection(there, entry)) ? entry : AMBIGUOUS);
+      if (!there) index.byDesignation.set(k, [entry]);
+      else if (!there.some((e) => sameSection(e, entry))) there.push(entry);
     }
   }
   return index;
@@ -76,9 +76,19 @@ function projectLookup(project: readonly CatalogueSection[]): ProjectLookup {
   return lookup;
 }
 
-function hit(entry: CatalogueEntry | typeof AMBIGUOUS | undefined, origin: CatalogueOrigin, designation: string): CatalogueHit | null | undefined {
-  if (entry === undefined) return undefined;
-  return entry === AMBIGUOUS ? null : { entry, origin, designation };
+function hit(entry: CatalogueEntry | null | undefined, origin: CatalogueOrigin, designation: string): CatalogueHit | null | undefined {
+  return entry ? { entry, origin, designation } : entry;
+}
+
+/**
+ * The one section a designation names; where it names several, the one whose table's naming form the text is written
+ * in, if exactly one; else null. Undefined when the key names nothing.
+ */
+function named(sections: readonly CatalogueEntry[] | undefined, found: DesignationMatch): CatalogueEntry | null | undefined {
+  if (!sections) return undefined;
+  if (sections.length === 1) return sections[0];
+  const inForm = found.form ? sections.filter((e) => CATALOGUE_SOURCES[e.sourceId]?.namingForm === found.form) : [];
+  return inForm.length === 1 ? inForm[0] : null;
 }
 
 function lookUp(text: string, project: EntryIndex | null): CatalogueHit | null {
@@ -89,8 +99,8 @@ function lookUp(text: string, project: EntryIndex | null): CatalogueHit | null {
   if (byName !== undefined) return byName;
   const found = designationIn(trimmed);
   if (!found) return null;
-  const fromProject = project ? hit(project.byDesignation.get(found.key), 'project-catalogue', found.text) : undefined;
-  return fromProject !== undefined ? fromProject : (hit(BUILT_IN_INDEX.byDesignation.get(found.key), 'catalogue', found.text) ?? null);
+  const fromProject = project ? hit(named(project.byDesignation.get(found.key), found), 'project-catalogue', found.text) : undefined;
+  return fromProject !== undefined ? fromProject : (hit(named(BUILT_IN_INDEX.byDesignation.get(found.key), found), 'catalogue', found.text) ?? null);
 }
 
 /**

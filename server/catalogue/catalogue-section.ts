@@ -1,5 +1,6 @@
 import type { Fabrication } from '../engine/section';
 import type { SectionDimensions, SectionFamily } from '../engine/section-family';
+import type { DesignationForm } from './designation';
 
 /** One rolled or welded I-section of a catalogue, in millimetres, with the table it came from. */
 export interface CatalogueSection {
@@ -30,6 +31,11 @@ export interface CatalogueSource {
   /** How the values got here, honestly: transcribed from a named table, or written from memory. */
   readonly provenance: string;
   readonly fromMemory: boolean;
+  /**
+   * The regional naming form this table's names are written in, when no other region writes names so: a designation
+   * written in that form names this table's section where other tables have a different one of the same size.
+   */
+  readonly namingForm?: DesignationForm;
 }
 
 /** How the section was made, which sets residual stresses, corner radii and, for I-sections, the fillets. */

@@ -61,6 +61,23 @@ describe('designationIn', () => {
     expect(canonicalNumber('0')).toBeNull();
   });
 
+  it.each([
+    // Size first, family last, wall in one decimal: the AS/NZS makers' form (common practice, no source).
+    ['100x6.0SHS', 'as-nzs'],
+    ['100x50x4.0RHS', 'as-nzs'],
+    ['168.3x7.1CHS', 'as-nzs'],
+    ['100x100x6.0 SHS', 'as-nzs'],
+    // Written so in every region, or without the one-decimal wall: no form kept.
+    ['SHS 100x100x6', undefined],
+    ['SHS 100x100x6.0', undefined],
+    ['CHS 168.3x7.1', undefined],
+    ['100x100x6SHS', undefined],
+    ['100x6.05SHS', undefined],
+    ['310UC96.8', undefined],
+  ])('keeps the naming form of %s (%s)', (text, form) => {
+    expect(designationIn(text)?.form).toBe(form);
+  });
+
   it('reads a whole name as a designation only when the name is nothing else', () => {
     expect(designationKey('IPE 270')).toBe('IPE|270');
     expect(designationKey('Beam:IPE270')).toBeNull();

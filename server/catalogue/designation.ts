@@ -3,7 +3,14 @@
  * 'HE 360 A', 'HEA360' and 'HE360A' all give 'HEA|360'; '310UC96.8' and 'UC 310x96.8' give 'AU-UC|310|96.8';
  * 'HSS6x6x3/8' and 'HSS6X6X.375' give 'HSS|6|6|0.375'. Numbers are compared as numbers ('6.0' = '6'), never rounded
  * or abbreviated, so '310UC97' can never become '310UC96.8'.
+ *
+ * The parser also keeps the naming form it read when that form belongs to one region only: '100x6.0SHS',
+ * '100x50x4.0RHS' and '168.3x7.1CHS' (size first, family letters last, wall with one decimal) are written the
+ * Australian and New Zealand way, while 'SHS 100x100x6' is written alike everywhere and carries no form.
  */
+
+/** A regional way of writing designations: 'as-nzs' is the AS/NZS makers' size-first hollow-section form. */
+export type DesignationForm = 'as-nzs';
 
 export interface DesignationMatch {
   /** Canonical key: series tag and the numbers of the designation, '|'-separated. */
@@ -12,6 +19,8 @@ export interface DesignationMatch {
   readonly text: string;
   /** Where it starts in the text. */
   readonly index: number;
+  /** The regional naming form the text is written in, when only one region writes it so. */
+  readonly form?: DesignationForm;
 }
 
 // Separators between the parts of a designation, and the 'x' between dimensions ('×' and '*' are read as 'X').
@@ -27,11 +36,15 @@ const END = '(?![A-Z0-9]|\\.\\d)';
 interface Grammar {
   readonly pattern: RegExp;
   readonly key: (groups: readonly string[]) => string | null;
+  readonly form?: (groups: readonly string[]) => DesignationForm | undefined;
 }
 
-function grammar(source: string, key: Grammar['key']): Grammar {
-  return { pattern: new RegExp(`${START}${source}${END}`, 'g'), key };
+function grammar(source: string, key: Grammar['key'], form?: Grammar['form']): Grammar {
+  return { pattern: new RegExp(`${START}${source}${END}`, 'g'), key, form };
 }
+
+/** Size-first hollow sections with the wall in one decimal ('6.0', '7.1') are the AS/NZS makers' form. */
+const asNzsWall = (wall: string): DesignationForm | undefined => (/^\d+\.\d$/.test(wall) ? 'as-nzs' : undefined);
 
 /** '6.0' → '6', '.375' → '0.375', '3/8' → '0.375', '3-1/2' → '3.5'; null for anything that is not a positive size. */
 export function canonicalNumber(text: string): string | null {
@@ -69,12 +82,13 @@ const GRAMMARS: readonly Grammar[] = [
   grammar(`${NUM}${SEP}PFC(?:${SEP}${NUM})?`, ([depth, mass]) => keyOf('AU-PFC', mass ? [depth, mass] : [depth])),
   grammar(`PFC${SEP}${NUM}(?:${BY}${NUM})?`, ([depth, mass]) => keyOf('AU-PFC', mass ? [depth, mass] : [depth])),
   // Metric hollow sections: 'SHS 100x100x6', '100x100x6SHS', '100x6.0SHS' (square: one side written), 'CHS 168.3x5'.
+  // Size first with a one-decimal wall is the AS/NZS form.
   grammar(`(SHS|RHS)${SEP}${NUM}${BY}${NUM}${BY}${NUM}`, ([, d, b, t]) => keyOf('RHS', [d, b, t])),
-  grammar(`${NUM}${BY}${NUM}${BY}${NUM}${SEP}(SHS|RHS)`, ([d, b, t]) => keyOf('RHS', [d, b, t])),
+  grammar(`${NUM}${BY}${NUM}${BY}${NUM}${SEP}(SHS|RHS)`, ([d, b, t]) => keyOf('RHS', [d, b, t]), ([, , t]) => asNzsWall(t)),
   grammar(`SHS${SEP}${NUM}${BY}${NUM}`, ([b, t]) => keyOf('RHS', [b, b, t])),
-  grammar(`${NUM}${BY}${NUM}${SEP}SHS`, ([b, t]) => keyOf('RHS', [b, b, t])),
+  grammar(`${NUM}${BY}${NUM}${SEP}SHS`, ([b, t]) => keyOf('RHS', [b, b, t]), ([, t]) => asNzsWall(t)),
   grammar(`CHS${SEP}${NUM}${BY}${NUM}`, ([d, t]) => keyOf('CHS', [d, t])),
-  grammar(`${NUM}${BY}${NUM}${SEP}CHS`, ([d, t]) => keyOf('CHS', [d, t])),
+  grammar(`${NUM}${BY}${NUM}${SEP}CHS`, ([d, t]) => keyOf('CHS', [d, t]), ([, t]) => asNzsWall(t)),
   // AISC: HSS rectangular (three sizes) before round (two), then the rolled shapes; MC and HP before M, C and H.
   grammar(`HSS${SEP}${INCH}${BY}${INCH}${BY}${INCH}`, ([d, b, t]) => keyOf('HSS', [d, b, t])),
   grammar(`HSS${SEP}${INCH}${BY}${INCH}`, ([d, t]) => keyOf('HSSR', [d, t])),
@@ -92,12 +106,14 @@ function normalised(text: string): string {
 export function designationIn(text: string): DesignationMatch | null {
   const upper = normalised(text);
   let best: DesignationMatch | null = null;
-  for (const { pattern, key } of GRAMMARS) {
+  for (const { pattern, key, form } of GRAMMARS) {
     pattern.lastIndex = 0;
     for (let m = pattern.exec(upper); m; m = pattern.exec(upper)) {
-      const k = key(m.slice(1));
+      const groups = m.slice(1);
+      const k = key(groups);
       if (k && (!best || m.index < best.index || (m.index === best.index && m[0].length > best.text.length))) {
-        best = { key: k, text: String(text).slice(m.index, m.index + m[0].length), index: m.index };
+        const written = form?.(groups);
+        best = { key: k, text: String(text).slice(m.index, m.index + m[0].length), index: m.index, ...(written ? { form: written } : {}) };
       }
       if (m[0].length === 0) pattern.lastIndex++;
     }
