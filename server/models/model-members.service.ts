@@ -1,6 +1,6 @@
 import type { DataSource, SelectQueryBuilder } from 'typeorm';
 import { NotFoundError, ValidationError } from '../http/errors';
-import { SECTION_FAMILIES } from '../engine/section-family';
+import { SECTION_FAMILIES, SECTION_FAMILY_LABELS, type SectionFamily } from '../engine/section-family';
 import { type MemberRecord, PROFILE_SOURCES } from '../ifc/model-read-result';
 import type { MemberListQuery } from './member-list-query';
 import { MEMBER_ROW_COLUMNS, type MemberFacets, type MemberLabels, type MemberPage, type MemberRow } from './member-row';
@@ -11,6 +11,10 @@ import { ModelRevision } from './model-revision.entity';
 import { type RevisionComparison, compareRevisions } from './revision-compare';
 import { revisionNotFound, revisionNotReady } from './revision-errors';
 import type { RevisionView } from './revision-view';
+
+function uncheckedFamilyReason(family: SectionFamily | null): string {
+  return family ? `Section family '${SECTION_FAMILY_LABELS[family]}': listed with its dimensions; its web check is not available yet.` : 'No reason recorded.';
+}
 
 export interface ComparisonView extends RevisionComparison {
   from: RevisionView;
@@ -62,16 +66,17 @@ export class ModelMembersService {
         .getRawMany<{ value: string }>();
       return rows.map((r) => r.value).sort(naturalOrder);
     };
+    // Members of a family without a check yet count by family; the rest by their reason.
     const skippedRows = this.members()
       .createQueryBuilder('m')
-      .select('m.reason', 'reason')
+      .select('m.profileFamily', 'family')
+      .addSelect("CASE WHEN m.status = 'not-applicable' AND m.profileFamily IS NOT NULL THEN NULL ELSE m.reason END", 'reason')
       .addSelect('COUNT(*)', 'count')
       .where('m.revisionId = :revisionId', { revisionId })
       .andWhere("m.status != 'ok'")
-      .groupBy('m.reason')
-      .orderBy('count', 'DESC')
-      .addOrderBy('m.reason', 'ASC')
-      .getRawMany<{ reason: string | null; count: number | string }>();
+      .groupBy('family')
+      .addGroupBy('reason')
+      .getRawMany<{ family: SectionFamily | null; reason: string | null; count: number | string }>();
     const [storeys, profiles, families, sources, skipped] = await Promise.all([
       distinct('storey'),
       distinct('profileName'),
@@ -84,7 +89,9 @@ export class ModelMembersService {
       profiles,
       families: SECTION_FAMILIES.filter((f) => families.includes(f)),
       sources: PROFILE_SOURCES.filter((s) => sources.includes(s)),
-      skipped: skipped.map((r) => ({ reason: r.reason ?? 'No reason recorded.', count: Number(r.count) })),
+      skipped: skipped
+        .map((r) => ({ reason: r.reason ?? uncheckedFamilyReason(r.family), count: Number(r.count) }))
+        .sort((a, b) => b.count - a.count || a.reason.localeCompare(b.reason)),
     };
   }
 

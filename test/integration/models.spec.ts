@@ -376,6 +376,17 @@ describe('models', () => {
         const facets = (await coordinator.get(`${membersUrl()}/facets`).expect(200)).body;
         expect(facets.storeys).toEqual([...new Set(everyone.map((m) => m.storey))].filter(Boolean).sort());
         expect(facets.profiles).toContain('IPE400');
+        expect(facets.families).toEqual(['I', 'angle', 'tube']);
+        expect(facets.sources).toEqual(['ifc-profile', 'outline']);
+        // Skipped members counted by family (no check yet) or by reason, most frequent first, every one counted once.
+        expect(facets.skipped.map((s: { reason: string }) => s.reason).sort()).toEqual([
+          "Section family 'angle': listed with its dimensions; its web check is not available yet.",
+          "Section family 'circular hollow section': listed with its dimensions; its web check is not available yet.",
+        ]);
+        expect(facets.skipped.reduce((sum: number, s: { count: number }) => sum + s.count, 0)).toBe(skipped.length);
+        const tubes = await coordinator.get(`${membersUrl()}?family=tube`).expect(200);
+        expect(tubes.body.total).toBe(count((m) => m.profileFamily === 'tube'));
+        await coordinator.get(`${membersUrl()}?family=hexagon`).expect(400);
         const storey = facets.storeys[1] as string;
         const onStorey = await coordinator.get(`${membersUrl()}?storey=${encodeURIComponent(storey)}&profile=IPE400`).expect(200);
         expect(onStorey.body.total).toBe(count((m) => m.storey === storey && m.profileName === 'IPE400'));
