@@ -112,6 +112,8 @@ export interface ReceiveOptions {
 export function receiveFile(options: ReceiveOptions): RequestHandler {
   const upload = multer({
     storage: new HashingDiskStorage(options.dir),
+    // Browsers send file names as raw UTF-8 without a charset; busboy would read them as latin1 ('TrÃ¤ger.ifc').
+    defParamCharset: 'utf8',
     limits: { fileSize: options.maxBytes, files: 1, fields: 10, fieldSize: 8192 },
     fileFilter: (_req, file, accept) => {
       const extension = path.extname(file.originalname).toLowerCase();
