@@ -13,7 +13,7 @@ import { type DesignationMatch, designationIn, designationKey, keysOf } from './
 import { EN_CHANNEL_ENTRIES } from './en-channels';
 import { EN_HOLLOW_ENTRIES } from './en-hollow';
 import { UK_PFC_ENTRIES } from './uk-channels';
-import { US_HSS_ENTRIES } from './us-hollow';
+import { US_HSS_ENTRIES, US_ROUND_HSS_ENTRIES } from './us-hollow';
 import { US_CHANNEL_ENTRIES } from './us-shapes';
 
 export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
@@ -25,6 +25,7 @@ export const BUILT_IN_ENTRIES: readonly CatalogueEntry[] = [
   ...AU_HOLLOW_ENTRIES,
   ...EN_HOLLOW_ENTRIES,
   ...US_HSS_ENTRIES,
+  ...US_ROUND_HSS_ENTRIES,
 ];
 
 interface EntryIndex {
