@@ -1,16 +1,24 @@
 /** Findings follow finished check runs: the checks feature raises `check-run.finished`, this applies the run. */
 import type { DataSource } from 'typeorm';
 import { findRun, listRunMemberResults } from '../checks/check-results.query';
+import type { Standard } from '../engine/check';
 import type { AppContext } from '../http/app-context';
 import type { NoticeSink } from '../notifications/finding-notifier';
 import { type SyncOutcome, syncFindingsFromRun } from './finding-sync';
+
+/** The standard as a finding's description names it: a later run by another standard must say so. */
+const STANDARD_NAMES: Readonly<Record<Standard, string>> = {
+  'aisc360-22-lrfd': 'AISC 360-22 LRFD',
+  'aisc360-22-asd': 'AISC 360-22 ASD',
+  'en1993-1-1': 'EN 1993-1-1',
+};
 
 /** Applies a finished run of the project to its findings; null when the run is not there or not done. */
 export async function syncFindingsForRun(dataSource: DataSource, projectId: string, runId: string): Promise<SyncOutcome | null> {
   const run = await findRun(dataSource, projectId, runId);
   if (!run || run.status !== 'done') return null;
   const results = await listRunMemberResults(dataSource, runId);
-  return syncFindingsFromRun(dataSource, projectId, { runId, revisionNumber: run.modelRevision.number }, results);
+  return syncFindingsFromRun(dataSource, projectId, { runId, revisionNumber: run.modelRevision.number, standardLabel: STANDARD_NAMES[run.standard] }, results);
 }
 
 /**

@@ -3,7 +3,8 @@ import type { FindingStatus } from './finding-fields';
 import { type RunMemberResult, type SyncedFinding, planRunSync } from './finding-sync-plan';
 
 // The rules under test are the product's own (issue 7: one finding per member and kind, carried across runs, Ready to
-// verify when a newer revision passes); member rows are invented.
+// verify when a newer revision passes; issue 18: one living finding per member and check whatever the standard, an
+// accepted finding keeps the run it was accepted on); member rows are invented.
 const B12 = MEMBER_IDS.beamB12;
 const B14 = MEMBER_IDS.beamB14;
 
@@ -24,7 +25,7 @@ function row(globalId: string, status: RunMemberResult['status'], utilisation: n
 }
 
 function finding(status: FindingStatus, revisionNumber: number, kind: SyncedFinding['kind'] = 'web-shear-fail'): SyncedFinding {
-  return { id: 'f1', memberKey: B12, kind, status, revisionNumber, utilisation: 1.12 };
+  return { id: 'f1', memberKey: B12, kind, status, priority: kind === 'web-shear-fail' ? 'high' : 'normal', revisionNumber, utilisation: 1.12 };
 }
 
 const run = (revisionNumber: number) => ({ runId: `run-${revisionNumber}`, revisionNumber });
@@ -54,7 +55,16 @@ describe('planRunSync', () => {
   it('updates a finding that still fails rather than raising a second one', () => {
     const plan = planRunSync(run(1), [row(B12, 'fail', 1.2)], [finding('in-progress', 1)]);
     expect(plan.create).toEqual([]);
-    expect(plan.update).toEqual([{ id: 'f1', utilisation: 1.2, revisionNumber: 1, memberTag: 'B-12', memberLabel: 'B-12 · IPE 300 · Level 2' }]);
+    expect(plan.update).toEqual([
+      {
+        id: 'f1',
+        utilisation: 1.2,
+        revisionNumber: 1,
+        description: '120 % utilisation under ULS-3 (VEd 180 kN, VRd 150 kN) in the check of model revision 1.',
+        memberTag: 'B-12',
+        memberLabel: 'B-12 · IPE 300 · Level 2',
+      },
+    ]);
   });
 
   it.each<[FindingStatus, number, FindingStatus]>([
@@ -62,7 +72,6 @@ describe('planRunSync', () => {
     ['in-progress', 2, 'ready-to-verify'],
     ['resolved', 2, 'ready-to-verify'],
     ['verified', 2, 'verified'],
-    ['accepted', 2, 'accepted'],
     ['resolved', 1, 'resolved'],
   ])('a %s finding whose member passes in revision %i becomes %s', (status, revision, expected) => {
     const [update] = planRunSync(run(revision), [row(B12, 'pass', 0.7)], [finding(status, 1)]).update;
@@ -76,7 +85,6 @@ describe('planRunSync', () => {
     ['ready-to-verify', 2, 'open'],
     ['resolved', 2, 'open'],
     ['resolved', 1, 'resolved'],
-    ['accepted', 2, 'accepted'],
     ['in-progress', 2, 'in-progress'],
   ])('a %s finding whose member fails again in revision %i becomes %s', (status, revision, expected) => {
     const [update] = planRunSync(run(revision), [row(B12, 'fail', 1.3)], [finding(status, 1)]).update;
@@ -84,10 +92,54 @@ describe('planRunSync', () => {
     expect(update.revisionNumber).toBe(revision);
   });
 
-  it('does not clear a warning finding when the member now fails', () => {
-    const plan = planRunSync(run(2), [row(B12, 'fail', 1.05)], [finding('open', 1, 'web-shear-warning')]);
-    expect(plan.update).toEqual([]);
-    expect(plan.create.map((draft) => draft.kind)).toEqual(['web-shear-fail']);
+  it('turns a warning finding into a failure when the member now fails, instead of raising a second finding', () => {
+    const plan = planRunSync(run(2), [row(B12, 'fail', 1.05)], [finding('resolved', 2, 'web-shear-warning')]);
+    expect(plan.create).toEqual([]);
+    expect(plan.update).toEqual([
+      expect.objectContaining({
+        id: 'f1',
+        status: { from: 'resolved', to: 'open' },
+        escalated: { kind: 'web-shear-fail', title: 'Web shear over capacity: B-12', priority: 'high' },
+        description: '105 % utilisation under ULS-3 (VEd 157.5 kN, VRd 150 kN) in the check of model revision 2.',
+      }),
+    ]);
+  });
+
+  it('keeps one finding when a run by another standard shows the failing member only close to capacity', () => {
+    const other = { ...run(1), standardLabel: 'AISC 360-22 LRFD' };
+    const plan = planRunSync(other, [row(B12, 'warning', 0.96)], [finding('open', 1)]);
+    expect(plan.create).toEqual([]);
+    const [update] = plan.update;
+    // Same revision: the numbers follow the run, the status does not (a re-run of the same model shows no fix).
+    expect(update).toMatchObject({ id: 'f1', utilisation: 0.96, revisionNumber: 1 });
+    expect(update.status).toBeUndefined();
+    expect(update.escalated).toBeUndefined();
+    expect(update.description).toBe('96 % utilisation under ULS-3 (VEd 144 kN, VRd 150 kN) in the AISC 360-22 LRFD check of model revision 1. Within capacity in this run.');
+  });
+
+  it('names the standard of the run in a new finding', () => {
+    const [draft] = planRunSync({ ...run(3), standardLabel: 'EN 1993-1-1' }, [row(B12, 'fail', 1.5)], []).create;
+    expect(draft.description).toBe('150 % utilisation under ULS-3 (VEd 225 kN, VRd 150 kN) in the EN 1993-1-1 check of model revision 3.');
+  });
+
+  it.each<[string, RunMemberResult]>([
+    ['fails more', row(B12, 'fail', 1.4)],
+    ['passes', row(B12, 'pass', 0.6)],
+  ])('leaves an accepted failure as it was accepted when a newer revision %s', (_label, result) => {
+    expect(planRunSync(run(2), [result], [finding('accepted', 1)]).update).toEqual([]);
+  });
+
+  it('reopens an accepted warning finding as a failure when the member now fails: the lesser condition was accepted', () => {
+    const [update] = planRunSync(run(1), [row(B12, 'fail', 1.22)], [finding('accepted', 1, 'web-shear-warning')]).update;
+    expect(update.status).toEqual({ from: 'accepted', to: 'open' });
+    expect(update.escalated?.kind).toBe('web-shear-fail');
+  });
+
+  it('keeps the more severe of two findings an older version left for one member, and raises no third', () => {
+    const twins = [{ ...finding('open', 1, 'web-shear-warning'), id: 'old-warning' }, { ...finding('open', 1), id: 'old-failure' }];
+    const plan = planRunSync(run(1), [row(B12, 'fail', 1.3)], twins);
+    expect(plan.create).toEqual([]);
+    expect(plan.update.map((update) => update.id)).toEqual(['old-failure']);
   });
 
   it('leaves findings alone for runs of older revisions and for members the run did not check', () => {

@@ -1,21 +1,26 @@
 /**
  * What a finished check run does to a project's findings, as a pure plan (finding-sync.ts applies it).
  *
- * One finding per member GlobalId and kind, carried across runs and revisions:
+ * One living finding per member GlobalId and check: the web shear check (a failure, or a pass at or above the
+ * warning ratio, share one finding) and the flags to review. It is carried across runs, revisions and standards:
  * - The condition holds (the web fails; passes at or above the warning ratio; carries a flag to review) and no
  *   finding exists: a new one, Open.
- * - The condition holds and a finding exists: its run link and utilisation follow the run. A Verified or
- *   Ready-to-verify finding is reopened (it fails again); a Resolved one is reopened only when the run is of a
- *   newer revision than the one it was last seen in (a re-run of the same model cannot show a fix). Accepted
- *   findings stay accepted: the reviewer accepted the condition.
- * - The member passes for that kind in a run of a newer revision: Open, In progress and Resolved findings move to
- *   Ready to verify. A pass on the same revision (other parameters) changes numbers only.
+ * - The condition holds and a finding exists: its run link, utilisation and description follow the run. A Verified
+ *   or Ready-to-verify finding is reopened (it fails again); a Resolved one is reopened only when the run is of a
+ *   newer revision than the one it was last seen in (a re-run of the same model cannot show a fix).
+ * - A web close to capacity that now fails is the same finding grown worse: it becomes a failure (title, priority)
+ *   and is reopened from any closed or resolved status, accepted included: what was accepted was the lesser
+ *   condition. A failure that drops to a warning stays a failure finding whose condition has cleared.
+ * - Accepted findings otherwise keep the run they were accepted on (numbers, description), whatever later runs show,
+ *   until a person reopens them: the reviewer accepted that condition, and the record must not drift from it.
+ * - The member is clear of the condition in a run of a newer revision: Open, In progress and Resolved findings move
+ *   to Ready to verify. A pass on the same revision (other parameters or standard) changes numbers only.
  * - Members the run did not check (no results, not an I-section, gone from the model) leave their findings alone,
  *   and so does any run of a revision older than the one a finding was last seen in.
  * Changes made here are recorded in the history as made by the system.
  */
 import { percentRoundedUp } from '../reports/report-format';
-import type { FindingPriority, FindingStatus, GeneratedKind } from './finding-fields';
+import { FINDING_PRIORITIES, type FindingPriority, type FindingStatus, type GeneratedKind } from './finding-fields';
 
 /** One member's row of a check run (server/checks/check-results.query.ts listRunMemberResults). */
 export interface RunMemberResult {
@@ -35,6 +40,8 @@ export interface RunMemberResult {
 export interface SyncRun {
   runId: string;
   revisionNumber: number;
+  /** How the run's standard is named in descriptions, e.g. "EN 1993-1-1 §6.2.6 with EN 1993-1-5 §5". */
+  standardLabel?: string;
 }
 
 /** The generated findings of the project as stored. */
@@ -43,6 +50,7 @@ export interface SyncedFinding {
   memberKey: string;
   kind: GeneratedKind;
   status: FindingStatus;
+  priority: FindingPriority;
   revisionNumber: number | null;
   utilisation: number | null;
 }
@@ -56,7 +64,16 @@ export interface SyncedFinding {
  */
 export const FLAGS_TO_REVIEW: ReadonlySet<string> = new Set(['web-proportion-limit', 'tapered', 'top-flange-assumed', 'several-profiles', 'curved']);
 
-const GENERATED_KINDS: readonly GeneratedKind[] = ['web-shear-fail', 'web-shear-warning', 'flag'];
+/** The checks a member has one living finding for; the web shear check's finding is a failure or a warning. */
+type CheckFamily = 'web-shear' | 'flag';
+const FAMILIES: readonly CheckFamily[] = ['web-shear', 'flag'];
+
+function familyOf(kind: GeneratedKind): CheckFamily {
+  return kind === 'flag' ? 'flag' : 'web-shear';
+}
+
+/** How bad each kind is within its check, so a grown condition can be told from a lesser one. */
+const SEVERITY: Readonly<Record<GeneratedKind, number>> = { 'web-shear-fail': 2, 'web-shear-warning': 1, flag: 1 };
 
 function isChecked(result: RunMemberResult): boolean {
   return result.status === 'pass' || result.status === 'warning' || result.status === 'fail';
@@ -80,6 +97,13 @@ export function conditionCleared(kind: GeneratedKind, result: RunMemberResult): 
   return isChecked(result) && flagsToReview(result).length === 0;
 }
 
+/** The kind of the check's condition the run shows for the member, or null when it shows none. */
+function kindShown(family: CheckFamily, result: RunMemberResult): GeneratedKind | null {
+  if (family === 'flag') return conditionHolds('flag', result) ? 'flag' : null;
+  if (result.status === 'fail') return 'web-shear-fail';
+  return result.status === 'warning' ? 'web-shear-warning' : null;
+}
+
 export interface FindingDraft {
   kind: GeneratedKind;
   globalId: string;
@@ -95,10 +119,13 @@ export interface FindingUpdate {
   id: string;
   utilisation: number | null;
   revisionNumber: number;
+  description: string;
   memberTag: string;
   memberLabel: string;
   /** Set when the status changes. */
   status?: { from: FindingStatus; to: FindingStatus };
+  /** Set when a warning has grown into a failure. */
+  escalated?: { kind: GeneratedKind; title: string; priority: FindingPriority };
 }
 
 export interface SyncPlan {
@@ -118,78 +145,111 @@ function kN(value: number | null): string {
   return value === null ? '—' : `${Math.round(Math.abs(value) * 10) / 10} kN`;
 }
 
-function draftFor(kind: GeneratedKind, result: RunMemberResult, run: SyncRun): FindingDraft {
-  const tag = memberTagOf(result);
+function checkOf(run: SyncRun): string {
+  return `the ${run.standardLabel ? `${run.standardLabel} ` : ''}check of model revision ${run.revisionNumber}`;
+}
+
+const TITLES: Readonly<Record<GeneratedKind, string>> = {
+  'web-shear-fail': 'Web shear over capacity',
+  'web-shear-warning': 'Web shear close to capacity',
+  flag: 'Check flags to review',
+};
+
+const PRIORITIES: Readonly<Record<GeneratedKind, FindingPriority>> = { 'web-shear-fail': 'high', 'web-shear-warning': 'normal', flag: 'normal' };
+
+/** What the run shows for the member, in the words of a finding of this kind. */
+function descriptionFor(kind: GeneratedKind, result: RunMemberResult, run: SyncRun): string {
+  if (kind === 'flag') {
+    const flags = flagsToReview(result);
+    return flags.length > 0 ? `${checkOf(run)} flagged: ${flags.join(', ')}.` : `${checkOf(run)} flagged nothing to review.`;
+  }
   const utilisationText = result.utilisation === null ? 'Utilisation not known' : `${percentRoundedUp(result.utilisation)} % utilisation`;
   const forces = `under ${result.governingCombination ?? 'the governing combination'} (VEd ${kN(result.VEd_kN)}, VRd ${kN(result.VRd_kN)})`;
-  const revision = `model revision ${run.revisionNumber}`;
-  const texts: Record<GeneratedKind, { title: string; description: string }> = {
-    'web-shear-fail': {
-      title: `Web shear over capacity: ${tag}`,
-      description: `${utilisationText} ${forces} in the check of ${revision}.`,
-    },
-    'web-shear-warning': {
-      title: `Web shear close to capacity: ${tag}`,
-      description: `${utilisationText} ${forces} in the check of ${revision}, at or above the run's warning ratio.`,
-    },
-    flag: {
-      title: `Check flags to review: ${tag}`,
-      description: `The check of ${revision} flagged: ${flagsToReview(result).join(', ')}.`,
-    },
-  };
+  const warning = kind === 'web-shear-warning' && result.status === 'warning' ? ", at or above the run's warning ratio" : '';
+  const cleared = conditionCleared(kind, result) ? ` ${kind === 'web-shear-fail' ? 'Within capacity' : 'Below the warning ratio'} in this run.` : '';
+  return `${utilisationText} ${forces} in ${checkOf(run)}${warning}.${cleared}`;
+}
+
+function sentence(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+function draftFor(kind: GeneratedKind, result: RunMemberResult, run: SyncRun): FindingDraft {
+  const tag = memberTagOf(result);
   return {
     kind,
     globalId: result.globalId,
-    ...texts[kind],
-    priority: kind === 'web-shear-fail' ? 'high' : 'normal',
+    title: `${TITLES[kind]}: ${tag}`,
+    description: sentence(descriptionFor(kind, result, run)),
+    priority: PRIORITIES[kind],
     utilisation: result.utilisation,
     memberTag: tag,
     memberLabel: memberLabelOf(result),
   };
 }
 
-function nextStatus(finding: SyncedFinding, result: RunMemberResult, newerRevision: boolean): FindingStatus {
-  const { kind, status } = finding;
-  if (conditionHolds(kind, result)) {
+function nextStatus(finding: SyncedFinding, shown: GeneratedKind | null, newerRevision: boolean): FindingStatus {
+  const { status } = finding;
+  if (shown !== null && SEVERITY[shown] > SEVERITY[finding.kind]) {
+    return status === 'in-progress' ? status : 'open';
+  }
+  if (shown === finding.kind) {
     if (status === 'verified' || status === 'ready-to-verify') return 'open';
     if (status === 'resolved' && newerRevision) return 'open';
     return status;
   }
-  if (newerRevision && conditionCleared(kind, result) && (status === 'open' || status === 'in-progress' || status === 'resolved')) {
-    return 'ready-to-verify';
-  }
+  if (newerRevision && (status === 'open' || status === 'in-progress' || status === 'resolved')) return 'ready-to-verify';
   return status;
 }
 
 function updateFor(finding: SyncedFinding, result: RunMemberResult, run: SyncRun): FindingUpdate | null {
   const lastSeen = finding.revisionNumber ?? Number.NEGATIVE_INFINITY;
-  if (run.revisionNumber < lastSeen) return null;
-  const holds = conditionHolds(finding.kind, result);
-  if (!holds && !conditionCleared(finding.kind, result)) return null;
-  const status = nextStatus(finding, result, run.revisionNumber > lastSeen);
+  if (run.revisionNumber < lastSeen || !isChecked(result)) return null;
+  const shown = kindShown(familyOf(finding.kind), result);
+  const grown = shown !== null && SEVERITY[shown] > SEVERITY[finding.kind];
+  if (finding.status === 'accepted' && !grown) return null;
+  const kind = grown ? shown : finding.kind;
+  const holds = shown === kind;
+  const status = nextStatus(finding, shown, run.revisionNumber > lastSeen);
+  const tag = memberTagOf(result);
+  const priority = grown && FINDING_PRIORITIES.indexOf(finding.priority) < FINDING_PRIORITIES.indexOf(PRIORITIES[kind]) ? PRIORITIES[kind] : finding.priority;
   return {
     id: finding.id,
     utilisation: result.utilisation,
     // The revision in which the condition was last seen; a pass does not move it.
     revisionNumber: holds ? run.revisionNumber : (finding.revisionNumber ?? run.revisionNumber),
-    memberTag: memberTagOf(result),
+    description: sentence(descriptionFor(kind, result, run)),
+    memberTag: tag,
     memberLabel: memberLabelOf(result),
     ...(status !== finding.status && { status: { from: finding.status, to: status } }),
+    ...(grown && { escalated: { kind, title: `${TITLES[kind]}: ${tag}`, priority } }),
   };
 }
 
+/** The living finding of each member and check; of two left by older versions, the more severe one. */
+function livingFindings(existing: readonly SyncedFinding[]): Map<string, SyncedFinding> {
+  const living = new Map<string, SyncedFinding>();
+  for (const finding of existing) {
+    const key = `${familyOf(finding.kind)}\u0000${finding.memberKey}`;
+    const other = living.get(key);
+    if (!other || SEVERITY[finding.kind] > SEVERITY[other.kind]) living.set(key, finding);
+  }
+  return living;
+}
+
 export function planRunSync(run: SyncRun, results: readonly RunMemberResult[], existing: readonly SyncedFinding[]): SyncPlan {
-  const byKey = new Map(existing.map((finding) => [`${finding.kind}\u0000${finding.memberKey}`, finding]));
+  const living = livingFindings(existing);
   const plan: SyncPlan = { create: [], update: [] };
   for (const result of results) {
-    for (const kind of GENERATED_KINDS) {
-      const finding = byKey.get(`${kind}\u0000${result.globalId}`);
+    for (const family of FAMILIES) {
+      const finding = living.get(`${family}\u0000${result.globalId}`);
       if (finding) {
         const update = updateFor(finding, result, run);
         if (update) plan.update.push(update);
-      } else if (conditionHolds(kind, result)) {
-        plan.create.push(draftFor(kind, result, run));
+        continue;
       }
+      const shown = kindShown(family, result);
+      if (shown) plan.create.push(draftFor(shown, result, run));
     }
   }
   return plan;

@@ -22,10 +22,11 @@ export interface SyncOutcome {
 const GENERATED_KINDS: GeneratedKind[] = ['web-shear-fail', 'web-shear-warning', 'flag'];
 const INSERT_CHUNK = 100;
 
-async function generatedFindings(manager: EntityManager, projectId: string): Promise<SyncedFinding[]> {
+async function generatedFindings(manager: EntityManager, projectId: string): Promise<(SyncedFinding & Pick<Finding, 'description' | 'title' | 'justification'>)[]> {
   const rows = await manager.find(Finding, {
     where: { projectId, kind: In(GENERATED_KINDS) },
-    select: { id: true, memberKey: true, kind: true, status: true, revisionNumber: true, utilisation: true },
+    select: { id: true, memberKey: true, kind: true, status: true, priority: true, revisionNumber: true, utilisation: true, description: true, title: true, justification: true },
+    order: { number: 'ASC' },
   });
   return rows.map((row) => ({ ...row, kind: row.kind as GeneratedKind, memberKey: row.memberKey ?? '' }));
 }
@@ -77,21 +78,33 @@ export async function syncFindingsFromRun(
     const statusChanges: StatusChange[] = [];
     for (const update of plan.update) {
       const before = byId.get(update.id);
+      const { escalated } = update;
       await manager.update(Finding, update.id, {
         runId: run.runId,
         revisionNumber: update.revisionNumber,
         utilisation: update.utilisation,
+        description: update.description,
         memberTag: update.memberTag,
         memberLabel: update.memberLabel,
         ...(update.status && { status: update.status.to }),
+        // Reopened by a worse condition: any justification was for the lesser one.
+        ...(update.status?.from === 'accepted' && { justification: null }),
+        ...(escalated && { kind: escalated.kind, title: escalated.title, priority: escalated.priority }),
       });
+      const note = (field: string, from: string | null, to: string | null) => {
+        if (from !== to) history.push({ findingId: update.id, field, from, to });
+      };
+      if (escalated && before) {
+        note('title', before.title, escalated.title);
+        note('priority', before.priority, escalated.priority);
+      }
+      if (update.status?.from === 'accepted') note('justification', before?.justification ?? null, null);
       if (update.status) {
         statusChanges.push({ findingId: update.id, ...update.status });
         history.push({ findingId: update.id, field: 'status', ...update.status });
       }
-      const from = utilisationText(before?.utilisation ?? null);
-      const to = utilisationText(update.utilisation);
-      if (from !== to) history.push({ findingId: update.id, field: 'utilisation', from, to });
+      note('utilisation', utilisationText(before?.utilisation ?? null), utilisationText(update.utilisation));
+      note('description', before?.description || null, update.description);
     }
     await recordChanges(manager, SYSTEM_CHANGE, history);
     return { created: created.length, updated: plan.update.length, statusChanges };

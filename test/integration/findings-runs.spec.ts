@@ -1,4 +1,6 @@
 import { FindingChange } from '../../server/findings/finding-change.entity';
+import { syncFindingsForRun } from '../../server/findings/finding-run-listener';
+import { syncFindingsFromRun } from '../../server/findings/finding-sync';
 import { Finding } from '../../server/findings/finding.entity';
 import type { MemberRecord } from '../../server/ifc/model-read-result';
 import { pdfPageTexts } from '../../server/reports/pdf-page-texts';
@@ -8,7 +10,7 @@ import { type TestApp, startTestApp } from '../fixtures/test-app';
 import { type TestTeam, createTeam } from '../fixtures/test-accounts';
 import { mailsTo } from '../fixtures/test-outbox';
 import { generateFrame } from '../generator/generate-frame';
-import { findingsUrl } from './findings-fixtures';
+import { findingsUrl, runResult } from './findings-fixtures';
 import { type RunBody, checksUrl, importResults, ingestModel, membersOf, resultsCsv, runCheck } from './results-scene';
 
 /**
@@ -91,6 +93,52 @@ describe('findings from check runs', () => {
     const after = await afterSync(again.id);
     expect(after.map((finding) => finding.id)).toEqual(before.map((finding) => finding.id));
     expect((await failFinding()).runId).toBe(again.id);
+  });
+
+  it('keeps one finding when the same revision is checked by another standard, and says which standard', async () => {
+    const before = await findings();
+    const revision = firstRun.modelRevision as { id: string };
+    const resultSet = firstRun.resultSet as { id: string };
+    const aisc = await runCheck(engineer, projectId, { modelRevisionId: revision.id, resultSetId: resultSet.id, standard: 'aisc360-22-lrfd', parameters: {} });
+    const after = await afterSync(aisc.id);
+    expect(after.map((finding) => [finding.id, finding.kind, finding.memberKey])).toEqual(before.map((finding) => [finding.id, finding.kind, finding.memberKey]));
+    const failure = await failFinding();
+    expect(failure.runId).toBe(aisc.id);
+    expect(failure.description).toContain('in the AISC 360-22 LRFD check of model revision 1.');
+  });
+
+  it('keeps an accepted finding on the run it was accepted on until it is reopened', async () => {
+    const accepted = await failFinding();
+    const justification = 'Web doubler plates on the shop drawing cover the shear (invented scenario).';
+    await reviewer.post(findingsUrl(projectId, `/${accepted.id}/transitions`)).send({ to: 'accepted', justification }).expect(200);
+    const revision = firstRun.modelRevision as { id: string };
+    const resultSet = firstRun.resultSet as { id: string };
+    const later = await runCheck(engineer, projectId, { modelRevisionId: revision.id, resultSetId: resultSet.id, standard: 'en1993-1-1', parameters: {} });
+    // Applied here as well as by the listener, so the test knows it has happened: an accepted finding shows no sign.
+    await syncFindingsForRun(app.dataSource, projectId, later.id);
+    const kept = await failFinding();
+    expect(kept).toMatchObject({ status: 'accepted', justification, runId: accepted.runId, utilisation: accepted.utilisation, description: accepted.description });
+
+    await reviewer.post(findingsUrl(projectId, `/${accepted.id}/transitions`)).send({ to: 'open' }).expect(200);
+    await syncFindingsForRun(app.dataSource, projectId, later.id);
+    expect(await failFinding()).toMatchObject({ status: 'open', justification: null, runId: later.id });
+  });
+
+  it('turns a warning finding into a failure, with history, when a later run finds the member failing', async () => {
+    const member = members.find((candidate) => candidate !== overloaded && candidate.tag)!;
+    await syncFindingsFromRun(app.dataSource, projectId, { runId: 'warning-run', revisionNumber: 1 }, [runResult(member.globalId, 'warning', 0.94)]);
+    const warning = (await findings()).filter((finding) => finding.memberKey === member.globalId);
+    expect(warning.map((finding) => finding.kind)).toEqual(['web-shear-warning']);
+    await syncFindingsFromRun(app.dataSource, projectId, { runId: 'failure-run', revisionNumber: 1, standardLabel: 'AISC 360-22 ASD' }, [runResult(member.globalId, 'fail', 1.08)]);
+    const after = (await findings()).filter((finding) => finding.memberKey === member.globalId);
+    expect(after).toHaveLength(1);
+    expect(after[0]).toMatchObject({ id: warning[0].id, kind: 'web-shear-fail', priority: 'high', title: `Web shear over capacity: T-${member.globalId.slice(0, 4)}` });
+    const history = await app.dataSource.getRepository(FindingChange).find({ where: { findingId: after[0].id }, order: { at: 'ASC' } });
+    expect(history.map((change) => change.field)).toEqual(['created', 'title', 'priority', 'utilisation', 'description']);
+    expect(history.at(-1)?.toValue).toContain('in the AISC 360-22 ASD check of model revision 1.');
+    // Leaves the scene as it was for the next revision's test.
+    await app.dataSource.getRepository(FindingChange).delete({ findingId: after[0].id });
+    await app.dataSource.getRepository(Finding).delete(after[0].id);
   });
 
   it('moves the finding to Ready to verify when a newer revision passes, telling the assignee', async () => {
