@@ -1,3 +1,4 @@
+import { dictionary } from '@zxcvbn-ts/language-common';
 import bcrypt from 'bcryptjs';
 import { z } from 'zod';
 
@@ -7,9 +8,22 @@ const BCRYPT_COST = 12;
 /** bcrypt reads only the first 72 bytes, so longer passwords would silently lose their tail. */
 const MAX_PASSWORD_bytes = 72;
 
+let commonPasswords: Set<string> | undefined;
+
+/** The first guesses of anyone trying passwords: a list drawn from leaked-password corpora, lower-case. */
+function isCommonPassword(password: string): boolean {
+  commonPasswords ??= new Set(dictionary['passwords-common']);
+  return commonPasswords.has(password.trim().toLowerCase());
+}
+
+const MIN_PASSWORD_length = 10;
+
+// The list checks apply only at full length, so a short password gets one message, not three.
 export const newPasswordSchema = z
   .string()
-  .min(10, 'must be at least 10 characters')
+  .min(MIN_PASSWORD_length, `must be at least ${MIN_PASSWORD_length} characters`)
+  .refine((p) => p.length < MIN_PASSWORD_length || p.trim() !== '', 'must not be only spaces')
+  .refine((p) => p.length < MIN_PASSWORD_length || !isCommonPassword(p), 'is one of the most common passwords; choose another')
   .refine((p) => Buffer.byteLength(p, 'utf8') <= MAX_PASSWORD_bytes, 'must be at most 72 bytes (72 plain letters)');
 
 export function hashPassword(password: string): Promise<string> {

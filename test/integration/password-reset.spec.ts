@@ -57,6 +57,18 @@ describe('password reset', () => {
     await agent.post(`/api/auth/password-reset/${first}`).send({ password: 'yet another password' }).expect(410);
   });
 
+  it('refuses a new password of spaces only or from the common-password list, and keeps the link usable', async () => {
+    const user = await createUser(app.dataSource);
+    const agent = await app.agent();
+    await agent.post('/api/auth/password-reset').send({ email: user.email }).expect(202);
+    const token = await resetLinkFor(user.email);
+    const spaces = await agent.post(`/api/auth/password-reset/${token}`).send({ password: ' '.repeat(10) }).expect(400);
+    expect(spaces.body.error.details).toEqual([{ location: 'body', field: 'password', message: 'must not be only spaces' }]);
+    const common = await agent.post(`/api/auth/password-reset/${token}`).send({ password: 'qwertyuiop' }).expect(400);
+    expect(common.body.error.details[0].message).toBe('is one of the most common passwords; choose another');
+    await agent.post(`/api/auth/password-reset/${token}`).send({ password: NEW_PASSWORD }).expect(204);
+  });
+
   it('says an expired link expired', async () => {
     const user = await createUser(app.dataSource);
     const agent = await app.agent();
