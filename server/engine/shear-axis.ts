@@ -23,3 +23,6 @@ export const SHEAR_CHECK_NAMES: Readonly<Record<ShearAxis, FamilyCheckName>> = {
 export function outlineAlongShear(p: SectionPolygon, axis: ShearAxis): SectionPolygon {
   return axis === 'major' ? p : quarterTurn(p, 1);
 }
+
+/** A code rule for one family and axis, or the plain reason why the code gives none (never a guess). */
+export type ShearRule<T> = { applicable: true; capacity: T } | { applicable: false; reason: string };
