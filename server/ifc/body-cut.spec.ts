@@ -105,6 +105,8 @@ describe('cutMemberBody', () => {
   beforeAll(async () => {
     const w = new StepWriter();
     ids.ipeBrep = productShape(w, [prismBrep(w, IPE300, 4000)]);
+    ids.ipeBrepAgain = productShape(w, [prismBrep(w, IPE300, 4000)]);
+    ids.ipeBrepLonger = productShape(w, [prismBrep(w, IPE300, 4100)]);
     ids.channelBrep = productShape(w, [prismBrep(w, CHANNEL, 3000)]);
     ids.boxBrep = productShape(w, [prismBrep(w, BOX, 2500)]);
     ids.ipePolygonal = productShape(w, [prismPolygonalFaceSet(w, IPE300, 4000)]);
@@ -152,6 +154,18 @@ describe('cutMemberBody', () => {
     const cut = cutMemberBody(lines, items(name), { scaleToMm: 1 });
     expectSameSection(cut, outline);
     expect(cut).toMatchObject({ stations: [0.2, 0.35, 0.5, 0.65, 0.8] });
+  });
+
+  it('cuts a body equal to one already cut only once: the second member gets the same cut, a longer one its own', () => {
+    const first = cutMemberBody(lines, items('ipeBrep'), { scaleToMm: 1 });
+    const again = cutMemberBody(lines, items('ipeBrepAgain'), { scaleToMm: 1 });
+    const longer = cutMemberBody(lines, items('ipeBrepLonger'), { scaleToMm: 1 });
+    const scaled = cutMemberBody(lines, items('ipeBrepAgain'), { scaleToMm: 2 });
+    expect(again).toBe(first);
+    expect(longer).not.toBe(first);
+    expect(longer).toMatchObject({ status: 'cut', axis: { length: 4100 } });
+    expectSameSection(longer, IPE300);
+    expectSameSection(scaled, IPE300, 2);
   });
 
   it('gives IPE 300 its table area and second moments (EN 10365, from memory: A 53.81 cm², Iy 8356 cm⁴, Iz 603.8 cm⁴)', () => {

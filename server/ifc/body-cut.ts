@@ -260,8 +260,99 @@ export function cutMemberBody(lines: StepLines, items: readonly BodyItem[], opti
     clips.push(...reading.clips);
     types.add(reading.ifcType);
   }
-  const ifcType = [...types].join(' + ');
-  const faces = mergeFaces(sets);
+  const body: CutInput = { faces: mergeFaces(sets), clips, ifcType: [...types].join(' + '), options };
+  let cuts = cutCaches.get(lines);
+  if (!cuts) {
+    cuts = new CutCache();
+    cutCaches.set(lines, cuts);
+  }
+  return cuts.get(body) ?? cuts.add(body, cutFaces(body));
+}
+
+/** What a cut depends on: the same input always gives the same cut. */
+interface CutInput {
+  faces: BodyFaces;
+  clips: readonly HalfSpaceClip[];
+  ifcType: string;
+  options: BodyCutOptions;
+}
+
+const CACHED_CUTS = 4096;
+
+/**
+ * Cuts of bodies already cut in this model. Members of one size and length have the same body in their own
+ * coordinates (every beam of one size, in real exports), so most bodies are cut once. Found by a hash of the input
+ * and kept only when every number is equal. A cut is shared by the members that have it: read, never written.
+ */
+class CutCache {
+  private readonly entries = new Map<number, { input: CutInput; cut: BodyCut }[]>();
+  private count = 0;
+
+  get(input: CutInput): BodyCut | undefined {
+    return this.entries.get(hashOf(input))?.find((entry) => sameInput(entry.input, input))?.cut;
+  }
+
+  add(input: CutInput, cut: BodyCut): BodyCut {
+    // Past the limit, the oldest hash goes: a model of all-different bodies keeps a bounded cache.
+    if (this.count >= CACHED_CUTS) {
+      const [oldest, list] = this.entries.entries().next().value as [number, unknown[]];
+      this.entries.delete(oldest);
+      this.count -= list.length;
+    }
+    const hash = hashOf(input);
+    const list = this.entries.get(hash);
+    if (list) list.push({ input, cut });
+    else this.entries.set(hash, [{ input, cut }]);
+    this.count++;
+    return cut;
+  }
+}
+
+const cutCaches = new WeakMap<StepLines, CutCache>();
+
+const hashWords = new Float64Array(1);
+const hashBits = new Uint32Array(hashWords.buffer);
+
+/** FNV-1a over the bits of every number of the faces (a hash, checked by sameInput). */
+function hashOf({ faces, options }: CutInput): number {
+  let h = 0x811c9dc5;
+  const mix = (x: number): void => {
+    hashWords[0] = x;
+    h = Math.imul(h ^ hashBits[0], 0x01000193);
+    h = Math.imul(h ^ hashBits[1], 0x01000193);
+  };
+  for (const v of faces.positions) mix(v);
+  for (const v of faces.loopVertices) h = Math.imul(h ^ v, 0x01000193);
+  for (const v of faces.loopStarts) h = Math.imul(h ^ v, 0x01000193);
+  for (const v of faces.faceStarts) h = Math.imul(h ^ v, 0x01000193);
+  mix(options.scaleToMm);
+  return h >>> 0;
+}
+
+const sameNumbers = (a: ArrayLike<number>, b: ArrayLike<number>): boolean => {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+};
+
+function sameInput(a: CutInput, b: CutInput): boolean {
+  const sameClip = (x: HalfSpaceClip, y: HalfSpaceClip): boolean => sameNumbers(x.point, y.point) && sameNumbers(x.normal, y.normal);
+  const sameAxis = (x: BodyCutOptions['axis'], y: BodyCutOptions['axis']): boolean => (x && y ? sameNumbers(x.start, y.start) && sameNumbers(x.end, y.end) : x === y);
+  return (
+    a.ifcType === b.ifcType &&
+    a.options.scaleToMm === b.options.scaleToMm &&
+    sameAxis(a.options.axis, b.options.axis) &&
+    a.clips.length === b.clips.length &&
+    a.clips.every((clip, i) => sameClip(clip, b.clips[i])) &&
+    sameNumbers(a.faces.positions, b.faces.positions) &&
+    sameNumbers(a.faces.loopVertices, b.faces.loopVertices) &&
+    sameNumbers(a.faces.loopStarts, b.faces.loopStarts) &&
+    sameNumbers(a.faces.faceStarts, b.faces.faceStarts)
+  );
+}
+
+/** The cut of one body (see cutMemberBody). */
+function cutFaces({ faces, clips, ifcType, options }: CutInput): BodyCut {
   if (faces.positions.length === 0) return failed(`Its body (${ifcType}) is empty.`);
 
   let w: Vec3 | undefined;

@@ -136,6 +136,18 @@ describe('readBodyFaces', () => {
     expect(faceLoops(reading.faces)[0][0]).toEqual([3, 2, 1, 0].map((c) => [10 - CORNERS[c][1], 20 + CORNERS[c][0], 30 + CORNERS[c][2]]));
   });
 
+  it('reads a body that several mappings place once, and moves its points for each mapping', () => {
+    const turned = fromColumns([0, 1, 0], [-1, 0, 0], [0, 0, 1], [10, 20, 30]);
+    const shifted = fromColumns([1, 0, 0], [0, 1, 0], [0, 0, 1], [-5, 0, 7]);
+    const first = readBodyFaces(lines, ids.advanced, turned);
+    const second = readBodyFaces(lines, ids.advanced, shifted);
+    const again = readBodyFaces(lines, ids.advanced, turned);
+    if (first.status !== 'read' || second.status !== 'read' || again.status !== 'read') throw new Error('not read');
+    expect(second.faces.loopVertices).toBe(first.faces.loopVertices);
+    expect(faceLoops(second.faces)[0][0]).toEqual([3, 2, 1, 0].map((c) => [CORNERS[c][0] - 5, CORNERS[c][1], CORNERS[c][2] + 7]));
+    expect(faceLoops(again.faces)).toEqual(faceLoops(first.faces));
+  });
+
   it('reads a polygonal face set with voids in its caps and a triangulated set through PnIndex', () => {
     const polygonal = readBodyFaces(lines, ids.polygonal, undefined);
     const triangulated = readBodyFaces(lines, ids.triangulated, undefined);

@@ -30,6 +30,7 @@ import {
 } from 'web-ifc';
 import { type Mat4, normalize, normalMatrix, transformPoint, type Vec3 } from './matrix4';
 import { readAxisPlacement } from './placement-reader';
+import { FLAT_INTEGER, FLAT_LIST, FLAT_REAL, FLAT_REF, type FlatLine } from './step-line-parser';
 import { booleanOf, enumOf, numberOf, refOf, refsOf, type StepLines, type StepValue } from './step-lines';
 
 export interface BodyFaces {
@@ -80,7 +81,7 @@ class FaceBuilder {
     for (const v of vertices) this.loopVertices.push(v);
   }
 
-  build(transform: Mat4 | undefined): BodyFaces {
+  build(): BodyFaces {
     // Faces whose loops were all left out are dropped.
     const faceStarts: number[] = [];
     for (let f = 0; f < this.faceStarts.length; f++) {
@@ -88,10 +89,8 @@ class FaceBuilder {
       if (end > this.faceStarts[f]) faceStarts.push(this.faceStarts[f]);
     }
     faceStarts.push(this.loopStarts.length);
-    const positions = Float64Array.from(this.positions);
-    if (transform) transformPositions(positions, transform);
     return {
-      positions,
+      positions: Float64Array.from(this.positions),
       loopVertices: Uint32Array.from(this.loopVertices),
       loopStarts: Uint32Array.from([...this.loopStarts, this.loopVertices.length]),
       faceStarts: Uint32Array.from(faceStarts),
@@ -99,7 +98,7 @@ class FaceBuilder {
   }
 }
 
-function transformPositions(positions: Float64Array, m: Mat4): void {
+function transformPositions(positions: Float64Array, m: Mat4): Float64Array {
   for (let i = 0; i < positions.length; i += 3) {
     const x = positions[i];
     const y = positions[i + 1];
@@ -108,15 +107,53 @@ function transformPositions(positions: Float64Array, m: Mat4): void {
     positions[i + 1] = m[1] * x + m[5] * y + m[9] * z + m[13];
     positions[i + 2] = m[2] * x + m[6] * y + m[10] * z + m[14];
   }
+  return positions;
 }
 
 /** Thrown inside the reader for a body it cannot read; turned into a 'failed' reading with the message. */
 class Unreadable extends Error {}
 
+/** The references in the list at `at` of a flat line (the others skipped, as refsOf does), into `out`. */
+function flatRefs(flat: FlatLine, at: number, out: number[]): number[] {
+  out.length = 0;
+  if (at < 0 || flat.kinds[at] !== FLAT_LIST) return out;
+  for (let i = at + 1; i < flat.values[at]; i = flat.next(i)) if (flat.kinds[i] === FLAT_REF && flat.values[i] > 0) out.push(flat.values[i]);
+  return out;
+}
+
+/** The reference at `at` of a flat line, as refOf reads it. */
+function flatRef(flat: FlatLine, at: number): number | undefined {
+  return at >= 0 && flat.kinds[at] === FLAT_REF && flat.values[at] > 0 ? flat.values[at] : undefined;
+}
+
+/** A finite real or integer at `at` of a flat line (a typed value is left to numberOf). */
+function isPlainNumber(flat: FlatLine, at: number): boolean {
+  const kind = flat.kinds[at];
+  return (kind === FLAT_REAL || kind === FLAT_INTEGER) && Number.isFinite(flat.values[at]);
+}
+
+/**
+ * True when the list at `at` holds two or more coordinates whose first three are plain numbers: the case read straight
+ * from the flat line; anything else goes through the general reading, which gives the same answer or the reason.
+ */
+function plainCoordinates(flat: FlatLine, at: number): boolean {
+  if (flat.kinds[at] !== FLAT_LIST) return false;
+  const count = flat.values[at] - at - 1;
+  if (count < 2) return false;
+  for (let k = 1; k <= Math.min(count, 3); k++) if (!isPlainNumber(flat, at + k)) return false;
+  return true;
+}
+
 class BodyFaceReader {
   readonly builder = new FaceBuilder();
   /** IfcCartesianPoint ids to vertex numbers: faces of a brep share their corners. */
   private readonly points = new Map<number, number>();
+  // Reused between faces and loops; each is used up before the next read of its kind.
+  private readonly boundIds: number[] = [];
+  private readonly outerBounds: (number | undefined)[] = [];
+  private readonly innerBounds: (number | undefined)[] = [];
+  private readonly pointIds: number[] = [];
+  private readonly vertices: number[] = [];
 
   constructor(private readonly lines: StepLines) {}
 
@@ -124,39 +161,70 @@ class BodyFaceReader {
     if (pointId === undefined) throw new Unreadable('a face refers to a point the file does not have');
     let vertex = this.points.get(pointId);
     if (vertex === undefined) {
-      const coordinates = this.lines.line(pointId)?.args[0];
-      const x = Array.isArray(coordinates) ? numberOf(coordinates[0]) : undefined;
-      const y = Array.isArray(coordinates) ? numberOf(coordinates[1]) : undefined;
-      const z = Array.isArray(coordinates) ? (numberOf(coordinates[2]) ?? 0) : undefined;
-      if (x === undefined || y === undefined || z === undefined) throw new Unreadable(`point #${pointId} has no coordinates`);
-      vertex = this.builder.addVertex(x, y, z);
+      const flat = this.lines.flat(pointId);
+      if (flat && flat.count > 0 && plainCoordinates(flat, 0)) {
+        const v = flat.values;
+        const count = v[0] - 1;
+        vertex = this.builder.addVertex(v[1], v[2], count >= 3 ? v[3] : 0);
+      } else {
+        vertex = this.vertexOfPointLine(pointId);
+      }
       this.points.set(pointId, vertex);
     }
     return vertex;
   }
 
+  /** The general reading of a point, for what the flat reading leaves (typed values, missing coordinates). */
+  private vertexOfPointLine(pointId: number): number {
+    const coordinates = this.lines.line(pointId)?.args[0];
+    const x = Array.isArray(coordinates) ? numberOf(coordinates[0]) : undefined;
+    const y = Array.isArray(coordinates) ? numberOf(coordinates[1]) : undefined;
+    const z = Array.isArray(coordinates) ? (numberOf(coordinates[2]) ?? 0) : undefined;
+    if (x === undefined || y === undefined || z === undefined) throw new Unreadable(`point #${pointId} has no coordinates`);
+    return this.builder.addVertex(x, y, z);
+  }
+
   /** The faces of shells (IfcClosedShell, IfcOpenShell, IfcConnectedFaceSet): CfsFaces is their first attribute. */
   shells(shellIds: readonly number[]): void {
     for (const shellId of shellIds) {
-      for (const faceId of refsOf(this.lines.line(shellId)?.args[0])) this.face(faceId);
+      const flat = this.lines.flat(shellId);
+      if (!flat || flat.count === 0) continue;
+      for (const faceId of flatRefs(flat, 0, [])) this.face(faceId);
     }
   }
 
   /** IfcFace or IfcAdvancedFace: Bounds first; an advanced face must lie on a plane. */
   private face(faceId: number): void {
-    const face = this.lines.line(faceId);
+    const face = this.lines.flat(faceId);
     if (!face) return;
-    const surface = refOf(face.args[1]);
+    const surface = flatRef(face, face.attribute(1));
+    const boundIds = flatRefs(face, face.count > 0 ? 0 : -1, this.boundIds);
     if (surface !== undefined && this.lines.typeOf(surface) !== IFCPLANE) {
       throw new Unreadable(`it has curved faces (${this.lines.typeName(this.lines.typeOf(surface))})`);
     }
-    const bounds = refsOf(face.args[0]).map((id) => this.lines.line(id)).filter((b) => b !== undefined);
-    bounds.sort((a, b) => Number(b.type === IFCFACEOUTERBOUND) - Number(a.type === IFCFACEOUTERBOUND));
+    // Outer bound first, the others in their order.
+    const outer = this.outerBounds;
+    const inner = this.innerBounds;
+    outer.length = 0;
+    inner.length = 0;
+    for (const boundId of boundIds) {
+      const bound = this.lines.flat(boundId);
+      if (!bound) continue;
+      (bound.type === IFCFACEOUTERBOUND ? outer : inner).push(flatRef(bound, bound.count > 0 ? 0 : -1));
+    }
     this.builder.startFace();
-    for (const bound of bounds) this.builder.addLoop(this.loop(refOf(bound.args[0])));
+    for (const loopId of outer) this.builder.addLoop(this.loop(loopId));
+    for (const loopId of inner) this.builder.addLoop(this.loop(loopId));
   }
 
   private loop(loopId: number | undefined): number[] {
+    const flat = this.lines.flat(loopId);
+    if (flat?.type === IFCPOLYLOOP) {
+      const vertices = this.vertices;
+      vertices.length = 0;
+      for (const p of flatRefs(flat, flat.count > 0 ? 0 : -1, this.pointIds)) vertices.push(this.vertexOfPoint(p));
+      return vertices;
+    }
     const type = this.lines.typeOf(loopId);
     if (type === IFCPOLYLOOP) return refsOf(this.lines.line(loopId)?.args[0]).map((p) => this.vertexOfPoint(p));
     if (type === IFCEDGELOOP) return this.edgeLoop(loopId!);
@@ -218,11 +286,22 @@ class BodyFaceReader {
     }
   }
 
-  /** Vertex numbers of an IfcCartesianPointList3D, in PnIndex order when PnIndex is given. */
-  private pointList(listId: number | undefined, pnIndex: StepValue[] | null): number[] {
+  /** The points of a point list read straight from its flat line; undefined (nothing added) when one is not plain. */
+  private flatPointList(listId: number | undefined): number | undefined {
+    const flat = this.lines.flat(listId);
+    if (!flat || flat.count === 0 || flat.kinds[0] !== FLAT_LIST) return undefined;
+    const end = flat.values[0];
+    let count = 0;
+    for (let at = 1; at < end; at = flat.next(at), count++) if (!plainCoordinates(flat, at)) return undefined;
+    const v = flat.values;
+    for (let at = 1; at < end; at = flat.next(at)) this.builder.addVertex(v[at + 1], v[at + 2], v[at] - at - 1 >= 3 ? v[at + 3] : 0);
+    return count;
+  }
+
+  /** The general reading of a point list. */
+  private pointListLine(listId: number | undefined): number {
     const coordinates = this.lines.line(listId)?.args[0];
     if (!Array.isArray(coordinates)) throw new Unreadable('its point list is missing');
-    const first = this.builder.vertexCount;
     for (const point of coordinates) {
       const p = Array.isArray(point) ? point : [];
       const x = numberOf(p[0]);
@@ -231,7 +310,13 @@ class BodyFaceReader {
       if (x === undefined || y === undefined) throw new Unreadable('its point list has a point without coordinates');
       this.builder.addVertex(x, y, z);
     }
-    const count = coordinates.length;
+    return coordinates.length;
+  }
+
+  /** Vertex numbers of an IfcCartesianPointList3D, in PnIndex order when PnIndex is given. */
+  private pointList(listId: number | undefined, pnIndex: StepValue[] | null): number[] {
+    const first = this.builder.vertexCount;
+    const count = this.flatPointList(listId) ?? this.pointListLine(listId);
     if (!pnIndex) return Array.from({ length: count }, (_, i) => first + i);
     return pnIndex.map((value) => {
       const i = numberOf(value);
@@ -288,19 +373,13 @@ function unwrapBooleans(lines: StepLines, itemId: number, transform: Mat4 | unde
   throw new Unreadable('its booleans nest too deep');
 }
 
-/**
- * Reads one body item (with the mapping transform that places it in the element) into planar faces. Never throws:
- * a body it cannot read answers a reason in plain words.
- */
-export function readBodyFaces(lines: StepLines, itemId: number, transform: Mat4 | undefined): BodyFacesReading {
-  const clips: HalfSpaceClip[] = [];
-  let ifcType = lines.typeName(lines.typeOf(itemId));
+/** A body's faces in its own coordinates, or the reason they cannot be read. Throws only what is not Unreadable. */
+function readOwnFaces(lines: StepLines, bodyId: number): BodyFaces | string {
+  const type = lines.typeOf(bodyId);
+  const ifcType = lines.typeName(type);
   try {
-    const bodyId = unwrapBooleans(lines, itemId, transform, clips);
-    const type = lines.typeOf(bodyId);
-    ifcType = lines.typeName(type);
     const line = lines.line(bodyId);
-    if (!line) return { status: 'failed', reason: `The body item #${bodyId} is missing from the file.` };
+    if (!line) return `The body item #${bodyId} is missing from the file.`;
     const reader = new BodyFaceReader(lines);
     switch (type) {
       case IFCFACETEDBREP:
@@ -320,16 +399,56 @@ export function readBodyFaces(lines: StepLines, itemId: number, transform: Mat4 
         reader.faceSet(line);
         break;
       default:
-        return { status: 'failed', reason: `Its body is ${ifcType}, which is not read as faces.` };
+        return `Its body is ${ifcType}, which is not read as faces.`;
     }
-    const faces = reader.builder.build(transform);
-    if (faces.faceStarts.length < 2) return { status: 'failed', reason: `Its body (${ifcType}) has no faces.` };
-    for (const v of faces.positions) {
-      if (!Number.isFinite(v)) return { status: 'failed', reason: `Its body (${ifcType}) has a point that is not a number.` };
-    }
-    return { status: 'read', faces, clips, ifcType };
+    const faces = reader.builder.build();
+    return faces.faceStarts.length < 2 ? `Its body (${ifcType}) has no faces.` : faces;
   } catch (error) {
-    if (error instanceof Unreadable) return { status: 'failed', reason: `Its body (${ifcType}) cannot be read as faces: ${error.message}.` };
+    if (error instanceof Unreadable) return `Its body (${ifcType}) cannot be read as faces: ${error.message}.`;
     throw error;
   }
+}
+
+/**
+ * Bodies placed through a representation map (IfcMappedItem), by model: many members share one, so each is read once
+ * in its own coordinates and only its points are moved for each member.
+ */
+const mappedBodies = new WeakMap<StepLines, Map<number, BodyFaces | string>>();
+
+function mappedOwnFaces(lines: StepLines, bodyId: number): BodyFaces | string {
+  let bodies = mappedBodies.get(lines);
+  if (!bodies) {
+    bodies = new Map();
+    mappedBodies.set(lines, bodies);
+  }
+  let own = bodies.get(bodyId);
+  if (own === undefined) {
+    own = readOwnFaces(lines, bodyId);
+    bodies.set(bodyId, own);
+  }
+  return own;
+}
+
+/**
+ * Reads one body item (with the mapping transform that places it in the element) into planar faces. Never throws:
+ * a body it cannot read answers a reason in plain words. The arrays of a mapped body's faces other than its
+ * positions are shared between the members that map it: they are read, never written.
+ */
+export function readBodyFaces(lines: StepLines, itemId: number, transform: Mat4 | undefined): BodyFacesReading {
+  const clips: HalfSpaceClip[] = [];
+  let bodyId: number;
+  try {
+    bodyId = unwrapBooleans(lines, itemId, transform, clips);
+  } catch (error) {
+    if (error instanceof Unreadable) return { status: 'failed', reason: `Its body (${lines.typeName(lines.typeOf(itemId))}) cannot be read as faces: ${error.message}.` };
+    throw error;
+  }
+  const own = transform ? mappedOwnFaces(lines, bodyId) : readOwnFaces(lines, bodyId);
+  if (typeof own === 'string') return { status: 'failed', reason: own };
+  const faces = transform ? { ...own, positions: transformPositions(own.positions.slice(), transform) } : own;
+  const ifcType = lines.typeName(lines.typeOf(bodyId));
+  for (const v of faces.positions) {
+    if (!Number.isFinite(v)) return { status: 'failed', reason: `Its body (${ifcType}) has a point that is not a number.` };
+  }
+  return { status: 'read', faces, clips, ifcType };
 }

@@ -181,7 +181,8 @@ function instanceStart(bytes: Uint8Array, at: number, typeCode: TypeCodeOf): Cur
 
 /** Only the entity type of the instance at `at`. */
 export function parseTypeName(bytes: Uint8Array, at: number, typeCode: TypeCodeOf): number {
-  return instanceStart(bytes, at, typeCode).typeName();
+  const start = typeNameStart(bytes, at);
+  return typeCode(bytes, start, nameEnd(bytes, start));
 }
 
 function findCommentEnd(bytes: Uint8Array, from: number): number {
@@ -199,4 +200,211 @@ export function parseLine(bytes: Uint8Array, at: number, typeCode: TypeCodeOf): 
   const args = cursor.list();
   cursor.expect(SEMICOLON);
   return { type, args };
+}
+
+/**
+ * Kinds of the values of a FlatLine: the codes of the line data above, plus LIST for a list (also the arguments of a
+ * typed value, which follow it).
+ */
+export const FLAT_STRING = 1;
+export const FLAT_TYPED = 2;
+export const FLAT_ENUM = 3;
+export const FLAT_REAL = 4;
+export const FLAT_REF = 5;
+export const FLAT_NULL = 0;
+export const FLAT_INTEGER = 10;
+export const FLAT_BINARY = 11;
+export const FLAT_LIST = 20;
+
+/**
+ * One instance read into numbers only, for the hot paths that read tens of thousands of points and face loops: each
+ * value, depth first, has a kind and a number (a real or integer's value, a reference's id, 1 or 0 for .T. and .F.,
+ * and for a list or typed value the index of the first value after it; NaN otherwise). Strings are not decoded.
+ * The arrays are reused from one read to the next.
+ */
+export class FlatLine {
+  type = 0;
+  count = 0;
+  kinds = new Uint8Array(256);
+  values = new Float64Array(256);
+
+  /** Index of the value after the one at `at` (a list's values are skipped). */
+  next(at: number): number {
+    return this.kinds[at] === FLAT_LIST || this.kinds[at] === FLAT_TYPED ? this.values[at] : at + 1;
+  }
+
+  /** Index of the attribute at `position`, or -1 when the instance has fewer attributes. */
+  attribute(position: number): number {
+    let at = 0;
+    for (let k = 0; k < position && at < this.count; k++) at = this.next(at);
+    return at < this.count ? at : -1;
+  }
+
+  push(kind: number, value: number): number {
+    if (this.count === this.kinds.length) {
+      const kinds = new Uint8Array(2 * this.count);
+      const values = new Float64Array(2 * this.count);
+      kinds.set(this.kinds);
+      values.set(this.values);
+      this.kinds = kinds;
+      this.values = values;
+    }
+    this.kinds[this.count] = kind;
+    this.values[this.count] = value;
+    return this.count++;
+  }
+}
+
+/** Exact powers of ten: a decimal mantissa below 2^53 divided by one of them rounds as Number() would. */
+const POWERS_OF_TEN = Array.from({ length: 23 }, (_, k) => 10 ** k);
+
+/** The number written in bytes [start, end): exactly Number() of the text, without building the text when it is plain. */
+function numberIn(bytes: Uint8Array, start: number, end: number): number {
+  let i = start;
+  const negative = bytes[i] === 0x2d;
+  if (negative || bytes[i] === 0x2b) i++;
+  let mantissa = 0;
+  let digits = 0;
+  let decimals = 0;
+  let dot = false;
+  for (; i < end; i++) {
+    const b = bytes[i];
+    if (b >= 0x30 && b <= 0x39) {
+      mantissa = mantissa * 10 + (b - 0x30);
+      digits++;
+      if (dot) decimals++;
+    } else if (b === DOT && !dot) dot = true;
+    else break;
+  }
+  if (i < end || digits === 0 || mantissa > Number.MAX_SAFE_INTEGER || decimals > 22) return Number(text(bytes, start, end));
+  const value = mantissa / POWERS_OF_TEN[decimals];
+  return negative ? -value : value;
+}
+
+/** Past blanks and comments from `i`; throws NeedMoreBytes when the bytes end first. */
+function skipBlank(bytes: Uint8Array, i: number): number {
+  const n = bytes.length;
+  for (;;) {
+    while (i < n && bytes[i] <= 0x20) i++;
+    if (i + 1 < n && bytes[i] === SLASH && bytes[i + 1] === STAR) {
+      i = findCommentEnd(bytes, i + 2);
+      if (i < 0) throw new NeedMoreBytes();
+      continue;
+    }
+    if (i >= n) throw new NeedMoreBytes();
+    return i;
+  }
+}
+
+/** Where the type name of the instance at `at` starts, past '#id='. */
+function typeNameStart(bytes: Uint8Array, at: number): number {
+  let i = skipBlank(bytes, at);
+  if (bytes[i] !== HASH) throw new SyntaxError(`expected '#' at byte ${i}`);
+  i = skipBlank(bytes, i + 1);
+  while (bytes[i] >= 0x30 && bytes[i] <= 0x39) i = skipBlank(bytes, i + 1);
+  if (bytes[i] !== 0x3d) throw new SyntaxError(`expected '=' at byte ${i}`);
+  return skipBlank(bytes, i + 1);
+}
+
+/** Past the name bytes from `i`. */
+function nameEnd(bytes: Uint8Array, i: number): number {
+  while (i < bytes.length && isNameByte(bytes[i])) i++;
+  if (i >= bytes.length) throw new NeedMoreBytes();
+  return i;
+}
+
+/** Reads the list at `i` ('(' after blanks) into `into` without an entry of its own; answers the position after ')'. */
+function flatItems(bytes: Uint8Array, i: number, into: FlatLine): number {
+  i = skipBlank(bytes, i);
+  if (bytes[i] !== OPEN) throw new SyntaxError(`expected '(' at byte ${i}`);
+  i = skipBlank(bytes, i + 1);
+  if (bytes[i] === CLOSE) return i + 1;
+  for (;;) {
+    i = flatValue(bytes, i, into);
+    i = skipBlank(bytes, i);
+    const next = bytes[i++];
+    if (next === CLOSE) return i;
+    if (next !== COMMA) throw new SyntaxError(`expected ',' or ')' at byte ${i - 1}`);
+  }
+}
+
+/** Reads the value at `i` (blanks skipped) into `into`; answers the position after it. */
+function flatValue(bytes: Uint8Array, i: number, into: FlatLine): number {
+  i = skipBlank(bytes, i);
+  const n = bytes.length;
+  const b = bytes[i];
+  if (b === DOLLAR || b === STAR) {
+    into.push(FLAT_NULL, NaN);
+    return i + 1;
+  }
+  if (b === OPEN) {
+    const entry = into.push(FLAT_LIST, NaN);
+    i = flatItems(bytes, i, into);
+    into.values[entry] = into.count;
+    return i;
+  }
+  if (b === HASH) {
+    let id = 0;
+    i++;
+    while (i < n && bytes[i] >= 0x30 && bytes[i] <= 0x39) id = id * 10 + (bytes[i++] - 0x30);
+    if (i >= n) throw new NeedMoreBytes();
+    into.push(FLAT_REF, id);
+    return i;
+  }
+  if ((b >= 0x30 && b <= 0x39) || b === 0x2b || b === 0x2d) {
+    const start = i;
+    let real = false;
+    while (i < n && isNumberByte(bytes[i])) {
+      const c = bytes[i++];
+      real ||= c === DOT || c === 0x45 || c === 0x65;
+    }
+    if (i >= n) throw new NeedMoreBytes();
+    into.push(real ? FLAT_REAL : FLAT_INTEGER, numberIn(bytes, start, i));
+    return i;
+  }
+  if (b === DOT) {
+    const start = ++i;
+    while (i < n && bytes[i] !== DOT) i++;
+    if (i >= n) throw new NeedMoreBytes();
+    const one = i === start + 1 ? bytes[start] : 0;
+    into.push(FLAT_ENUM, one === 0x54 ? 1 : one === 0x46 ? 0 : NaN);
+    return i + 1;
+  }
+  if (b === QUOTE) {
+    i++;
+    for (;;) {
+      const close = bytes.indexOf(QUOTE, i);
+      if (close < 0 || close + 1 >= n) throw new NeedMoreBytes();
+      i = close + 1;
+      if (bytes[i] !== QUOTE) break;
+      i++;
+    }
+    into.push(FLAT_STRING, NaN);
+    return i;
+  }
+  if (b === QUOTE2) {
+    const close = bytes.indexOf(QUOTE2, i + 1);
+    if (close < 0) throw new NeedMoreBytes();
+    into.push(FLAT_BINARY, NaN);
+    return close + 1;
+  }
+  // A typed value such as IFCPARAMETERVALUE(0.5): its arguments follow as a list.
+  i = nameEnd(bytes, i);
+  const entry = into.push(FLAT_TYPED, NaN);
+  i = flatItems(bytes, i, into);
+  into.values[entry] = into.count;
+  return i;
+}
+
+/**
+ * Reads the instance starting at `at` (its '#') into `into`: its type, then its arguments from index 0. Throws as
+ * parseLine does.
+ */
+export function parseFlatLine(bytes: Uint8Array, at: number, typeCode: TypeCodeOf, into: FlatLine): void {
+  const nameStart = typeNameStart(bytes, at);
+  let i = nameEnd(bytes, nameStart);
+  into.type = typeCode(bytes, nameStart, i);
+  into.count = 0;
+  i = skipBlank(bytes, flatItems(bytes, i, into));
+  if (bytes[i] !== SEMICOLON) throw new SyntaxError(`expected ';' at byte ${i}`);
 }

@@ -4,6 +4,7 @@
  * (entity types, ids by type, placements) and the few by-name reads (units).
  */
 import type { IfcAPI } from 'web-ifc';
+import { FlatLine, parseFlatLine, type TypeCodeOf } from './step-line-parser';
 import type { StepText } from './step-text';
 
 export type StepValue = null | StepValue[] | { type: number; value: unknown; typecode?: number };
@@ -72,6 +73,11 @@ export function booleanOf(value: StepValue | undefined): boolean | undefined {
 
 export class StepLines {
   private readonly typeNames = new Map<number, string>();
+  private readonly flatLine = new FlatLine();
+  private readonly flatParser = (bytes: Uint8Array, at: number, typeCode: TypeCodeOf): FlatLine => {
+    parseFlatLine(bytes, at, typeCode, this.flatLine);
+    return this.flatLine;
+  };
 
   /**
    * Lines are parsed from the file's own bytes rather than read through web-ifc: its per-line marshalling cost
@@ -88,6 +94,14 @@ export class StepLines {
     if (id === undefined) return undefined;
     const parsed = this.text.line(id);
     return parsed ? { id, type: parsed.type, args: parsed.args } : undefined;
+  }
+
+  /**
+   * The line read as numbers only (see FlatLine), or undefined as for line(). The answer is one object reused by the
+   * next call: copy what is needed first.
+   */
+  flat(id: number | undefined): FlatLine | undefined {
+    return id === undefined ? undefined : this.text.parse(id, this.flatParser);
   }
 
   /** Entity type code of a line (0 when absent), without parsing its arguments. */

@@ -12,6 +12,9 @@ const CACHED_BLOCKS = 64;
 /** Longest instance accepted (an IfcCartesianPointList3D of a large mesh can run to megabytes). */
 const MAX_INSTANCE_BYTES = 256 * 1024 * 1024;
 
+/** Reads the instance whose '#' is at `at`; throws NeedMoreBytes when the bytes end first. */
+export type InstanceParser<T> = (bytes: Uint8Array, at: number, typeCode: TypeCodeOf) => T;
+
 export type StepBytes = { kind: 'bytes'; bytes: Uint8Array } | { kind: 'file'; path: string; size: number };
 
 export class StepText {
@@ -29,11 +32,16 @@ export class StepText {
 
   /** The parsed instance, or undefined when the file has no such id or the text is not an instance we read. */
   line(id: number): ParsedLine | undefined {
+    return this.parse(id, parseLine);
+  }
+
+  /** The instance read by `parser` (parseLine or another reader of step-line-parser.ts), or undefined as for line(). */
+  parse<T>(id: number, parser: InstanceParser<T>): T | undefined {
     const offset = this.offsets.offsetOf(id);
     if (offset === undefined) return undefined;
     try {
-      if (this.source.kind === 'bytes') return parseLine(this.source.bytes, offset, this.typeCode);
-      return this.parseFromFile(offset);
+      if (this.source.kind === 'bytes') return parser(this.source.bytes, offset, this.typeCode);
+      return this.parseFromFile(offset, parser);
     } catch (error) {
       if (error instanceof SyntaxError || error instanceof NeedMoreBytes) return undefined;
       throw error;
@@ -41,18 +49,18 @@ export class StepText {
   }
 
   /** Parses in place in the offset's block; only an instance running past the block needs a joined window. */
-  private parseFromFile(offset: number): ParsedLine {
+  private parseFromFile<T>(offset: number, parser: InstanceParser<T>): T {
     const index = Math.floor(offset / BLOCK_BYTES);
     const block = this.block(index);
     try {
-      return parseLine(block, offset - index * BLOCK_BYTES, this.typeCode);
+      return parser(block, offset - index * BLOCK_BYTES, this.typeCode);
     } catch (error) {
       if (!(error instanceof NeedMoreBytes) || block.length < BLOCK_BYTES) throw error;
     }
     for (let length = 2 * BLOCK_BYTES; ; length *= 4) {
       const window = this.window(offset, length);
       try {
-        return parseLine(window, 0, this.typeCode);
+        return parser(window, 0, this.typeCode);
       } catch (error) {
         if (!(error instanceof NeedMoreBytes) || window.length < length || length >= MAX_INSTANCE_BYTES) throw error;
       }
