@@ -51,6 +51,8 @@ export interface SectionOrigin {
 
 export class SectionResolver {
   private readonly cache = new WeakMap<ProfileReading, Map<string, SectionOutcome>>();
+  /** Recognitions by outline: members with the same body share one cut outline (body-cut.ts). */
+  private readonly recognitions = new WeakMap<SectionPolygon, ReturnType<typeof recogniseSection>>();
 
   constructor(private readonly projectCatalogue: readonly CatalogueSection[] = []) {}
 
@@ -115,7 +117,11 @@ export class SectionResolver {
    */
   fromOutline(polygon: SectionPolygon, origin: SectionOrigin, names: readonly (string | null)[]): SectionOutcome {
     const hit = this.lookUp(names);
-    const recognition = recogniseSection(polygon);
+    let recognition = this.recognitions.get(polygon);
+    if (!recognition) {
+      recognition = recogniseSection(polygon);
+      this.recognitions.set(polygon, recognition);
+    }
     if (recognition.status === 'recognised') {
       const measured = recognition.dimensions;
       const agrees = hit !== null && sameSection(hit.entry.dimensions, measured);
