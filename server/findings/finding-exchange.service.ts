@@ -17,6 +17,7 @@ import type { BcfImportSummary } from './finding-api-types';
 import { planBcfImport } from './bcf-import-plan';
 import type { FindingExport } from './export/finding-export';
 import { findingsCsv } from './export/findings-csv';
+import { acceptanceCommentGuids, acceptanceRecords } from './finding-acceptance';
 import { axisBoxes, viewpointWithCamera } from './finding-camera';
 import { FindingComment } from './finding-comment.entity';
 import { toFindingExport } from './finding-export-view';
@@ -57,10 +58,11 @@ export class FindingExchangeService {
       if (list) list.push(comment);
       else commentsOf.set(comment.findingId, [comment]);
     }
+    const acceptances = await acceptanceRecords(manager, findings);
     const exports: FindingExport[] = [];
     for (const finding of findings) {
       const snapshotPng = withSnapshots && finding.snapshotKey ? await this.storage.get(finding.snapshotKey) : undefined;
-      exports.push(toFindingExport({ finding, comments: commentsOf.get(finding.id) ?? [], snapshotPng }));
+      exports.push(toFindingExport({ finding, comments: commentsOf.get(finding.id) ?? [], snapshotPng, accepted: acceptances.get(finding.id) }));
     }
     return exports;
   }
@@ -106,7 +108,9 @@ export class FindingExchangeService {
       const targets = new Map(current.map((finding) => [finding.guid, finding]));
       const commentGuids = imported.topics.flatMap((topic) => topic.comments.map((comment) => comment.guid));
       const known = commentGuids.length === 0 ? [] : await manager.find(FindingComment, { where: { guid: In(commentGuids) }, select: { guid: true } });
-      const plan = planBcfImport(imported.topics, targets, new Set(known.map((comment) => comment.guid)), grants);
+      // The comments our exports write for acceptances are already in the findings, as their justification.
+      const knownGuids = new Set([...known.map((comment) => comment.guid), ...(await acceptanceCommentGuids(manager, projectId))]);
+      const plan = planBcfImport(imported.topics, targets, knownGuids, grants);
       if (plan.problems.length > 0) {
         const listed = plan.problems.slice(0, LISTED_PROBLEMS).map((problem) => problem.message).join(' ');
         const more = plan.problems.length > LISTED_PROBLEMS ? ` And ${plan.problems.length - LISTED_PROBLEMS} more.` : '';

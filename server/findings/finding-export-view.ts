@@ -9,6 +9,7 @@ import {
   type FindingKind as ExportKind,
   type FindingStatus as ExportStatus,
 } from './export/finding-export';
+import type { AcceptanceRecord } from './finding-acceptance';
 import type { FindingComment } from './finding-comment.entity';
 import { type FindingKind, type FindingStatus, findingReference } from './finding-fields';
 import type { Finding } from './finding.entity';
@@ -51,6 +52,8 @@ export interface FindingForExport {
   finding: Finding;
   comments: readonly FindingComment[];
   snapshotPng?: Buffer;
+  /** Who accepted it and when (finding-acceptance.ts), for an accepted finding. */
+  accepted?: AcceptanceRecord;
 }
 
 /** Who created it: the user's e-mail, or the product for findings a check run raised. */
@@ -60,7 +63,17 @@ function toExportComment(comment: FindingComment): ExportComment {
   return { guid: comment.guid, author: comment.author?.email ?? comment.authorEmail, date: comment.createdAt.toISOString(), text: comment.text };
 }
 
-export function toFindingExport({ finding, comments, snapshotPng }: FindingForExport): FindingExport {
+/** The reason of an accepted finding; one accepted without a history row shows the system on its last change. */
+function acceptanceOf(finding: Finding, accepted: AcceptanceRecord | undefined): FindingExport['acceptance'] {
+  if (finding.status !== 'accepted' || !finding.justification) return undefined;
+  return {
+    justification: finding.justification,
+    author: accepted?.email ?? SYSTEM_AUTHOR,
+    date: (accepted?.at ?? finding.updatedAt).toISOString(),
+  };
+}
+
+export function toFindingExport({ finding, comments, snapshotPng, accepted }: FindingForExport): FindingExport {
   const modified = finding.updatedAt.getTime() > finding.createdAt.getTime();
   return {
     id: findingReference(finding.number),
@@ -77,6 +90,7 @@ export function toFindingExport({ finding, comments, snapshotPng }: FindingForEx
     createdBy: finding.createdBy?.email ?? SYSTEM_AUTHOR,
     modifiedAt: modified ? finding.updatedAt.toISOString() : undefined,
     comments: comments.map(toExportComment),
+    acceptance: acceptanceOf(finding, accepted),
     memberGlobalIds: finding.memberGlobalIds,
     memberLabel: finding.memberLabel ?? undefined,
     utilisation: finding.utilisation ?? undefined,

@@ -8,6 +8,7 @@ import { finishedRun, listRunMemberResults, memberSheet } from '../checks/check-
 import { Project } from '../projects/project.entity';
 import type { CalculationSheetData, CheckReportData } from '../reports/check-report-data';
 import { buildCheckReport } from '../reports/check-report';
+import { acceptanceRecords } from './finding-acceptance';
 import { toFindingExport } from './finding-export-view';
 import { type RunMemberResult, conditionHolds, memberLabelOf } from './finding-sync-plan';
 import { Finding } from './finding.entity';
@@ -35,6 +36,7 @@ export class RunReportService {
     const findings = (await this.dataSource.getRepository(Finding).find({ where: { projectId }, relations: { assignee: true, createdBy: true }, order: { number: 'ASC' } })).filter(
       (finding) => raisedBy(finding, runId, resultsById),
     );
+    const acceptances = await acceptanceRecords(this.dataSource.manager, findings);
     const highest = results.find((result) => result.globalId === run.summary?.maxUtilisationGlobalId);
     const sheets: CalculationSheetData[] = [];
     for (const result of results) {
@@ -70,7 +72,7 @@ export class RunReportService {
       },
       summary: run.summary,
       highestMemberLabel: highest && memberLabelOf(highest),
-      findings: findings.map((finding) => toFindingExport({ finding, comments: [] })),
+      findings: findings.map((finding) => toFindingExport({ finding, comments: [], accepted: acceptances.get(finding.id) })),
       sheets,
       signOff: { prepared: { name: run.createdByName, date: run.finishedAt?.toISOString() } },
       generatedAt: now.toISOString(),

@@ -61,6 +61,17 @@ describe('buildCheckReport', () => {
     }
   });
 
+  it('prints the justification of an accepted finding with who accepted it and when', async () => {
+    const data = sampleCheckReport();
+    const acceptance = { justification: 'Stiffener pair on the fabrication drawings carries the bearing (invented).', author: 'lead@example.com', date: '2026-02-07T07:30:00Z' };
+    const findings = data.findings.map((finding) => (finding.status === 'accepted' ? { ...finding, acceptance } : finding));
+    const text = pdfPageTexts(await buildCheckReport({ ...data, findings }, { compress: false })).join(' ');
+    expect(text).toContain('Accepted findings and their justifications');
+    expect(text).toContain(acceptance.justification);
+    expect(text).toContain('lead@example.com');
+    expect(text).toContain('2026-02-07 07:30 UTC');
+  });
+
   it('writes Greek symbols with the Greek face instead of dropping them', () => {
     const sheetPage = pages.find((text) => text.includes('Calculation sheet — B-12')) ?? '';
     expect(sheetPage).toContain('γ');

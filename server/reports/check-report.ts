@@ -210,6 +210,20 @@ function findingsTable(doc: Pdf, data: CheckReportData): void {
       utilisationCell(finding.utilisation),
     ]),
   );
+  const accepted = data.findings.filter((finding) => finding.acceptance !== undefined);
+  if (accepted.length === 0) return;
+  // An accepted finding is closed without a change to the model: the reason is part of the record it stands on.
+  heading(doc, 'Accepted findings and their justifications');
+  table(
+    doc,
+    [
+      { header: 'Ref', weight: 0.7, role: 'mono' },
+      { header: 'Accepted by', weight: 2 },
+      { header: 'On', weight: 1.2 },
+      { header: 'Justification', weight: 5.3 },
+    ],
+    accepted.map(({ id, acceptance }) => [id, acceptance!.author, dateTimeText(acceptance!.date), acceptance!.justification]),
+  );
 }
 
 /** Room for the section drawing and τ(y) plot, and the margin kept around the outline for dimensions. */

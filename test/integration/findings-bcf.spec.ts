@@ -259,4 +259,37 @@ describe('findings as BCF', () => {
       });
     });
   });
+
+  describe('an accepted finding in every export', () => {
+    const justification = 'Bearing stiffener pair on sheet S-410 carries the reaction (invented scenario).';
+    let warning: Finding;
+
+    beforeAll(async () => {
+      warning = await app.dataSource.getRepository(Finding).findOneByOrFail({ projectId: team.project.id, kind: 'web-shear-warning' });
+      await reviewer.post(url(`/${warning.id}/transitions`)).send({ to: 'accepted', justification }).expect(200);
+    });
+
+    it.each(['2.1', '3.0'] as const)('BCF %s carries the justification as a comment of the topic with the reviewer and the date', async (version) => {
+      const { entries } = await exported(version);
+      const markup = entries.get(`${warning.guid}/markup.bcf`)!.toString();
+      expect(await schemaErrors(version, 'markup', 'markup.bcf', markup)).toEqual([]);
+      const accepted = await app.dataSource.getRepository(FindingChange).findOneByOrFail({ findingId: warning.id, field: 'justification' });
+      expect(markup).toMatch(
+        new RegExp(`<Comment Guid="[0-9a-f-]{36}">\\s*<Date>${accepted.at.toISOString()}</Date>\\s*<Author>${team.reviewer.email}</Author>\\s*<Comment>Accepted as it is: ${justification.replace(/[()]/g, '\\$&')}</Comment>`),
+      );
+    });
+
+    it('the CSV carries it in its own columns', async () => {
+      const response = await reviewer.get(url('/export.csv')).expect(200);
+      expect(response.text).toContain(`,${justification},${team.reviewer.email},`);
+    });
+
+    it('importing the export back adds no comment: the acceptance is recognised', async () => {
+      for (const version of ['2.1', '3.0'] as const) {
+        const { response } = await exported(version);
+        const result = await importing(reviewer, response.body as Buffer).expect(200);
+        expect(result.body.import).toMatchObject({ version, statusChanges: 0, commentsAdded: 0 });
+      }
+    });
+  });
 });

@@ -7,6 +7,7 @@
 import { ConflictError } from '../../http/errors';
 import type {
   ClippingPlane,
+  FindingAcceptance,
   FindingCamera,
   FindingComment,
   FindingExport,
@@ -126,6 +127,31 @@ function checkComment(comment: FindingComment, i: number, problem: FindingProble
   };
 }
 
+/**
+ * The comment that carries an acceptance into BCF, whose topics have no field for it. Its GUID is derived from the
+ * topic and the time of acceptance, so every export writes the same one and an import can recognise it.
+ */
+export function acceptanceCommentGuid(topicGuid: string, acceptedAt: string): string {
+  return nameBasedUuid(topicGuid, `acceptance ${new Date(acceptedAt).toISOString()}`);
+}
+
+function acceptanceComment(acceptance: FindingAcceptance, topicGuid: string, problem: FindingProblem): FindingComment {
+  const date = problem.dateTime(acceptance.date, 'acceptance.date');
+  return {
+    guid: acceptanceCommentGuid(topicGuid, date),
+    author: problem.text(acceptance.author, 'acceptance.author'),
+    date,
+    text: `Accepted as it is: ${problem.text(acceptance.justification, 'acceptance.justification')}`,
+  };
+}
+
+/** The finding's comments in date order, the acceptance among them. */
+function commentsOf(finding: FindingExport, topicGuid: string, problem: FindingProblem): FindingComment[] {
+  const comments = finding.comments.map((comment, i) => checkComment(comment, i, problem));
+  if (finding.acceptance) comments.push(acceptanceComment(finding.acceptance, topicGuid, problem));
+  return comments.sort((a, b) => Date.parse(a.date) - Date.parse(b.date));
+}
+
 export function checkFindingForBcf(finding: FindingExport, version: BcfVersion): CheckedFinding {
   const problem = new FindingProblem(finding.id, version);
   const guid = problem.uuid(finding.guid, 'guid');
@@ -140,7 +166,7 @@ export function checkFindingForBcf(finding: FindingExport, version: BcfVersion):
     createdAt: problem.dateTime(finding.createdAt, 'createdAt'),
     modifiedAt: problem.dateTime(finding.modifiedAt, 'modifiedAt'),
     dueDate: problem.dateTime(finding.dueDate, 'dueDate'),
-    comments: finding.comments.map((comment, i) => checkComment(comment, i, problem)),
+    comments: commentsOf(finding, guid, problem),
     memberGlobalIds: problem.globalIds(finding.memberGlobalIds, 'memberGlobalIds'),
     viewpoint: checkViewpoint(finding, guid, problem),
   };

@@ -89,6 +89,20 @@ describe.each(BCF_VERSIONS)('BCF %s export', (version) => {
     expect(visinfo).toContain(`<Component IfcGuid="${MEMBER_IDS.slabEdge}"`);
   });
 
+  it('writes the justification of an accepted finding as a comment with its author and date, valid against the XSD', async () => {
+    const acceptance = { justification: 'Bearing stiffener pair <12 mm> on the fabrication drawings (invented).', author: 'lead@example.com', date: '2026-02-07T08:30:00+01:00' };
+    const accepted: FindingExport = { ...SAMPLE_FINDINGS[2], acceptance };
+    const name = `${accepted.guid}/markup.bcf`;
+    const markup = entryText(version, name, [accepted]);
+    expect(await schemaErrors(version, 'markup', 'markup.bcf', markup)).toEqual([]);
+    const comment = /<Comment Guid="([0-9a-f-]{36})">\s*<Date>2026-02-07T07:30:00.000Z<\/Date>\s*<Author>lead@example.com<\/Author>\s*<Comment>Accepted as it is: Bearing stiffener pair &lt;12 mm&gt; on the fabrication drawings \(invented\).<\/Comment>/.exec(markup);
+    expect(comment).not.toBeNull();
+    // In date order among the topic's other comments, and the same GUID in every export.
+    expect(markup.indexOf('841e2817-dc72-4b63-abb6-38f0b1bfc064')).toBeLessThan(markup.indexOf(comment![1]));
+    expect(entryText(version, name, [accepted])).toContain(comment![1]);
+    if (version === '3.0') expect(entryText(version, 'extensions.xml', [accepted])).toContain('<User>lead@example.com</User>');
+  });
+
   it('derives the same viewpoint GUID every time when the finding has none', () => {
     const name = '9b40e785-20ff-4e40-abff-3b4140437fe1/viewpoint.bcfv';
     expect(entryText(version, name)).toEqual(entryText(version, name));

@@ -100,6 +100,15 @@ export interface FindingViewpoint {
   clippingPlanes?: readonly ClippingPlane[];
 }
 
+/** Why a finding was accepted as it is, who accepted it and when. */
+export interface FindingAcceptance {
+  justification: string;
+  /** E-mail address, as comment authors are written. */
+  author: string;
+  /** ISO 8601 date-time. */
+  date: string;
+}
+
 export interface FindingExport {
   /** Our reference shown to people (e.g. "F-0042"). */
   id: string;
@@ -119,6 +128,8 @@ export interface FindingExport {
   modifiedAt?: string;
   modifiedBy?: string;
   comments: readonly FindingComment[];
+  /** Present while the status is accepted: every export carries the reason beside the status. */
+  acceptance?: FindingAcceptance;
   /** IFC GlobalIds of the members the finding is about. */
   memberGlobalIds: readonly string[];
   /** How people name the member(s), e.g. "B-204 · IPE 300 · Level 2". */

@@ -33,6 +33,18 @@ describe('findingsCsv', () => {
     expect(first.Description).toBe(SAMPLE_FINDINGS[0].description);
   });
 
+  it('carries the justification of an accepted finding with who accepted it and when', () => {
+    const acceptance = { justification: 'Bearing stiffener pair shown on the fabrication drawings (invented scenario).', author: 'reviewer@example.com', date: '2026-02-06T11:00:00Z' };
+    const [header, row] = readBack(findingsCsv([{ ...SAMPLE_FINDINGS[2], acceptance }], { cautions: false }));
+    const cells = Object.fromEntries(header.map((column, i) => [column, row[i]]));
+    expect(cells).toMatchObject({
+      Status: 'Accepted',
+      'Accepted because': acceptance.justification,
+      'Accepted by': 'reviewer@example.com',
+      'Accepted (UTC)': '2026-02-06 11:00:00',
+    });
+  });
+
   it('uses CRLF line ends and a UTF-8 byte order mark', () => {
     const csv = findingsCsv(SAMPLE_FINDINGS.slice(1, 2), { cautions: false });
     expect(csv.charCodeAt(0)).toBe(0xfeff);
