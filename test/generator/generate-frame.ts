@@ -6,9 +6,11 @@
  * Options: --members N (default 100), --schema IFC4|IFC4X3|IFC4X3_RC2|IFC2X3 (IFC4; IFC4X3_RC2 writes IFC4X3 under
  * that old header name), --unit mm|m|inch|foot (mm), --defects (three broken beams on the first floor), --far (site
  * 485 km / 5270 km from the project origin), --patterns standard|real-exports (standard: see frame-writer.ts),
- * --bodies extruded|brep (extruded: every member's body an IfcFacetedBrep with brep).
+ * --bodies extruded|brep (extruded: every member's body an IfcFacetedBrep with brep), --analysis (IFC4 or IFC4X3 in mm or
+ * m: adds an invented analysis model with forces, see analysis-model-writer.ts, and writes them as <out>.forces.csv).
  */
 import * as fs from 'node:fs';
+import { addAnalysisModel } from './analysis-model-writer';
 import { frameLayout, type FrameLayout, type Vec3 } from './frame-layout';
 import { imperialSections, metricSections } from './frame-sections';
 import { type FrameBodies, type FramePatterns, type FrameSchema, type FrameUnit, FrameWriter, type HeaderSchema } from './frame-writer';
@@ -75,7 +77,18 @@ export function writeFrameFile(path: string, options: GenerateFrameOptions): Fra
   }
 }
 
-function parseArguments(argv: readonly string[]): GenerateFrameOptions & { out: string } {
+/** The frame with an analysis model (held in memory: analysis models are for small test frames), and its forces as CSV. */
+function writeFrameWithAnalysis(path: string, options: GenerateFrameOptions): FrameLayout {
+  const { schema = 'IFC4', unit = 'mm' } = options;
+  if ((schema !== 'IFC4' && schema !== 'IFC4X3') || (unit !== 'mm' && unit !== 'm')) throw new Error('--analysis is written in IFC4 or IFC4X3, in mm or m');
+  const layout = frameLayout(options.members);
+  const analysis = addAnalysisModel(generateFrame(options), layout, { schema, unit, siteOrigin_mm: options.siteOrigin_mm });
+  fs.writeFileSync(path, analysis.ifc);
+  fs.writeFileSync(path.replace(/\.ifc$/i, '') + '.forces.csv', analysis.csv);
+  return layout;
+}
+
+function parseArguments(argv: readonly string[]): GenerateFrameOptions & { out: string; analysis: boolean } {
   const value = (flag: string): string | undefined => {
     const i = argv.indexOf(flag);
     return i >= 0 ? argv[i + 1] : undefined;
@@ -101,6 +114,7 @@ function parseArguments(argv: readonly string[]): GenerateFrameOptions & { out: 
     unit: unit as FrameUnit,
     defects: argv.includes('--defects'),
     siteOrigin_mm: argv.includes('--far') ? FAR_SITE_ORIGIN_MM : undefined,
+    analysis: argv.includes('--analysis'),
     out,
   };
 }
@@ -108,7 +122,7 @@ function parseArguments(argv: readonly string[]): GenerateFrameOptions & { out: 
 if (require.main === module) {
   try {
     const options = parseArguments(process.argv.slice(2));
-    const layout = writeFrameFile(options.out, options);
+    const layout = options.analysis ? writeFrameWithAnalysis(options.out, options) : writeFrameFile(options.out, options);
     console.log(`${options.out}: ${layout.slots.length} members, ${layout.bays}×${layout.bays} bays, ${layout.storeys} storeys, ${options.schema}, ${options.unit}`);
   } catch (error) {
     console.error(error instanceof Error ? error.message : String(error));
