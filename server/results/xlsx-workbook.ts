@@ -32,15 +32,25 @@ export async function listXlsxSheets(path: string): Promise<XlsxSheet[]> {
     throw unreadableXlsx('it has no workbook part (xl/workbook.xml)');
   }
   const targets = new Map<string, string>();
-  for (const rel of asArray(xml.parse(relsXml)?.Relationships?.Relationship)) {
+  for (const rel of asArray(parsePart('xl/_rels/workbook.xml.rels', relsXml)?.Relationships?.Relationship)) {
     if (WORKSHEET_RELATIONSHIP.test(String(rel.Type))) targets.set(String(rel.Id), partPath(String(rel.Target)));
   }
   const sheets: XlsxSheet[] = [];
-  for (const sheet of asArray(xml.parse(workbookXml)?.workbook?.sheets?.sheet)) {
+  for (const sheet of asArray(parsePart('xl/workbook.xml', workbookXml)?.workbook?.sheets?.sheet)) {
     const part = targets.get(String(sheet.id));
     if (part) sheets.push({ name: String(sheet.name), part });
   }
   return sheets;
+}
+
+/** Spreadsheet programs never write a DOCTYPE in these parts; one is refused rather than its entities expanded. */
+function parsePart(name: string, text: string) {
+  if (/<!DOCTYPE/i.test(text)) throw unreadableXlsx(`${name} declares a DOCTYPE`);
+  try {
+    return xml.parse(text);
+  } catch {
+    throw unreadableXlsx(`${name} is not well-formed XML`);
+  }
 }
 
 /** Relationship targets are relative to xl/ unless absolute. */
