@@ -1,5 +1,6 @@
 import type { Request, RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { slowDown } from 'express-slow-down';
 import { RateLimitedError } from './errors';
 
 const MINUTE_ms = 60_000;
@@ -8,15 +9,28 @@ const MINUTE_ms = 60_000;
 export const RATE_LIMITS = {
   /** Failed sign-ins for one e-mail address from one client. */
   signInFailuresPerAccount: { limit: 10, windowMs: 15 * MINUTE_ms },
-  /** Failed sign-ins from one client across all addresses. */
-  signInFailuresPerClient: { limit: 50, windowMs: 15 * MINUTE_ms },
+  /**
+   * Failed sign-ins from one client across all addresses: past `delayAfter`, each answer waits one more step, up to
+   * the ceiling. Slowed, never blocked, so a team behind one address is not locked out by one person's failures.
+   */
+  signInSlowdownPerClient: { delayAfter: 20, stepMs: 500, maxDelayMs: 10_000, windowMs: 15 * MINUTE_ms },
   /** Unknown, expired or used invitation and reset tokens from one client. */
   tokenFailuresPerClient: { limit: 30, windowMs: 15 * MINUTE_ms },
   /** Password-reset e-mails requested for one address from one client (each sends mail). */
   resetRequestsPerAccount: { limit: 5, windowMs: 60 * MINUTE_ms },
 } as const;
 
-type Limit = (typeof RATE_LIMITS)[keyof typeof RATE_LIMITS];
+interface Limit {
+  limit: number;
+  windowMs: number;
+}
+
+interface Slowdown {
+  delayAfter: number;
+  stepMs: number;
+  maxDelayMs: number;
+  windowMs: number;
+}
 
 function limiter(limit: Limit, options: { byAccount: boolean; failuresOnly: boolean }): RequestHandler {
   return rateLimit({
@@ -29,10 +43,21 @@ function limiter(limit: Limit, options: { byAccount: boolean; failuresOnly: bool
   });
 }
 
-export function signInRateLimits(): RequestHandler[] {
+/** Per account a hard limit; per client a growing delay. Only failed sign-ins count. */
+export function signInRateLimits(
+  limits: { signInFailuresPerAccount: Limit; signInSlowdownPerClient: Slowdown } = RATE_LIMITS,
+): RequestHandler[] {
+  const client = limits.signInSlowdownPerClient;
   return [
-    limiter(RATE_LIMITS.signInFailuresPerAccount, { byAccount: true, failuresOnly: true }),
-    limiter(RATE_LIMITS.signInFailuresPerClient, { byAccount: false, failuresOnly: true }),
+    limiter(limits.signInFailuresPerAccount, { byAccount: true, failuresOnly: true }),
+    slowDown({
+      windowMs: client.windowMs,
+      delayAfter: client.delayAfter,
+      delayMs: (used) => (used - client.delayAfter) * client.stepMs,
+      maxDelayMs: client.maxDelayMs,
+      skipSuccessfulRequests: true,
+      keyGenerator: clientKey,
+    }),
   ];
 }
 
