@@ -2,12 +2,13 @@
  * What a BCF file brought back from another tool changes (the round trip): the status of each known topic and the
  * comments whose GUIDs are new. Titles, viewpoints and the rest stay as Taulens has them. Every status change is
  * checked against the workflow table for the importing user's role; one problem anywhere refuses the whole file.
- * Accepting needs a written justification, which BCF has no place for, so acceptance is only ever done in Taulens.
+ * Accepting needs a written justification, which BCF has no place for, so acceptance is only ever done in Taulens;
+ * resolving a failing finding needs a note of what was done, which a new comment of the topic in the file gives.
  */
 import type { Action } from '../auth/permissions';
 import { DomainError } from '../http/errors';
 import type { ImportedTopic } from './bcf/bcf-import';
-import { FINDING_LIMITS, type FindingStatus, findingReference } from './finding-fields';
+import { FINDING_LIMITS, type FindingKind, type FindingStatus, findingReference } from './finding-fields';
 import { fromExportStatus, statusLabel } from './finding-export-view';
 import { checkTransition } from './finding-workflow';
 import { FINDING_STATUS_LABELS } from './export/finding-export';
@@ -18,6 +19,7 @@ export interface ImportTarget {
   number: number;
   guid: string;
   status: FindingStatus;
+  kind: FindingKind;
 }
 
 export interface PlannedStatusChange {
@@ -53,7 +55,7 @@ export interface BcfImportPlan {
 
 const OUR_STATUS_LABELS = Object.values(FINDING_STATUS_LABELS).join(', ');
 
-function statusChangeOf(topic: ImportedTopic, target: ImportTarget, grants: (action: Action) => boolean): PlannedStatusChange | string | null {
+function statusChangeOf(topic: ImportedTopic, target: ImportTarget, note: string, grants: (action: Action) => boolean): PlannedStatusChange | string | null {
   if (topic.status === undefined) return null;
   if (topic.statusId === undefined) {
     return `its status "${topic.status}" is not one Taulens uses (${OUR_STATUS_LABELS}).`;
@@ -64,7 +66,7 @@ function statusChangeOf(topic: ImportedTopic, target: ImportTarget, grants: (act
     return `it is marked ${statusLabel(to)} in the file; accept findings in Taulens, where a written justification is asked for.`;
   }
   try {
-    checkTransition({ from: target.status, to }, grants);
+    checkTransition({ from: target.status, to, note, failing: target.kind === 'web-shear-fail' }, grants);
   } catch (error) {
     if (error instanceof DomainError) return error.message;
     throw error;
@@ -91,10 +93,6 @@ export function planBcfImport(
     const finding = findingReference(target.number);
     const problem = (message: string) => plan.problems.push({ topicGuid: topic.guid, finding, message: `${finding}: ${message}` });
 
-    const change = statusChangeOf(topic, target, grants);
-    if (typeof change === 'string') problem(change);
-    else if (change) plan.statusChanges.push(change);
-
     let added = 0;
     for (const comment of topic.comments) {
       if (knownCommentGuids.has(comment.guid) || seenComments.has(comment.guid)) continue;
@@ -113,6 +111,10 @@ export function planBcfImport(
       plan.comments.push({ findingId: target.id, guid: comment.guid, authorEmail: author, text, createdAt });
       added++;
     }
+    const note = plan.comments.slice(plan.comments.length - added).map((comment) => comment.text).join('\n');
+    const change = statusChangeOf(topic, target, note, grants);
+    if (typeof change === 'string') problem(change);
+    else if (change) plan.statusChanges.push(change);
     if (change === null && added === 0) plan.unchanged++;
   }
   return plan;

@@ -104,7 +104,7 @@ export class FindingExchangeService {
     const grants = (action: Action) => can(access, action);
 
     const { summary, notices } = await runTransaction(this.dataSource, async (manager) => {
-      const current = await manager.find(Finding, { where: { projectId }, select: { id: true, number: true, guid: true, status: true } });
+      const current = await manager.find(Finding, { where: { projectId }, select: { id: true, number: true, guid: true, status: true, kind: true } });
       const targets = new Map(current.map((finding) => [finding.guid, finding]));
       const commentGuids = imported.topics.flatMap((topic) => topic.comments.map((comment) => comment.guid));
       const known = commentGuids.length === 0 ? [] : await manager.find(FindingComment, { where: { guid: In(commentGuids) }, select: { guid: true } });

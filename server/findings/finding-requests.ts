@@ -70,6 +70,8 @@ export const transitionInput = {
   body: z.strictObject({
     to: z.enum(FINDING_STATUSES, `must be one of ${FINDING_STATUSES.join(', ')}`),
     justification: z.string().max(FINDING_LIMITS.justification, `is too long (at most ${FINDING_LIMITS.justification} characters)`).optional(),
+    /** What was done, kept as a comment; required to resolve a failing finding. */
+    note: z.string().trim().max(FINDING_LIMITS.comment, `is too long (at most ${FINDING_LIMITS.comment} characters)`).optional(),
   }),
 };
 

@@ -98,6 +98,12 @@ async function requireMember(manager: EntityManager, projectId: string, userId: 
   return member as ProjectMember & { user: NonNullable<ProjectMember['user']> };
 }
 
+async function insertComment(manager: EntityManager, findingId: string, text: string, actor: FindingActor): Promise<string> {
+  const id = randomUUID();
+  await manager.insert(FindingComment, { id, findingId, guid: randomUUID(), authorId: actor.id, authorEmail: actor.email, text, createdAt: new Date() });
+  return id;
+}
+
 async function nextNumber(manager: EntityManager, projectId: string): Promise<number> {
   return ((await manager.maximum(Finding, 'number', { projectId })) ?? 0) + 1;
 }
@@ -216,15 +222,17 @@ export class FindingService {
   async transition(
     projectId: string,
     findingId: string,
-    request: { to: FindingStatus; justification?: string },
+    request: { to: FindingStatus; justification?: string; note?: string },
     access: FindingAccess,
     actor: FindingActor,
   ): Promise<FindingView> {
     const notice = await runTransaction(this.dataSource, async (manager): Promise<FindingNotice> => {
       const finding = await loadFinding(manager, projectId, findingId);
       const from = finding.status;
-      const justification = checkTransition({ from, to: request.to, justification: request.justification }, grantsOf(access));
+      const failing = finding.kind === 'web-shear-fail';
+      const justification = checkTransition({ from, to: request.to, justification: request.justification, note: request.note, failing }, grantsOf(access));
       await manager.update(Finding, findingId, { status: request.to, justification });
+      if (request.note) await insertComment(manager, findingId, request.note, actor);
       const history: ChangeEntry[] = [{ findingId, field: 'status', from, to: request.to }];
       if (justification !== null || finding.justification !== null) {
         history.push({ findingId, field: 'justification', from: finding.justification, to: justification });
@@ -239,16 +247,7 @@ export class FindingService {
   async addComment(projectId: string, findingId: string, text: string, actor: FindingActor): Promise<CommentView> {
     const { commentId, mentionedIds } = await runTransaction(this.dataSource, async (manager) => {
       await loadFinding(manager, projectId, findingId);
-      const commentId = randomUUID();
-      await manager.insert(FindingComment, {
-        id: commentId,
-        findingId,
-        guid: randomUUID(),
-        authorId: actor.id,
-        authorEmail: actor.email,
-        text,
-        createdAt: new Date(),
-      });
+      const commentId = await insertComment(manager, findingId, text, actor);
       const members = await manager.find(ProjectMember, { where: { projectId }, relations: { user: true } });
       const people = members.flatMap((m) => (m.user ? [m.user] : []));
       return { commentId, mentionedIds: mentionedMembers(text, people).map((user) => user.id) };

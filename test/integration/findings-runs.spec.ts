@@ -118,6 +118,18 @@ describe('findings from check runs', () => {
     await syncFindingsForRun(app.dataSource, projectId, later.id);
     const kept = await failFinding();
     expect(kept).toMatchObject({ status: 'accepted', justification, runId: accepted.runId, utilisation: accepted.utilisation, description: accepted.description });
+    const report = await reviewer
+      .get(`${checksUrl(projectId)}/${later.id}/report.pdf`)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (chunk: Buffer) => chunks.push(chunk));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
+    const text = pdfPageTexts(report.body as Buffer).join(' ');
+    expect(text).toContain('Accepted findings and their justifications');
+    expect(text).toContain(justification);
 
     await reviewer.post(findingsUrl(projectId, `/${accepted.id}/transitions`)).send({ to: 'open' }).expect(200);
     await syncFindingsForRun(app.dataSource, projectId, later.id);
@@ -144,7 +156,8 @@ describe('findings from check runs', () => {
   it('moves the finding to Ready to verify when a newer revision passes, telling the assignee', async () => {
     const finding = await failFinding();
     await coordinator.patch(findingsUrl(projectId, `/${finding.id}`)).send({ assigneeId: team.engineer.id }).expect(200);
-    await engineer.post(findingsUrl(projectId, `/${finding.id}/transitions`)).send({ to: 'resolved' }).expect(200);
+    await engineer.post(findingsUrl(projectId, `/${finding.id}/transitions`)).send({ to: 'resolved' }).expect(400);
+    await engineer.post(findingsUrl(projectId, `/${finding.id}/transitions`)).send({ to: 'resolved', note: 'Section changed to HE 400 B in revision 2.' }).expect(200);
 
     const secondRun = await checkRevision('depot-frame-rev-2.ifc', 15);
     await afterSync(secondRun.id);

@@ -1,6 +1,7 @@
 import { readdir } from 'node:fs/promises';
 import path from 'node:path';
 import { FindingChange } from '../../server/findings/finding-change.entity';
+import { FindingComment } from '../../server/findings/finding-comment.entity';
 import { Finding } from '../../server/findings/finding.entity';
 import { FINDING_STATUSES, type FindingStatus } from '../../server/findings/finding-fields';
 import type { ApiAgent } from '../fixtures/api-agent';
@@ -118,6 +119,23 @@ describe('findings', () => {
         ['status', 'accepted', 'open'],
         ['justification', justification, null],
       ]);
+    });
+
+    it('asks what was done before a failing finding is resolved, and keeps the note as a comment', async () => {
+      const [id] = await insertFindings(app.dataSource, team.project.id, ['in-progress']);
+      await app.dataSource.getRepository(Finding).update(id, { kind: 'web-shear-fail', utilisation: 1.22 });
+      for (const note of [undefined, '   ']) {
+        const refused = await as('engineer').post(url(`/${id}/transitions`)).send({ to: 'resolved', ...(note !== undefined && { note }) }).expect(400);
+        expect(refused.body.error).toMatchObject({ code: 'resolution_note_required', details: [expect.objectContaining({ field: 'note' })] });
+      }
+      expect((await stored(id)).status).toBe('in-progress');
+      expect(await historyOf(id)).toEqual([]);
+
+      const note = 'Web doubler plate 10 mm added on both sides, see revision 3 of sheet S-220.';
+      await as('engineer').post(url(`/${id}/transitions`)).send({ to: 'resolved', note: `  ${note} ` }).expect(200);
+      expect((await stored(id)).status).toBe('resolved');
+      const comments = await app.dataSource.getRepository(FindingComment).find({ where: { findingId: id } });
+      expect(comments.map((comment) => [comment.authorId, comment.text])).toEqual([[team.engineer.id, note]]);
     });
 
     it('returns 400 for a status that does not exist', async () => {
