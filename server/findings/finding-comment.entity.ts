@@ -10,7 +10,7 @@ export class FindingComment extends FindingPart {
   @Column({ type: String, length: 36 })
   guid: string;
 
-  /** Null when an imported comment's author is not a Taulens user. */
+  /** The user who wrote it, or for an imported comment the user who imported it; null once that account is deleted. */
   @Column({ type: String, nullable: true })
   authorId: string | null;
 
@@ -18,7 +18,10 @@ export class FindingComment extends FindingPart {
   @JoinColumn({ name: 'authorId' })
   author?: User | null;
 
-  /** The author as BCF names them (an e-mail address), kept for imported comments. */
+  /**
+   * The author's address when it was written, shown once the account is gone. A BCF file's own author and date are
+   * quoted in the text, never stored here.
+   */
   @Column({ type: String, length: 254 })
   authorEmail: string;
 

@@ -12,6 +12,7 @@ import { Project } from '../projects/project.entity';
 import type { FileStorage } from '../storage/file-storage';
 import { exportBcf } from './bcf/bcf-export';
 import { importBcf, rejectUnknown } from './bcf/bcf-import';
+import { importedCommentRow } from './bcf/bcf-imported-comment';
 import type { BcfVersion } from './bcf/bcf-version';
 import type { BcfImportSummary } from './finding-api-types';
 import { planBcfImport } from './bcf-import-plan';
@@ -26,7 +27,6 @@ import { filteredFindings } from './finding-query';
 import type { FindingFilters } from './finding-requests';
 import type { FindingAccess, FindingActor } from './finding.service';
 import { Finding } from './finding.entity';
-import { User } from '../users/user.entity';
 
 export interface ExportFile {
   fileName: string;
@@ -122,9 +122,8 @@ export class FindingExchangeService {
       for (const change of plan.statusChanges) {
         await manager.update(Finding, change.findingId, { status: change.to, ...(change.clearsJustification && { justification: null }) });
       }
-      const authors = await manager.find(User, { where: { email: In([...new Set(plan.comments.map((c) => c.authorEmail))]) }, select: { id: true, email: true } });
-      const authorIds = new Map(authors.map((user) => [user.email, user.id]));
-      const rows = plan.comments.map((comment) => ({ ...comment, authorId: authorIds.get(comment.authorEmail) ?? null }));
+      const importedAt = new Date();
+      const rows = plan.comments.map((comment) => importedCommentRow(comment, actor, importedAt));
       for (let start = 0; start < rows.length; start += INSERT_CHUNK) await manager.insert(FindingComment, rows.slice(start, start + INSERT_CHUNK));
       await recordChanges(
         manager,

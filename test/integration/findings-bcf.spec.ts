@@ -160,12 +160,54 @@ describe('findings as BCF', () => {
       const change = await app.dataSource.getRepository(FindingChange).findOneByOrFail({ findingId: manualId, field: 'status' });
       expect(change).toMatchObject({ actorId: team.engineer.id, source: 'bcf-import', fromValue: 'open', toValue: 'in-progress' });
       const comment = await app.dataSource.getRepository(FindingComment).findOneByOrFail({ guid: commentGuid });
-      expect(comment).toMatchObject({ findingId: manualId, authorId: team.engineer.id, text: 'Opening moved 400 mm away from the support.' });
-      expect(comment.createdAt.toISOString()).toBe('2027-01-10T09:30:00.000Z');
+      expect(comment).toMatchObject({
+        findingId: manualId,
+        authorId: team.engineer.id,
+        text: `from BCF: “${team.engineer.email}”, 2027-01-10T09:30:00.000Z\n\nOpening moved 400 mm away from the support.`,
+      });
 
       // The same file again changes nothing more.
       const again = await importing(engineer, await rezip(entries)).expect(200);
       expect(again.body.import).toMatchObject({ statusChanges: 0, commentsAdded: 0, unchanged: 3 });
+    });
+
+    it('never shows an imported comment as written by someone else: the importer is its author, the file’s author and date are quoted', async () => {
+      const { entries } = await exported('2.1');
+      const manual = await app.dataSource.getRepository(Finding).findOneByOrFail({ id: manualId });
+      const markupName = `${manual.guid}/markup.bcf`;
+      const [asReviewer, asOutsider] = [randomUUID(), randomUUID()];
+      const comment = (guid: string, author: string, date: string, text: string) =>
+        `<Comment Guid="${guid}"><Date>${date}</Date><Author>${author}</Author><Comment>${text}</Comment></Comment>`;
+      const returned = entries
+        .get(markupName)!
+        .toString()
+        .replace(
+          '</Topic>',
+          `</Topic>${comment(asReviewer, team.reviewer.email, '2020-02-02T08:00:00Z', 'Approved, no stiffener needed.')}` +
+            comment(asOutsider, 'Site.Manager@Elsewhere.test', '2021-03-04T05:06:07+02:00', 'Fabricated as drawn.'),
+        );
+      entries.set(markupName, Buffer.from(returned));
+
+      const before = Date.now();
+      await importing(engineer, await rezip(entries)).expect(200);
+      const comments = app.dataSource.getRepository(FindingComment);
+      const reviewerWords = await comments.findOneByOrFail({ guid: asReviewer });
+      expect(reviewerWords).toMatchObject({
+        authorId: team.engineer.id,
+        authorEmail: team.engineer.email,
+        text: `from BCF: “${team.reviewer.email}”, 2020-02-02T08:00:00.000Z\n\nApproved, no stiffener needed.`,
+      });
+      expect(reviewerWords.createdAt.getTime()).toBeGreaterThanOrEqual(before - 1000);
+      const outsiderWords = await comments.findOneByOrFail({ guid: asOutsider });
+      expect(outsiderWords).toMatchObject({
+        authorId: team.engineer.id,
+        text: 'from BCF: “site.manager@elsewhere.test”, 2021-03-04T03:06:07.000Z\n\nFabricated as drawn.',
+      });
+
+      const shown = await reviewer.get(url(`/${manualId}`)).expect(200);
+      const byGuid = new Map(shown.body.comments.map((c: { guid: string }) => [c.guid, c]));
+      expect(byGuid.get(asReviewer)).toMatchObject({ author: { id: team.engineer.id, name: team.engineer.name } });
+      expect(byGuid.get(asOutsider)).toMatchObject({ author: { id: team.engineer.id, name: team.engineer.name } });
     });
 
     it('imports an unchanged BCF 3.0 export as unchanged', async () => {
