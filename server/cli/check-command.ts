@@ -28,16 +28,17 @@ import type { MemberRecord, ModelInfo } from '../ifc/model-read-result';
 import { readModel } from '../ifc/read-model';
 import { percentText, STANDARD_LABELS } from '../reports/report-format';
 import { REPORT_CAUTIONS_TEXT } from '../reports/report-cautions';
-import { MEMBER_KEY_KINDS, type MemberKeyKind, parseColumnMapping } from '../results/column-mapping';
+import { MEMBER_KEY_KINDS, type MemberKeyKind } from '../results/column-mapping';
 import { governingShearsByMember } from '../results/governing-shear';
 import { type MatchReport, matchResultsToMembers } from '../results/member-matching';
 import { ResultsFileError } from '../results/results-file-error';
 import { importResultsFile } from '../results/results-import';
-import { previewResultsFile } from '../results/results-preview';
-import { type Command, type CommandIo, optionValue, positionals, UsageError } from './command';
+import { MOMENT_UNITS, type MomentUnit } from '../results/unit-words';
+import { type Command, type CommandIo, optionValue, optionValues, positionals, UsageError } from './command';
+import { forcesMapping } from './forces-mapping';
 import { type ListedMember, listedMember } from './member-listing';
 
-const VALUE_FLAGS = ['--forces', '--force-unit', '--length-unit', '--standard', '--sheet', '--member-key', '--default-grade', '--yield-rule', '--bcf'];
+const VALUE_FLAGS = ['--forces', '--mapping', '--force-unit', '--length-unit', '--moment-unit', '--standard', '--sheet', '--member-key', '--default-grade', '--yield-rule', '--bcf'];
 const SWITCHES = ['--json'];
 const YIELD_RULES: readonly EnYieldRule[] = ['en10025-2', 'en1993-1-1-table-3.1'];
 /** Unmatched force keys listed on stderr before "and N more". */
@@ -45,9 +46,10 @@ const LISTED_KEYS = 10;
 /** Namespace of the BCF topic GUIDs this command derives from the model and member, so a re-export keeps them. */
 const TOPIC_NAMESPACE = '6f1d3c52-8a4e-4b7f-9c21-3e5a7d90b4c8';
 
-const USAGE = `usage: taulens check <model.ifc | model.ifczip> --forces <forces.csv | forces.xlsx>
+const USAGE = `usage: taulens check <model.ifc | model.ifczip> --forces <forces.csv | forces.xlsx> [--mapping <mapping.json>]
                      --force-unit ${FORCE_UNITS.join('|')} --standard ${STANDARDS.join('|')}
-                     [--json] [--bcf out.bcf] [--length-unit ${LENGTH_UNITS.join('|')}] [--sheet <name>]
+                     [--json] [--bcf out.bcf] [--length-unit ${LENGTH_UNITS.join('|')}]
+                     [--moment-unit ${MOMENT_UNITS.join('|')}] [--sheet <name> …]
                      [--member-key ${MEMBER_KEY_KINDS.join('|')}] [--default-grade ${GRADE_IDS.join('|')}]
                      [--yield-rule ${YIELD_RULES.join('|')}]
 
@@ -57,32 +59,39 @@ with EN 1993-1-5 §5, with the code's recommended factors.
 
 The forces file is CSV (any delimiter) or XLSX. Its header names the columns; the default format is
   member,combination,shear          (optionally station)
-where member is the GlobalId or the Tag of the IFC member (Name also matches). Each member takes, per combination,
-the largest |shear| over its stations.
+where member is the GlobalId or the Tag of the IFC member (Name also matches). Usual export names are recognised
+(station: x, pos, position, station, dist, distance, location, s; shear along the web: shear, V, Vz, Fz, Q; Vy, My,
+Mz; load case; envelope max/min), as are one column per combination and units in brackets or in a units row. When
+the columns cannot be told apart for certain the command stops and prints the mapping to write for --mapping.
+Each member takes, per combination, the largest |shear| over its stations.
 
   --forces          the shear forces file (required)
-  --force-unit      unit of the shear column (required unless the header says it, e.g. 'V [kN]')
+  --mapping         a column mapping (JSON, the format of a saved web mapping template) instead of detection
+  --force-unit      unit of the shear column (required unless the header or the mapping says it, e.g. 'V [kN]')
   --standard        the design code (required)
   --json            print {model, cautions, standard, …, unmatchedForces, members:[…]} as JSON instead of a table
   --bcf out.bcf     also write one BCF 2.1 topic per failing member
   --length-unit     unit of the station column (default mm)
-  --sheet           the worksheet of an XLSX file with several
+  --moment-unit     unit of the moment columns, when the header does not say it (else they are not read)
+  --sheet           the worksheet of an XLSX file with several; repeat it to read several sheets alike
   --member-key      what the member column holds (default auto: GlobalId, then Tag, then Name)
   --default-grade   grade for members whose material names none (default S355 for EN, A992 for AISC)
   --yield-rule      EN yield strength by thickness: EN 10025-2 bands (default) or EN 1993-1-1 Table 3.1
 
 Per member, status is 'pass', 'fail', 'not-checked' (no forces, or no usable section) or 'not-applicable' (not an
-I-section); governing gives the combination with the highest utilisation.
+I-section); governing gives the combination with the highest utilisation and the station (m) of its shear.
 Exit status: 0 every checked member passes, 1 any member fails, 2 bad input (the message is on stderr).`;
 
 interface CheckArguments {
   model: string;
   forces: string;
+  mappingFile?: string;
   forceUnit?: ForceUnit;
-  lengthUnit: LengthUnit;
+  lengthUnit?: LengthUnit;
+  momentUnit?: MomentUnit;
   standard: Standard;
-  sheet?: string;
-  memberKey: MemberKeyKind;
+  sheets: string[];
+  memberKey?: MemberKeyKind;
   defaultGrade?: GradeId;
   yieldRule: EnYieldRule;
   json: boolean;
@@ -106,35 +115,25 @@ function parse(args: readonly string[]): CheckArguments {
   if (!standard) throw new UsageError(`--standard is required: one of ${STANDARDS.join(', ')}`);
   const defaultGrade = optionValue(args, '--default-grade');
   if (defaultGrade !== undefined && !isGradeId(defaultGrade)) throw new UsageError(`--default-grade must be one of ${GRADE_IDS.join(', ')}, got '${defaultGrade}'`);
-  for (const file of [files[0], forces]) {
+  const mappingFile = optionValue(args, '--mapping');
+  for (const file of [files[0], forces, ...(mappingFile ? [mappingFile] : [])]) {
     if (!fs.existsSync(file) || !fs.statSync(file).isFile()) throw new UsageError(`no such file: ${file}`);
   }
   return {
     model: files[0],
     forces,
+    mappingFile,
     forceUnit: oneOf('--force-unit', optionValue(args, '--force-unit'), FORCE_UNITS),
-    lengthUnit: oneOf('--length-unit', optionValue(args, '--length-unit'), LENGTH_UNITS) ?? 'mm',
+    lengthUnit: oneOf('--length-unit', optionValue(args, '--length-unit'), LENGTH_UNITS),
+    momentUnit: oneOf('--moment-unit', optionValue(args, '--moment-unit'), MOMENT_UNITS),
     standard,
-    sheet: optionValue(args, '--sheet'),
-    memberKey: oneOf('--member-key', optionValue(args, '--member-key'), MEMBER_KEY_KINDS) ?? 'auto',
+    sheets: optionValues(args, '--sheet'),
+    memberKey: oneOf('--member-key', optionValue(args, '--member-key'), MEMBER_KEY_KINDS),
     defaultGrade,
     yieldRule: oneOf('--yield-rule', optionValue(args, '--yield-rule'), YIELD_RULES) ?? 'en10025-2',
     json: args.includes('--json'),
     bcf: optionValue(args, '--bcf'),
   };
-}
-
-/** The mapping from the forces file's header: the default format or the usual names, the units from the options. */
-async function mappingFor(options: CheckArguments) {
-  const { headers, guess } = await previewResultsFile(options.forces, { sheet: options.sheet, rowLimit: 1 });
-  const missing = guess.missing.filter((field) => field.endsWith('Column'));
-  if (missing.length > 0) {
-    const names = missing.map((field) => field.replace('Column', '')).join(', ');
-    throw new UsageError(`the forces file has no ${names} column (its columns: ${headers.join(', ')}); use the header member,combination,shear (optionally station)`);
-  }
-  const forceUnit = options.forceUnit ?? guess.mapping.forceUnit;
-  if (!forceUnit) throw new UsageError(`--force-unit is required: the header does not say the unit of '${guess.mapping.shearColumn}'`);
-  return parseColumnMapping({ ...guess.mapping, forceUnit, lengthUnit: guess.mapping.lengthUnit ?? options.lengthUnit, memberKeyKind: options.memberKey });
 }
 
 function isZip(file: string): boolean {
@@ -160,7 +159,7 @@ async function readMembers(options: CheckArguments, parameters: CheckParameters,
 
 interface CheckedMember extends Omit<ListedMember, 'status'> {
   status: MemberCheck['status'];
-  governing: { combination: string; VEd_kN: number; VRd_kN: number; utilisation: number; tauMax_MPa: number; tauAvgWeb_MPa: number } | null;
+  governing: { combination: string; station_m: number | null; VEd_kN: number; VRd_kN: number; utilisation: number; tauMax_MPa: number; tauAvgWeb_MPa: number } | null;
 }
 
 function checkedMember(record: MemberRecord, check: MemberCheck): CheckedMember {
@@ -174,6 +173,7 @@ function checkedMember(record: MemberRecord, check: MemberCheck): CheckedMember 
     flags: [...new Set([...listed.flags, ...check.flags])],
     governing: governing && {
       combination: governing.combination,
+      station_m: governing.station_mm === undefined ? null : governing.station_mm / 1000,
       VEd_kN: governing.VEd_N / 1000,
       VRd_kN: governing.VRd_N / 1000,
       utilisation: governing.utilisation,
@@ -246,7 +246,7 @@ function warnAboutMatching(report: MatchReport, model: ModelInfo, io: CommandIo)
 }
 
 function table(model: ModelInfo, standard: Standard, members: readonly CheckedMember[], run: CheckRunComputation): string {
-  const header = ['GlobalId'.padEnd(22), 'Tag'.padEnd(10), 'Profile'.padEnd(16), 'Status'.padEnd(14), 'Combination'.padEnd(14), 'VEd kN'.padStart(9), 'VRd kN'.padStart(9), 'Util.'.padStart(8)];
+  const header = ['GlobalId'.padEnd(22), 'Tag'.padEnd(10), 'Profile'.padEnd(16), 'Status'.padEnd(14), 'Combination'.padEnd(14), 'At m'.padStart(7), 'VEd kN'.padStart(9), 'VRd kN'.padStart(9), 'Util.'.padStart(8)];
   const lines = [`${model.fileName}: web shear by ${STANDARD_LABELS[standard]}`, '', header.join('  '), header.map((h) => '-'.repeat(h.length)).join('  ')];
   for (const member of members) {
     const g = member.governing;
@@ -257,6 +257,7 @@ function table(model: ModelInfo, standard: Standard, members: readonly CheckedMe
         (member.profile?.name ?? '').slice(0, 16).padEnd(16),
         member.status.padEnd(14),
         (g?.combination ?? '').slice(0, 14).padEnd(14),
+        (g?.station_m != null ? g.station_m.toFixed(2) : '').padStart(7),
         (g ? Math.abs(g.VEd_kN).toFixed(1) : '').padStart(9),
         (g ? g.VRd_kN.toFixed(1) : '').padStart(9),
         (g ? percentText(g.utilisation) : '').padStart(8),
@@ -275,8 +276,8 @@ async function run(args: readonly string[], io: CommandIo): Promise<number> {
   const parameters = checkParametersSchema.parse({ standard: options.standard, ...(options.defaultGrade && { defaultGrade: options.defaultGrade }), ...(options.standard === 'en1993-1-1' && { yieldRule: options.yieldRule }) });
   const scratch = fs.mkdtempSync(path.join(os.tmpdir(), 'taulens-check-'));
   try {
-    const mapping = await mappingFor(options);
-    const { summary, governing } = await importResultsFile(options.forces, mapping, options.sheet);
+    const mapping = await forcesMapping(options);
+    const { summary, governing } = await importResultsFile(options.forces, mapping, mapping.sheets ? undefined : options.sheets[0]);
     const { model, members: records } = await readMembers(options, parameters, scratch);
     const report = matchResultsToMembers(summary.memberKeys, records, { keyKind: mapping.memberKeyKind });
     warnAboutMatching(report, model, io);
@@ -296,7 +297,7 @@ async function run(args: readonly string[], io: CommandIo): Promise<number> {
         standard: options.standard,
         parameters,
         engineVersion: engineVersion(),
-        forces: { fileName: path.basename(options.forces), sha256: sha256Of(options.forces), rows: summary.rowCount, keys: summary.memberKeys.length, combinations: summary.combinations, forceUnit: mapping.forceUnit },
+        forces: { fileName: path.basename(options.forces), sha256: sha256Of(options.forces), rows: summary.rowCount, keys: summary.memberKeys.length, combinations: summary.combinations, forceUnit: mapping.forceUnit, mapping },
         summary: computed.summary,
         unmatchedForces: report.unmatchedKeys,
         ambiguousForces: report.ambiguous.map((match) => ({ key: match.memberKey, candidates: match.candidates })),

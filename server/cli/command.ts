@@ -34,6 +34,18 @@ export function optionValue(args: readonly string[], flag: string): string | und
   return value;
 }
 
+/** Every value of a flag that may be given several times (`--sheet A --sheet B`), in order. */
+export function optionValues(args: readonly string[], flag: string): string[] {
+  const values: string[] = [];
+  args.forEach((arg, at) => {
+    if (arg !== flag) return;
+    const value = args[at + 1];
+    if (value === undefined || value.startsWith('--')) throw new UsageError(`${flag} needs a value`);
+    values.push(value);
+  });
+  return values;
+}
+
 /** Arguments that are neither flags nor flag values. */
 export function positionals(args: readonly string[], flagsWithValues: readonly string[]): string[] {
   const out: string[] = [];

@@ -39,6 +39,24 @@ describe('parseColumnMapping', () => {
     expect(error.message).toContain("shearColumn: column 'Member' is already used for memberColumn");
   });
 
+  it('needs a source of the combination and, unless one column per combination is mapped, a shear column', () => {
+    const error = errorOf(() => parseColumnMapping({ memberColumn: 'member', forceUnit: 'kN' }));
+    expect(error.message).toContain('combinationColumn: choose the load combination column (or an envelope column, one column per combination, or combinationFromSheet)');
+    expect(error.message).toContain('shearColumn: choose the shear force column');
+    expect(parseColumnMapping({ memberColumn: 'member', combinationColumns: ['CO1', 'CO2'], forceUnit: 'kN' }).combinationColumns).toEqual(['CO1', 'CO2']);
+    expect(parseColumnMapping({ ...minimal, combinationColumn: undefined, envelopeColumn: 'Envelope' }).envelopeColumn).toBe('Envelope');
+  });
+
+  it('refuses a shear column beside one column per combination, and moments without their unit', () => {
+    const wide = errorOf(() => parseColumnMapping({ memberColumn: 'member', combinationColumns: ['CO1'], shearColumn: 'V', forceUnit: 'kN' }));
+    expect(wide.message).toContain('shearColumn: leave it out: with one column per combination, those columns hold the shear along the web');
+    const moment = errorOf(() => parseColumnMapping({ ...minimal, majorMomentColumn: 'My' }));
+    expect(moment.message).toContain('momentUnit: choose the unit of the moment columns');
+    expect(errorOf(() => parseColumnMapping({ ...minimal, majorMomentColumn: 'My', momentUnit: 'tm' })).message).toContain(
+      'momentUnit: unknown moment unit "tm"; use one of Nmm, Nm, kNm, kip-in, kip-ft, lbf-in, lbf-ft',
+    );
+  });
+
   it('refuses fields it does not know (a template from elsewhere)', () => {
     expect(() => parseColumnMapping({ ...minimal, momentColumn: 'M' })).toThrow(/momentColumn/);
   });
@@ -69,6 +87,13 @@ describe('resolveColumns', () => {
     expect(error.details.columns).toEqual(['member', 'combination', 'shear']);
   });
 
+  it('names the combination of each wide column without its unit and shear word, and refuses two columns of one name', () => {
+    const wide = parseColumnMapping({ memberColumn: 'member', combinationColumns: ['Vz CO1 [kN]', 'CO2 V', 'ULS 3'], forceUnit: 'kN' });
+    expect(resolveColumns(wide, ['member', 'Vz CO1 [kN]', 'CO2 V', 'ULS 3']).wide).toEqual({ columns: [1, 2, 3], combinations: ['CO1', 'CO2', 'ULS 3'] });
+    const twice = parseColumnMapping({ memberColumn: 'member', combinationColumns: ['Vz CO1', 'CO1'], forceUnit: 'kN' });
+    expect(errorOf(() => resolveColumns(twice, ['member', 'Vz CO1', 'CO1'])).message).toBe("The columns 'Vz CO1' and 'CO1' both name combination 'CO1'. Map only one of them.");
+  });
+
   it('refuses a header that appears twice', () => {
     expect(errorOf(() => resolveColumns(mapping, ['member', 'member', 'combination', 'V [kN]'])).code).toBe('column_ambiguous');
   });
@@ -79,6 +104,7 @@ describe('guessMapping', () => {
     expect(guessMapping(['member', 'combination', 'shear'])).toEqual({
       mapping: { memberColumn: 'member', combinationColumn: 'combination', shearColumn: 'shear', memberKeyKind: 'auto' },
       missing: ['forceUnit'],
+      unsure: [],
     });
   });
 
@@ -126,5 +152,98 @@ describe('guessMapping', () => {
 
   it('leaves a unit it does not know unchosen', () => {
     expect(guessMapping(['member', 'combination', 'V [tf]']).missing).toContain('forceUnit');
+  });
+
+  it('reads the European export: station x [m], Vz and My with their units', () => {
+    expect(guessMapping(['Member', 'Load combination', 'x [m]', 'Vz [kN]', 'My [kNm]'])).toEqual({
+      mapping: {
+        memberColumn: 'Member',
+        combinationColumn: 'Load combination',
+        stationColumn: 'x [m]',
+        shearColumn: 'Vz [kN]',
+        majorMomentColumn: 'My [kNm]',
+        forceUnit: 'kN',
+        momentUnit: 'kNm',
+        lengthUnit: 'm',
+        memberKeyKind: 'auto',
+      },
+      missing: [],
+      unsure: [],
+    });
+  });
+
+  it.each(['x', 'pos', 'position', 'station', 'dist', 'distance', 'location', 's'])('reads %j as the station', (name) => {
+    expect(guessMapping(['member', 'combination', `${name} [mm]`, 'shear [N]']).mapping).toMatchObject({ stationColumn: `${name} [mm]`, lengthUnit: 'mm' });
+  });
+
+  it.each([
+    ['Vz', 'shearColumn'],
+    ['Fz', 'shearColumn'],
+    ['Q', 'shearColumn'],
+    ['Shear', 'shearColumn'],
+    ['Vy', 'minorShearColumn'],
+    ['Fy', 'minorShearColumn'],
+    ['My', 'majorMomentColumn'],
+    ['Mz', 'minorMomentColumn'],
+  ])('reads %j as %s', (name, field) => {
+    const headers = field === 'shearColumn' ? ['member', 'combination', name] : ['member', 'combination', 'shear force', name];
+    const { mapping } = guessMapping(headers);
+    expect(mapping[field as keyof typeof mapping]).toBe(name);
+  });
+
+  it('reads both axes and both moments, each with its unit, kN·m spelt any way', () => {
+    const { mapping, missing, unsure } = guessMapping(['Bar', 'Combo', 'Vz (kN)', 'Vy (kN)', 'My (kN·m)', 'Mz (kN-m)']);
+    expect(mapping).toMatchObject({ shearColumn: 'Vz (kN)', minorShearColumn: 'Vy (kN)', majorMomentColumn: 'My (kN·m)', minorMomentColumn: 'Mz (kN-m)', momentUnit: 'kNm' });
+    expect(missing).toEqual([]);
+    expect(unsure).toEqual([]);
+  });
+
+  it('takes a load case column as the combination, and asks when there are both', () => {
+    expect(guessMapping(['member', 'Load case', 'V [kN]']).mapping.combinationColumn).toBe('Load case');
+    expect(guessMapping(['member', 'Load case', 'Combination', 'V [kN]']).unsure).toEqual([
+      { field: 'combinationColumn', columns: ['Combination', 'Load case'], why: 'each could be the load combination' },
+    ]);
+  });
+
+  it('reads envelope rows: an envelope column instead of a combination', () => {
+    const { mapping, missing } = guessMapping(['Member', 'Envelope', 'Station [m]', 'Vz [kN]']);
+    expect(mapping).toMatchObject({ envelopeColumn: 'Envelope', stationColumn: 'Station [m]' });
+    expect(mapping.combinationColumn).toBeUndefined();
+    expect(missing).toEqual([]);
+  });
+
+  it('reads one column of shear per combination when the columns name the shear, and asks when they do not', () => {
+    const sure = guessMapping(['Member', 'x [m]', 'Vz CO1 [kN]', 'Vz CO2 [kN]']);
+    expect(sure).toMatchObject({ mapping: { combinationColumns: ['Vz CO1 [kN]', 'Vz CO2 [kN]'], forceUnit: 'kN', stationColumn: 'x [m]' }, missing: [], unsure: [] });
+    const bare = guessMapping(['Member', 'x [m]', 'CO1', 'CO2']);
+    expect(bare.mapping.combinationColumns).toEqual(['CO1', 'CO2']);
+    expect(bare.unsure).toEqual([{ field: 'combinationColumns', columns: ['CO1', 'CO2'], why: expect.stringContaining('one column of shear along the web per combination') }]);
+  });
+
+  it('takes the combination from the sheet names when several sheets are read and no column gives it', () => {
+    expect(guessMapping(['Member', 'x [m]', 'Vz [kN]'], { severalSheets: true })).toMatchObject({ mapping: { combinationFromSheet: true }, missing: [], unsure: [] });
+  });
+
+  it('reads the units from a units row under the header', () => {
+    const { mapping, missing } = guessMapping(['Member', 'Combination', 'Station', 'Shear', 'Moment'], { units: ['', '', 'm', 'kN', 'kNm'] });
+    expect(mapping).toMatchObject({ forceUnit: 'kN', lengthUnit: 'm', momentUnit: 'kNm', majorMomentColumn: 'Moment' });
+    expect(missing).toEqual([]);
+  });
+
+  it('asks when two columns could be the web shear, and proposes axis 2 for numbered axes', () => {
+    expect(guessMapping(['member', 'combination', 'Shear', 'Vz', 'V [kN]']).unsure).toEqual([
+      { field: 'shearColumn', columns: ['Shear', 'V [kN]', 'Vz'], why: 'each could be the shear along the web' },
+    ]);
+    const numbered = guessMapping(['Member', 'Combination', 'V2 [kN]', 'V3 [kN]', 'M2 [kNm]', 'M3 [kNm]']);
+    expect(numbered.mapping).toMatchObject({ memberColumn: 'Member', shearColumn: 'V2 [kN]', minorShearColumn: 'V3 [kN]', majorMomentColumn: 'M3 [kNm]', minorMomentColumn: 'M2 [kNm]' });
+    expect(numbered.unsure.map((question) => question.field)).toEqual(['shearColumn']);
+    expect(numbered.unsure[0].why).toContain('numbered local axes do not say which shear runs along the web');
+  });
+
+  it('asks when x may be a coordinate, and when the station is not in a length unit', () => {
+    expect(guessMapping(['member', 'combination', 'x', 'y', 'z', 'V [kN]']).unsure[0]).toMatchObject({ field: 'stationColumn', columns: ['x'] });
+    const force = guessMapping(['member', 'combination', 'x [kN]', 'V [kN]']);
+    expect(force.unsure).toEqual([{ field: 'lengthUnit', columns: ['x [kN]'], why: "'x [kN]' is in kN, not a length unit" }]);
+    expect(force.missing).toContain('lengthUnit');
   });
 });

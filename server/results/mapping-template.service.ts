@@ -14,6 +14,12 @@ export class MappingTemplateService {
     return templates.map(toTemplateView);
   }
 
+  async get(projectId: string, templateId: string): Promise<MappingTemplateView> {
+    const template = await this.dataSource.getRepository(ResultMappingTemplate).findOneBy({ id: templateId, projectId });
+    if (!template) throw new NotFoundError('Mapping template not found.', { code: 'template_not_found' });
+    return toTemplateView(template);
+  }
+
   /** Saves a template; inside an import it joins the import's transaction (`manager`). */
   async create(projectId: string, name: string, mapping: ColumnMapping, actorId: string, manager: EntityManager = this.dataSource.manager): Promise<MappingTemplateView> {
     await assertNameFree(manager, projectId, name);

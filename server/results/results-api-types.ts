@@ -25,11 +25,17 @@ export interface ResultsUploadView {
   /** Row of the header as a spreadsheet numbers it; null when the file has none (columns are 'Column 1', …). */
   headerRow: number | null;
   headers: string[];
+  /** Row of a units row under the header, or null; its unit per column ('' where none). Always sent; optional
+   * only so that the client's screens, which do not show them yet, need not mock them. */
+  unitsRow?: number | null;
+  units?: string[];
   /** The first rows as text. */
   rows: string[][];
   guessedMapping: MappingGuess['mapping'];
   /** Required mapping fields the header did not reveal. */
   missingMapping: MappingGuess['missing'];
+  /** Choices the guess made on a hunch (two columns for one role, numbered axes, a wide layout): to be confirmed. */
+  unsureMapping?: MappingGuess['unsure'];
 }
 
 export interface ResultSetView {

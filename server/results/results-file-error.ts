@@ -32,6 +32,8 @@ export type RowIssueCode =
 /** One bad row: `row` is what a spreadsheet shows (header row included, 1-based), `column` the file's header. */
 export interface RowIssue {
   row: number;
+  /** The worksheet, when several are read. */
+  sheet?: string;
   column?: string;
   code: RowIssueCode;
   message: string;

@@ -3,7 +3,7 @@
  * mapping. Reads only the head of the file, whatever its size.
  */
 import { cellText } from './cell-values';
-import { guessMapping, type MappingGuess } from './column-mapping';
+import { type GuessContext, guessMapping, type MappingGuess } from './column-mapping';
 import { isBlankRecord, openResultsTable, type ResultsTable, type ResultsTableOptions } from './results-table';
 
 export interface PreviewRow {
@@ -20,7 +20,7 @@ export const DEFAULT_PREVIEW_ROWS = 20;
 
 export async function previewResultsFile(
   path: string,
-  options: ResultsTableOptions & { rowLimit?: number } = {},
+  options: ResultsTableOptions & Pick<GuessContext, 'severalSheets'> & { rowLimit?: number } = {},
 ): Promise<ResultsPreview> {
   const rowLimit = options.rowLimit ?? DEFAULT_PREVIEW_ROWS;
   const { records, ...table } = await openResultsTable(path, { ...options, chunkSize: Math.max(rowLimit, 1) });
@@ -33,5 +33,5 @@ export async function previewResultsFile(
       if (rows.length >= rowLimit) break reading;
     }
   }
-  return { ...table, rows, guess: guessMapping(table.headers) };
+  return { ...table, rows, guess: guessMapping(table.headers, { units: table.units, severalSheets: options.severalSheets }) };
 }

@@ -2,8 +2,8 @@ import fs from 'node:fs';
 import v8 from 'node:v8';
 import vm from 'node:vm';
 import yazl from 'yazl';
-import { fixturePath, tempFiles } from '../../test/fixtures/results/result-files';
-import { type ColumnMapping, parseColumnMapping } from './column-mapping';
+import { fixturePath, SHEET_PER_COMBINATION, tempFiles } from '../../test/fixtures/results/result-files';
+import { type ColumnMapping, guessMapping, parseColumnMapping } from './column-mapping';
 import { type ReadResultsOptions, readResults } from './results-reader';
 import { ResultsFileError } from './results-file-error';
 import type { ResultRow } from './result-row';
@@ -134,6 +134,92 @@ describe('readResults: units', () => {
     const { rows, summary } = await readAll(path, defaultMapping('kN', { endColumns: ends, lengthUnit: 'm' }));
     expect(rows[0]).toMatchObject({ end1_mm: [0, 0, 3000], end2_mm: [6000, 0, 3000] });
     expect(summary.memberKeys[0]).toMatchObject({ end1_mm: [0, 0, 3000], end2_mm: [6000, 0, 3000] });
+  });
+});
+
+describe('readResults: layouts seen in practice, each read with the mapping guessed from its header', () => {
+  /** The mapping the preview would propose, asserted complete and sure. */
+  const guessed = (headers: string[], context = {}): ColumnMapping => {
+    const guess = guessMapping(headers, context);
+    expect(guess.missing).toEqual([]);
+    expect(guess.unsure).toEqual([]);
+    return parseColumnMapping(guess.mapping);
+  };
+  const combinationsOf = (rows: ResultRow[], member: string) => rows.filter((row) => row.memberKey === member).map((row) => [row.combination, row.station_mm, row.shear_N]);
+
+  // 1 kN·m = 10^6 N·mm and 1 m = 1000 mm (SI definitions).
+  it('a European export: semicolons, decimal commas, CRLF, three stations per member and combination, My in kNm', async () => {
+    const path = fixturePath('european-export.csv');
+    const { rows, summary } = await readAll(path, guessed(['Member', 'Load combination', 'x [m]', 'Vz [kN]', 'My [kNm]']));
+    expect(summary).toMatchObject({ csv: { delimiter: ';', decimalSeparator: ',' }, rowCount: 18, combinations: ['CO1', 'CO2'] });
+    expect(rows[0]).toEqual({ row: 2, memberKey: 'TopMid', combination: 'CO1', station_mm: 0, shear_N: -98400, majorMoment_Nmm: 0 });
+    expect(rows[1]).toMatchObject({ row: 3, station_mm: 2500, shear_N: -4150, majorMoment_Nmm: 121.3e6 });
+  });
+
+  it('one row per member and station with a column per combination', async () => {
+    const { rows, summary } = await readAll(fixturePath('wide-combinations.csv'), guessed(['Member', 'x [m]', 'Vz CO1 [kN]', 'Vz CO2 [kN]', 'Vz CO3 [kN]']));
+    expect(summary).toMatchObject({ rowCount: 6, combinations: ['CO1', 'CO2', 'CO3'] });
+    expect(combinationsOf(rows, 'TopMid').slice(0, 3)).toEqual([
+      ['CO1', 0, -98400],
+      ['CO2', 0, -143470],
+      ['CO3', 0, -60000],
+    ]);
+  });
+
+  it('a blank cell of a wide row is an error naming its row and column', async () => {
+    const path = files.write('wide-blank.csv', 'Member,Vz CO1 [kN],Vz CO2 [kN]\nB-1,1,\n');
+    const error = await failureOf(readAll(path, parseColumnMapping({ memberColumn: 'Member', combinationColumns: ['Vz CO1 [kN]', 'Vz CO2 [kN]'], forceUnit: 'kN' })));
+    expect(error.details.issues).toEqual([{ row: 2, column: 'Vz CO2 [kN]', code: 'shear_missing', message: "Row 2 (column 'Vz CO2 [kN]'): the shear force is empty." }]);
+  });
+
+  it('envelope rows (max and min) instead of combinations, with both shear axes and both moments', async () => {
+    const headers = ['Member', 'Envelope', 'Station [m]', 'Vz [kN]', 'Vy [kN]', 'My [kNm]', 'Mz [kNm]'];
+    const { rows, summary } = await readAll(fixturePath('envelope-rows.tsv'), guessed(headers));
+    expect(summary.combinations).toEqual(['envelope max', 'envelope min']);
+    expect(rows[1]).toEqual({ row: 3, memberKey: 'TopMid', combination: 'envelope min', station_mm: 0, shear_N: -143470, minorShear_N: -2400, majorMoment_Nmm: 0, minorMoment_Nmm: -0.8e6 });
+  });
+
+  it('several sheets of one workbook, the sheet naming the combination', async () => {
+    const path = await files.workbook('per-combination.xlsx', SHEET_PER_COMBINATION);
+    const mapping = parseColumnMapping({ ...guessed(['Member', 'x [m]', 'Vz [kN]'], { severalSheets: true }), sheets: ['CO1', 'CO2'] });
+    const { rows, summary } = await readAll(path, mapping);
+    expect(summary).toMatchObject({ kind: 'xlsx', sheet: 'CO1, CO2', rowCount: 12, combinations: ['CO1', 'CO2'] });
+    expect(combinationsOf(rows, 'TopMid')[3]).toEqual(['CO2', 0, -143470]);
+  });
+
+  it('several sheets: a problem names its sheet, a repeat names both', async () => {
+    const path = await files.workbook('repeats.xlsx', {
+      A: [['member', 'combination', 'shear'], ['B-1', 'ULS', 1]],
+      B: [['member', 'combination', 'shear'], ['B-2', 'ULS', 'x'], ['B-1', 'ULS', 2]],
+    });
+    const error = await failureOf(readAll(path, defaultMapping('kN', { sheets: ['A', 'B'] })));
+    expect(error.details.issues!.map((issue) => issue.message)).toEqual([
+      "Sheet 'B', row 2 (column 'shear'): 'x' is not a number; expected a shear force in kN.",
+      "Sheet 'B', row 3 repeats member 'B-1', combination 'ULS' of sheet 'A', row 2.",
+    ]);
+    expect(error.details.issues![0].sheet).toBe('B');
+  });
+
+  it('refuses the sheet name as the combination of a CSV file, and a sheet chosen outside the mapping', async () => {
+    const csv = files.write('no-sheets.csv', 'member,shear\nB-1,1\n');
+    const fromSheet = await failureOf(readAll(csv, parseColumnMapping({ memberColumn: 'member', shearColumn: 'shear', combinationFromSheet: true, forceUnit: 'kN' })));
+    expect(fromSheet.message).toBe('The mapping takes the combination from the sheet name, but the file is CSV, which has no sheets. Map a combination column.');
+    const path = await files.workbook('chosen.xlsx', SHEET_PER_COMBINATION);
+    const outside = await failureOf(readAll(path, defaultMapping('kN', { sheets: ['CO1'] }), { sheet: 'CO2' }));
+    expect(outside.message).toBe("The mapping reads the sheets CO1; the sheet chosen, 'CO2', is not among them.");
+  });
+
+  it('units in a second header row: read for the guess, never as data', async () => {
+    const { rows, summary } = await readAll(fixturePath('units-row.csv'), guessed(['Member', 'Combination', 'Station', 'Shear', 'Moment'], { units: ['', '', 'm', 'kN', 'kNm'] }));
+    expect(summary).toMatchObject({ headerRow: 1, unitsRow: 2, units: ['', '', 'm', 'kN', 'kNm'], rowCount: 6 });
+    expect(rows[0]).toMatchObject({ row: 3, station_mm: 0, shear_N: -98400 });
+  });
+
+  it('a units row in a workbook', async () => {
+    const path = await files.workbook('units.xlsx', { Forces: [['Member', 'Combination', 'x', 'Vz'], [null, null, 'm', 'kN'], ['B-1', 'ULS', 0.5, 12]] });
+    const { rows, summary } = await readAll(path, guessed(['Member', 'Combination', 'x', 'Vz'], { units: ['', '', 'm', 'kN'] }));
+    expect(summary.unitsRow).toBe(2);
+    expect(rows).toEqual([{ row: 3, memberKey: 'B-1', combination: 'ULS', station_mm: 500, shear_N: 12000 }]);
   });
 });
 

@@ -3,13 +3,13 @@
  * the one shape both the preview and the reader work on.
  */
 import fs from 'node:fs/promises';
-import { type Cell, cellText, type DecimalSeparator, isBlankCell, type RawRecord } from './cell-values';
+import { type Cell, cellText, type DecimalSeparator, isBlankCell, looksNumeric, type RawRecord } from './cell-values';
 import { csvRecordChunks } from './csv-records';
 import { type CsvFormat, detectEncoding, firstRecordIsHeader, sniffCsvFormat } from './csv-format';
 import type { ResultsFileKind } from './results-api-types';
 import { ResultsFileError } from './results-file-error';
+import { unitWord } from './unit-words';
 import { listXlsxSheets, type XlsxSheet, xlsxRecordChunks } from './xlsx-workbook';
-
 
 export interface ResultsTableOptions {
   /** XLSX: the sheet to read; required when the workbook has several. */
@@ -30,7 +30,10 @@ export interface ResultsTable {
   /** Row of the header, or null when the file has none (columns are then called 'Column 1', 'Column 2', …). */
   headerRow: number | null;
   headers: string[];
-  /** The data records after the header. Read to the end or call `return()` to release the file. */
+  /** Row of a units row under the header ('m', 'kN', 'kNm'), or null; its cells per column ('' where none). */
+  unitsRow: number | null;
+  units: string[];
+  /** The data records after the header (and the units row). Read to the end or call `return()` to release the file. */
   records: AsyncGenerator<RawRecord[]>;
 }
 
@@ -55,19 +58,17 @@ export async function openResultsTable(path: string, options: ResultsTableOption
   const sample = head.toString(encoding).replace(/^\uFEFF/, '');
   if (sample.trim() === '') throw emptyFile();
   const format: CsvFormat = { encoding, ...sniffCsvFormat(sample, complete), ...options.csv };
-  const { headerRow, headers, records } = await splitHeader(csvRecordChunks(path, format, chunkSize), () => format.hasHeaderRow);
-  return { kind: 'csv', csv: format, decimalSeparator: format.decimalSeparator, headerRow, headers, records };
+  const header = await splitHeader(csvRecordChunks(path, format, chunkSize), () => format.hasHeaderRow);
+  return { kind: 'csv', csv: format, decimalSeparator: format.decimalSeparator, ...header };
 }
 
 async function openXlsx(path: string, wanted: string | undefined, chunkSize: number): Promise<ResultsTable> {
   const sheets = await listXlsxSheets(path);
   const names = sheets.map((sheet) => sheet.name);
   const sheet = chooseSheet(sheets, wanted);
-  const { headerRow, headers, records } = await splitHeader(xlsxRecordChunks(path, sheet, chunkSize), (first) =>
-    firstRecordIsHeader(first.map((record) => record.cells.map(cellText))),
-  );
+  const header = await splitHeader(xlsxRecordChunks(path, sheet, chunkSize), (first) => firstRecordIsHeader(first.map((record) => record.cells.map(cellText))));
   // Text cells in a workbook carry no locale, and numeric cells are numbers already.
-  return { kind: 'xlsx', sheets: names, sheet: sheet.name, decimalSeparator: '.', headerRow, headers, records };
+  return { kind: 'xlsx', sheets: names, sheet: sheet.name, decimalSeparator: '.', ...header };
 }
 
 function chooseSheet(sheets: XlsxSheet[], wanted: string | undefined): XlsxSheet {
@@ -89,13 +90,14 @@ function chooseSheet(sheets: XlsxSheet[], wanted: string | undefined): XlsxSheet
 }
 
 /**
- * Takes the header off the front of the record stream (blank records before it are dropped). `isHeader` sees the
- * first non-blank records of the first chunk that has any; the records after the header stream on unchanged.
+ * Takes the header, and a units row right under it, off the front of the record stream (blank records before the
+ * header are dropped). `isHeader` sees the first non-blank records of the first chunk that has any; the records after
+ * the header stream on unchanged.
  */
 async function splitHeader(
   chunks: AsyncGenerator<RawRecord[]>,
   isHeader: (firstRecords: RawRecord[]) => boolean,
-): Promise<Pick<ResultsTable, 'headerRow' | 'headers' | 'records'>> {
+): Promise<Pick<ResultsTable, 'headerRow' | 'headers' | 'unitsRow' | 'units' | 'records'>> {
   let chunk: RawRecord[];
   let start: number;
   do {
@@ -110,7 +112,29 @@ async function splitHeader(
   const headers = header
     ? header.cells.map((cell, index) => cellText(cell) || columnName(index))
     : Array.from({ length: width }, (_, index) => columnName(index));
-  return { headerRow: header?.row ?? null, headers, records: prepend(chunk.slice(header ? start + 1 : start), chunks) };
+  let rest = chunk.slice(header ? start + 1 : start);
+  // The record under the header may be in the next chunk when chunks are small (a preview of one row).
+  while (header && !rest.some((record) => !isBlankRecord(record.cells))) {
+    const next = await chunks.next();
+    if (next.done) break;
+    rest = rest.concat(next.value);
+  }
+  const unitsRecord = header && rest.find((record) => !isBlankRecord(record.cells));
+  const units = unitsRecord && isUnitsRow(unitsRecord.cells) ? unitsRecord : undefined;
+  if (units) rest = rest.slice(rest.indexOf(units) + 1);
+  return {
+    headerRow: header?.row ?? null,
+    headers,
+    unitsRow: units?.row ?? null,
+    units: headers.map((_, index) => cellText(units?.cells[index] ?? null)),
+    records: prepend(rest, chunks),
+  };
+}
+
+/** A record without a single number that names at least one unit: a data record always has a force in it. */
+function isUnitsRow(cells: readonly Cell[]): boolean {
+  const texts = cells.map(cellText).filter((text) => text !== '');
+  return !texts.some(looksNumeric) && texts.some((text) => unitWord(text) !== undefined);
 }
 
 async function* prepend(first: RawRecord[], rest: AsyncGenerator<RawRecord[]>): AsyncGenerator<RawRecord[]> {

@@ -83,14 +83,17 @@ async function previewOf(path: string, sheet?: string): Promise<Preview> {
       decimalSeparator: preview.decimalSeparator,
       headerRow: preview.headerRow,
       headers: preview.headers,
+      unitsRow: preview.unitsRow,
+      units: preview.units,
       rows: preview.rows.map((row) => row.cells),
       guessedMapping: preview.guess.mapping,
       missingMapping: preview.guess.missing,
+      unsureMapping: preview.guess.unsure,
     };
   } catch (error) {
     if (!(error instanceof ResultsFileError)) throw error;
     if (error.code === 'sheet_required' && sheet === undefined) {
-      return { format: 'xlsx', sheets: error.details.sheets ?? [], sheet: null, delimiter: null, decimalSeparator: '.', headerRow: null, headers: [], rows: [], guessedMapping: {}, missingMapping: [] };
+      return { format: 'xlsx', sheets: error.details.sheets ?? [], sheet: null, delimiter: null, decimalSeparator: '.', headerRow: null, headers: [], unitsRow: null, units: [], rows: [], guessedMapping: {}, missingMapping: [], unsureMapping: [] };
     }
     throw asDomainError(error);
   }
