@@ -49,7 +49,7 @@ export interface NotificationSettings {
 }
 
 /** The button that moves a finding to each status (Ready to verify is reached through check runs only). */
-export const MOVE_TO: Readonly<Record<FindingStatus, { label: string; icon: string }>> = {
+const MOVE_TO: Readonly<Record<FindingStatus, { label: string; icon: string }>> = {
   open: { label: 'Reopen', icon: 'undo' },
   'in-progress': { label: 'Start work', icon: 'construction' },
   resolved: { label: 'Mark resolved', icon: 'task_alt' },
@@ -57,3 +57,8 @@ export const MOVE_TO: Readonly<Record<FindingStatus, { label: string; icon: stri
   verified: { label: 'Verify', icon: 'verified' },
   accepted: { label: 'Accept as is…', icon: 'gavel' },
 };
+
+/** The button for a step, named for what it does from where the finding is: taking back a resolution reopens it. */
+export function moveAction(from: FindingStatus, to: FindingStatus): { label: string; icon: string } {
+  return from === 'resolved' && to === 'in-progress' ? MOVE_TO.open : MOVE_TO[to];
+}

@@ -36,8 +36,9 @@ export class FindingsApi {
     return this.http.patch<{ finding: Finding }>(findingUrl(projectId, findingId), patch);
   }
 
-  moveTo(projectId: string, findingId: string, to: FindingStatus, justification?: string): Observable<{ finding: Finding }> {
-    return this.http.post<{ finding: Finding }>(findingUrl(projectId, findingId, '/transitions'), { to, ...(justification !== undefined && { justification }) });
+  /** `reasons`: the justification an acceptance needs, the note of what was done that resolving a failure needs. */
+  moveTo(projectId: string, findingId: string, to: FindingStatus, reasons: { justification?: string; note?: string } = {}): Observable<{ finding: Finding }> {
+    return this.http.post<{ finding: Finding }>(findingUrl(projectId, findingId, '/transitions'), { to, ...reasons });
   }
 
   comment(projectId: string, findingId: string, text: string): Observable<{ comment: FindingComment }> {

@@ -48,11 +48,37 @@ describe('FindingDetail', () => {
     // Engineers do not assign.
     expect(page.querySelector<HTMLElement>('.triage mat-select')!.getAttribute('aria-disabled')).toBe('true');
 
+  });
+
+  it('asks what was done before a failing finding is marked resolved, and sends the note', async () => {
+    const page = await open('engineer', testDetail({ allowedTransitions: ['in-progress', 'resolved'] }));
     page.querySelectorAll<HTMLButtonElement>('.status-actions button')[1].click();
-    expect(await answerWrite('POST', `${findingApi}/transitions`, { finding: testFinding({ status: 'resolved' }) })).toEqual({ to: 'resolved' });
-    (await nextRequest(backend, findingApi)).flush(testDetail({ finding: testFinding({ status: 'resolved' }) }));
+    await settle();
+    const dialog = document.querySelector<HTMLElement>('tl-status-note-dialog')!;
+    expect(dialog.querySelector('h2')!.textContent).toContain('Mark F-0012 resolved?');
+    expect(dialog.textContent).toContain('The member fails its check at 112.5 % utilisation.');
+    dialog.querySelector<HTMLButtonElement>('button[type=submit]')!.click();
+    await settle();
+    expect(dialog.textContent).toContain('Write what was done about the failing member.');
+    const text = dialog.querySelector<HTMLTextAreaElement>('textarea')!;
+    text.value = ' Web plate 12 mm from revision 3. ';
+    text.dispatchEvent(new Event('input'));
+    dialog.querySelector<HTMLButtonElement>('button[type=submit]')!.click();
+    const resolved = testFinding({ status: 'resolved' });
+    expect(await answerWrite('POST', `${findingApi}/transitions`, { finding: resolved })).toEqual({ to: 'resolved', note: 'Web plate 12 mm from revision 3.' });
+    (await nextRequest(backend, findingApi)).flush(testDetail({ finding: resolved }));
     await settle();
     expect(page.querySelector('[role=status]')!.textContent).toContain('F-0012 is now Resolved.');
+  });
+
+  it('resolves a finding raised by hand without asking, and names the way back from Resolved "Reopen"', async () => {
+    const manual = testFinding({ kind: 'manual', utilisation: null });
+    const page = await open('engineer', testDetail({ finding: manual, allowedTransitions: ['resolved'] }));
+    page.querySelector<HTMLButtonElement>('.status-actions button')!.click();
+    expect(await answerWrite('POST', `${findingApi}/transitions`, { finding: { ...manual, status: 'resolved' } })).toEqual({ to: 'resolved' });
+    (await nextRequest(backend, findingApi)).flush(testDetail({ finding: { ...manual, status: 'resolved' }, allowedTransitions: ['in-progress', 'accepted'] }));
+    await settle();
+    expect(buttons(page)).toEqual(['undo Reopen', 'gavel Accept as is…']);
   });
 
   it('shows the snapshot as the way into the 3D view when there is one', async () => {
@@ -65,7 +91,7 @@ describe('FindingDetail', () => {
     expect(buttons(page)).toEqual(['verified Verify', 'undo Reopen', 'gavel Accept as is…']);
     page.querySelectorAll<HTMLButtonElement>('.status-actions button')[2].click();
     await settle();
-    const dialog = document.querySelector<HTMLElement>('tl-accept-dialog')!;
+    const dialog = document.querySelector<HTMLElement>('tl-status-note-dialog')!;
     dialog.querySelector<HTMLButtonElement>('button[type=submit]')!.click();
     await settle();
     expect(dialog.textContent).toContain('Write why the finding may stay as it is.');

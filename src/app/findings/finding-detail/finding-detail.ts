@@ -16,7 +16,7 @@ import { errorMessage } from '../../core/api-error';
 import { CautionsNotice } from '../../core/cautions-notice/cautions-notice';
 import { ProjectContext } from '../../projects/project-context';
 import { projectPeople } from '../project-people';
-import { askForJustification } from '../accept-dialog/accept-dialog';
+import { askForJustification, askForResolution } from '../status-note-dialog/status-note-dialog';
 import { changeSourceText, changeText } from '../change-text';
 import {
   FindingDetail as Detail,
@@ -25,7 +25,7 @@ import {
   FindingStatus,
   findingReference,
   KIND_LABELS,
-  MOVE_TO,
+  moveAction,
   PRIORITIES,
   PRIORITY_LABELS,
   STATUS_LABELS,
@@ -67,7 +67,7 @@ export class FindingDetail {
   protected readonly kindLabels = KIND_LABELS;
   protected readonly priorities = PRIORITIES;
   protected readonly priorityLabels = PRIORITY_LABELS;
-  protected readonly moveTo = MOVE_TO;
+  protected readonly moveAction = moveAction;
   protected readonly changeText = changeText;
   protected readonly changeSourceText = changeSourceText;
   protected readonly maxComment = MAX_COMMENT;
@@ -134,15 +134,21 @@ export class FindingDetail {
   protected move(to: FindingStatus): void {
     const finding = this.finding();
     if (!finding) return;
-    if (to !== 'accepted') {
-      this.write(this.api.moveTo(this.context.projectId(), finding.id, to), `${this.reference()} is now ${STATUS_LABELS[to]}.`);
-      return;
-    }
-    askForJustification(this.dialog, { reference: this.reference(), title: finding.title })
-      .pipe(filter((justification): justification is string => justification !== undefined))
-      .subscribe((justification) =>
-        this.write(this.api.moveTo(this.context.projectId(), finding.id, to, justification), `${this.reference()} was accepted.`),
+    const projectId = this.context.projectId();
+    const ref = { reference: this.reference(), title: finding.title };
+    const confirmed = (reason: Observable<string | undefined>) => reason.pipe(filter((text): text is string => text !== undefined));
+    if (to === 'accepted') {
+      confirmed(askForJustification(this.dialog, ref)).subscribe((justification) =>
+        this.write(this.api.moveTo(projectId, finding.id, to, { justification }), `${this.reference()} was accepted.`),
       );
+    } else if (to === 'resolved' && finding.kind === 'web-shear-fail') {
+      // A failing member is not closed by a click: the reviewer verifies against what the engineer says was done.
+      confirmed(askForResolution(this.dialog, { ...ref, utilisation: this.utilisation() })).subscribe((note) =>
+        this.write(this.api.moveTo(projectId, finding.id, to, { note }), `${this.reference()} is now ${STATUS_LABELS[to]}.`),
+      );
+    } else {
+      this.write(this.api.moveTo(projectId, finding.id, to), `${this.reference()} is now ${STATUS_LABELS[to]}.`);
+    }
   }
 
   protected addLabel(event: MatChipInputEvent): void {
