@@ -13,6 +13,7 @@ import { UserService } from '../users/user.service';
 import { AuthService } from './auth.service';
 import { type PassportInstance, authenticateLocal, logIn, logOut } from './passport';
 import { PasswordResetService } from './password-reset.service';
+import { ResetRequestQueue } from './reset-request-queue';
 import { currentUser, requireSignedIn } from './require-access';
 
 const loginInput = { body: z.object({ email: emailSchema, password: z.string().min(1, 'is required').max(1000) }) };
@@ -27,6 +28,7 @@ export function authRouter(ctx: AppContext, deps: { passport: PassportInstance; 
   const users = new UserService(ctx.dataSource);
   const invitations = new InvitationService(ctx.dataSource, ctx.mailer, ctx.config.publicUrl);
   const resets = new PasswordResetService(ctx.dataSource, ctx.mailer, ctx.config.publicUrl);
+  const resetRequests = new ResetRequestQueue(resets, ctx.logger);
   const tokenLimit = tokenLinkRateLimit();
   const router = Router();
 
@@ -62,13 +64,8 @@ export function authRouter(ctx: AppContext, deps: { passport: PassportInstance; 
     res.json({ user: toUserSummary(user) });
   });
 
-  router.post('/password-reset', resetRequestRateLimit(), validate(resetRequestInput), async (req, res) => {
-    try {
-      await resets.requestForEmail(inputOf(res, resetRequestInput).body.email);
-    } catch (error) {
-      // The answer must not depend on whether the address exists, so a mail failure is only logged.
-      req.log.error({ err: error }, 'password-reset e-mail failed');
-    }
+  router.post('/password-reset', resetRequestRateLimit(), validate(resetRequestInput), (_req, res) => {
+    resetRequests.enqueue(inputOf(res, resetRequestInput).body.email);
     res.status(202).json({ status: 'accepted' });
   });
 

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { Invitation } from '../../server/users/invitation.entity';
 import { type TestApp, startTestApp } from '../fixtures/test-app';
 import { createTeam, createUser } from '../fixtures/test-accounts';
-import { lastMailTo, linkIn, mailsTo } from '../fixtures/test-outbox';
+import { lastMailTo, linkIn, mailsTo, waitForMailsTo } from '../fixtures/test-outbox';
 
 const NEW_PASSWORD = 'a fresh password 7';
 
@@ -185,6 +185,7 @@ describe('invitations', () => {
     const victim = await createUser(app.dataSource, { name: 'Vera Victim' });
     const anonymous = await app.agent();
     await anonymous.post('/api/auth/password-reset').send({ email: victim.email }).expect(202);
+    await waitForMailsTo(app.dataSource, victim.email);
     const anonymousRead = await anonymous.get('/api/dev/outbox').expect(401);
     expect(JSON.stringify(anonymousRead.body)).not.toContain('reset-password');
     const someoneElse = await app.signIn(await createUser(app.dataSource));

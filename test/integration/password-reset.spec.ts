@@ -1,8 +1,9 @@
+import { type Server, type Socket, createServer } from 'node:net';
 import { PasswordReset } from '../../server/auth/password-reset.entity';
 import { RATE_LIMITS } from '../../server/http/rate-limits';
 import { type TestApp, startTestApp } from '../fixtures/test-app';
 import { TEST_PASSWORD, createUser } from '../fixtures/test-accounts';
-import { lastMailTo, linkIn, mailsTo } from '../fixtures/test-outbox';
+import { lastMailTo, linkIn, mailsTo, waitForMailsTo } from '../fixtures/test-outbox';
 
 const NEW_PASSWORD = 'another good password';
 
@@ -13,8 +14,10 @@ describe('password reset', () => {
   });
   afterAll(() => app.close());
 
-  async function resetLinkFor(email: string): Promise<string> {
-    return linkIn(await lastMailTo(app.dataSource, email), app.config.publicUrl, '/reset-password/').token;
+  /** The link in the `nth` reset mail to this address, once it has arrived (it is sent after the answer). */
+  async function resetLinkFor(email: string, nth = 1): Promise<string> {
+    const mail = (await waitForMailsTo(app.dataSource, email, nth))[nth - 1];
+    return linkIn(mail, app.config.publicUrl, '/reset-password/').token;
   }
 
   it('e-mails a 2-hour link that sets a new password and ends every other session', async () => {
@@ -23,7 +26,7 @@ describe('password reset', () => {
     const anonymous = await app.agent();
     await anonymous.post('/api/auth/password-reset').send({ email: user.email.toUpperCase() }).expect(202, { status: 'accepted' });
 
-    const mail = await lastMailTo(app.dataSource, user.email);
+    const [mail] = await waitForMailsTo(app.dataSource, user.email);
     expect(mail.subject).toBe('Choose a new Taulens password');
     const token = await resetLinkFor(user.email);
     const reset = await app.dataSource.getRepository(PasswordReset).findOneByOrFail({ userId: user.id });
@@ -46,7 +49,7 @@ describe('password reset', () => {
     await agent.post('/api/auth/password-reset').send({ email: user.email }).expect(202);
     const first = await resetLinkFor(user.email);
     await agent.post('/api/auth/password-reset').send({ email: user.email }).expect(202);
-    const second = await resetLinkFor(user.email);
+    const second = await resetLinkFor(user.email, 2);
     expect(second).not.toBe(first);
 
     await agent.post(`/api/auth/password-reset/${second}`).send({ password: NEW_PASSWORD }).expect(204);
@@ -92,6 +95,10 @@ describe('password reset', () => {
     const agent = await app.agent();
     await agent.post('/api/auth/password-reset').send({ email: 'nobody@example.test' }).expect(202, { status: 'accepted' });
     await agent.post('/api/auth/password-reset').send({ email: inactive.email }).expect(202, { status: 'accepted' });
+    // Requests are handled in order behind the answers: once a later one's mail is there, these were handled.
+    const known = await createUser(app.dataSource);
+    await agent.post('/api/auth/password-reset').send({ email: known.email }).expect(202);
+    await waitForMailsTo(app.dataSource, known.email);
     expect(await mailsTo(app.dataSource, 'nobody@example.test')).toEqual([]);
     expect(await mailsTo(app.dataSource, inactive.email)).toEqual([]);
   });
@@ -104,7 +111,9 @@ describe('password reset', () => {
     }
     const blocked = await agent.post('/api/auth/password-reset').send({ email: user.email }).expect(429);
     expect(blocked.body.error.code).toBe('rate_limited');
-    expect(await mailsTo(app.dataSource, user.email)).toHaveLength(RATE_LIMITS.resetRequestsPerAccount.limit);
+    expect(await waitForMailsTo(app.dataSource, user.email, RATE_LIMITS.resetRequestsPerAccount.limit)).toHaveLength(
+      RATE_LIMITS.resetRequestsPerAccount.limit,
+    );
   });
 
   it('lets an admin send the link, which says so', async () => {
@@ -124,5 +133,31 @@ describe('password reset', () => {
     const user = await createUser(app.dataSource, { active: false });
     const response = await admin.post(`/api/users/${user.id}/password-reset`).expect(409);
     expect(response.body.error.code).toBe('user_deactivated');
+  });
+});
+
+describe('password reset while the mail server is slow', () => {
+  // An SMTP server that accepts connections and never greets: sending a mail to it waits until nodemailer gives up.
+  let stalled: Server;
+  const sockets = new Set<Socket>();
+  let app: TestApp;
+  beforeAll(async () => {
+    stalled = createServer((socket) => sockets.add(socket));
+    await new Promise<void>((resolve) => stalled.listen(0, '127.0.0.1', resolve));
+    const port = (stalled.address() as { port: number }).port;
+    app = await startTestApp({ fakeSmtp: false, smtp: { host: '127.0.0.1', port, from: 'taulens@example.test' } });
+  });
+  afterAll(async () => {
+    for (const socket of sockets) socket.destroy();
+    await app.close();
+    await new Promise((resolve) => stalled.close(resolve));
+  });
+
+  // The answer must not wait for the mail, or its time would tell a registered address from an unknown one.
+  it('answers a request for a registered address at once, as for an unknown one', async () => {
+    const user = await createUser(app.dataSource);
+    const agent = await app.agent();
+    await agent.post('/api/auth/password-reset').timeout(3000).send({ email: 'nobody@example.test' }).expect(202, { status: 'accepted' });
+    await agent.post('/api/auth/password-reset').timeout(3000).send({ email: user.email }).expect(202, { status: 'accepted' });
   });
 });
