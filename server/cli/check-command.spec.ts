@@ -9,6 +9,7 @@ import * as os from 'node:os';
 import * as path from 'node:path';
 import ExcelJS from 'exceljs';
 import { schemaErrors, schemaForEntry } from '../../test/fixtures/bcf/bcf-schemas';
+import { fixturePath, SHEET_PER_COMBINATION } from '../../test/fixtures/results/result-files';
 import { buildingSmartSample } from '../../test/fixtures/ifc/buildingsmart-samples';
 import { writeFrameFile } from '../../test/generator/generate-frame';
 import { fromNewtons } from '../engine/units';
@@ -38,7 +39,7 @@ interface CheckedMember {
   status: string;
   reason?: string;
   flags: string[];
-  governing: { combination: string; VEd_kN: number; VRd_kN: number; utilisation: number; tauMax_MPa: number; tauAvgWeb_MPa: number } | null;
+  governing: { combination: string; station_m: number | null; VEd_kN: number; VRd_kN: number; utilisation: number; tauMax_MPa: number; tauAvgWeb_MPa: number } | null;
   profile: { name: string } | null;
 }
 
@@ -159,6 +160,92 @@ describe('taulens check', () => {
     const chosen = taulens('check', frame, '--forces', xlsx, '--sheet', 'Shear', '--force-unit', 'kip', '--standard', 'aisc360-22-lrfd', '--json');
     expect(chosen.status).toBe(0);
     expect(JSON.parse(chosen.stdout).forces).toMatchObject({ rows: 1, keys: 1 });
+  });
+
+  describe('forces files in the layouts analysis exports use', () => {
+    const sample = buildingSmartSample('beam-varying-cardinal-points.ifc');
+    /** In this process through the same dispatch as the bin: one spawned run (below) covers the process itself. */
+    const check = async (forces: string, ...extra: string[]) => {
+      let stdout = '';
+      let stderr = '';
+      const status = await dispatch(['check', sample, '--forces', forces, '--standard', 'en1993-1-1', '--json', ...extra], { out: (t) => (stdout += t), err: (t) => (stderr += t) });
+      return { status, stderr, output: stdout ? JSON.parse(stdout) : undefined };
+    };
+    const governingOf = (output: { members: CheckedMember[] }, name: string) => output.members.find((m) => m.name === name)!.governing;
+
+    // VRd = 286.94 kN for the sample's IPE200 by EN 1993-1-1 §6.2.6, derived in the first test of this file; the forces
+    // are invented, so each governing value is simply the largest |Vz| the file gives the member.
+    it('a European export (semicolons, decimal commas, CRLF, x [m]) checks without a mapping, at the right station and combination', () => {
+      const run = taulens('check', sample, '--forces', fixturePath('european-export.csv'), '--force-unit', 'kN', '--standard', 'en1993-1-1', '--json');
+      expect(run.stderr).toBe('');
+      expect(run.status).toBe(1);
+      const output = JSON.parse(run.stdout);
+      expect(output.forces).toMatchObject({ rows: 18, keys: 3, combinations: ['CO1', 'CO2'], mapping: { stationColumn: 'x [m]', shearColumn: 'Vz [kN]', lengthUnit: 'm' } });
+      expect(governingOf(output, 'TopMid')).toMatchObject({ combination: 'CO2', station_m: 0, VEd_kN: -143.47 });
+      expect(governingOf(output, 'TopMid')!.utilisation).toBeCloseTo(143.47 / 286.94, 4);
+      expect(governingOf(output, 'BotMid')).toMatchObject({ combination: 'CO1', station_m: 5, VEd_kN: -200 });
+      expect(governingOf(output, 'BotLeft')).toMatchObject({ combination: 'CO2', station_m: 0, VEd_kN: 300 });
+      expect(output.members.find((m: CheckedMember) => m.name === 'BotLeft').status).toBe('fail');
+    });
+
+    it('one column per combination', async () => {
+      const run = await check(fixturePath('wide-combinations.csv'));
+      expect(run.status).toBe(0);
+      expect(run.output.forces.combinations).toEqual(['CO1', 'CO2', 'CO3']);
+      expect(governingOf(run.output, 'TopMid')).toMatchObject({ combination: 'CO2', station_m: 0, VEd_kN: -143.47 });
+      expect(governingOf(run.output, 'BotMid')).toMatchObject({ combination: 'CO1', station_m: 5, VEd_kN: -200 });
+    });
+
+    it('envelope rows', async () => {
+      const run = await check(fixturePath('envelope-rows.tsv'));
+      expect(run.status).toBe(1);
+      expect(governingOf(run.output, 'TopMid')).toMatchObject({ combination: 'envelope min', station_m: 0, VEd_kN: -143.47 });
+      expect(governingOf(run.output, 'BotLeft')).toMatchObject({ combination: 'envelope max', station_m: 0, VEd_kN: 300 });
+    });
+
+    it('several sheets of one workbook, one per combination', async () => {
+      const book = new ExcelJS.Workbook();
+      for (const [name, rows] of Object.entries(SHEET_PER_COMBINATION)) book.addWorksheet(name).addRows(rows);
+      const xlsx = path.join(dir, 'per-combination.xlsx');
+      await book.xlsx.writeFile(xlsx);
+      const run = await check(xlsx, '--sheet', 'CO1', '--sheet', 'CO2');
+      expect(run.stderr).toBe('');
+      expect(run.output.forces).toMatchObject({ rows: 12, combinations: ['CO1', 'CO2'], mapping: { combinationFromSheet: true, sheets: ['CO1', 'CO2'] } });
+      expect(governingOf(run.output, 'TopMid')).toMatchObject({ combination: 'CO2', station_m: 0, VEd_kN: -143.47 });
+    });
+
+    it('units in a second header row', async () => {
+      const run = await check(fixturePath('units-row.csv'));
+      expect(run.output.forces.mapping).toMatchObject({ forceUnit: 'kN', lengthUnit: 'm', momentUnit: 'kNm' });
+      expect(governingOf(run.output, 'TopMid')).toMatchObject({ combination: 'CO1', station_m: 5, VEd_kN: 143.47 });
+    });
+
+    it('stops when detection is unsure, printing the mapping to write; that mapping, passed with --mapping, checks', async () => {
+      const forces = write('bare-combinations.csv', 'Member,x [m],CO1,CO2\nTopMid,0,-98.4,-143.47\nTopMid,5,91.2,137.95\n');
+      const unsure = await check(forces, '--force-unit', 'kN');
+      expect(unsure.status).toBe(2);
+      expect(unsure.output).toBeUndefined();
+      expect(unsure.stderr).toContain("the columns of bare-combinations.csv cannot be told apart for certain:\n  combinationColumns: 'CO1', 'CO2': no column names the combination or the shear");
+      expect(unsure.stderr).not.toContain('usage:');
+      const json = unsure.stderr.slice(unsure.stderr.indexOf('{'));
+      expect(JSON.parse(json)).toEqual({ memberColumn: 'Member', combinationColumns: ['CO1', 'CO2'], stationColumn: 'x [m]', forceUnit: 'kN', lengthUnit: 'm', memberKeyKind: 'auto' });
+      const mapped = await check(forces, '--mapping', write('bare.mapping.json', json));
+      expect(mapped.status).toBe(0);
+      expect(governingOf(mapped.output, 'TopMid')).toMatchObject({ combination: 'CO2', station_m: 0, VEd_kN: -143.47 });
+    });
+
+    it('reads a mapping as the web lists a template, and refuses an option that contradicts it', async () => {
+      const mapping = { memberColumn: 'Member', combinationColumn: 'Load combination', stationColumn: 'x [m]', shearColumn: 'Vz [kN]', forceUnit: 'kN', lengthUnit: 'm' };
+      const template = write('template.json', JSON.stringify({ id: 'x', name: 'European export', mapping, createdAt: '2026-12-01T00:00:00Z' }));
+      const run = await check(fixturePath('european-export.csv'), '--mapping', template);
+      expect(run.output.forces.mapping).toEqual({ ...mapping, memberKeyKind: 'auto' });
+      const contradiction = await check(fixturePath('european-export.csv'), '--mapping', template, '--force-unit', 'kip');
+      expect(contradiction.status).toBe(2);
+      expect(contradiction.stderr).toContain('the option for forceUnit ("kip") contradicts the mapping file\'s "kN"; give only one');
+      const broken = await check(fixturePath('european-export.csv'), '--mapping', write('broken.json', JSON.stringify({ ...mapping, shearColumn: undefined })));
+      expect(broken.status).toBe(2);
+      expect(broken.stderr).toMatch(/broken\.json: The column mapping is not usable: shearColumn: choose the shear force column\./);
+    });
   });
 
   describe('bad input exits 2 with one clear message', () => {

@@ -1,13 +1,14 @@
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import ExcelJS from 'exceljs';
+import { dispatch } from '../../server/cli/main';
 import type { MemberRecord } from '../../server/ifc/model-read-result';
 import { ResultKey } from '../../server/results/result-key.entity';
 import { ResultSet } from '../../server/results/result-set.entity';
 import { ResultsUpload } from '../../server/results/results-upload.entity';
 import { removeStaleUploads } from '../../server/results/stale-uploads';
 import type { ApiAgent } from '../fixtures/api-agent';
-import { fixturePath } from '../fixtures/results/result-files';
+import { fixturePath, SHEET_PER_COMBINATION, tempFiles } from '../fixtures/results/result-files';
 import { type TestApp, startTestApp } from '../fixtures/test-app';
 import { type TestTeam, createTeam } from '../fixtures/test-accounts';
 import { buildingSmartSample } from '../fixtures/ifc/buildingsmart-samples';
@@ -332,7 +333,96 @@ describe('shear results', () => {
     });
   });
 
+  describe('layouts analysis exports use, imported with the mapping the preview guesses', () => {
+    /** Uploads, checks the guess is complete and sure, imports with it; returns the preview and the result set. */
+    async function importGuessed(content: string | Buffer, fileName: string, extra: Record<string, unknown> = {}) {
+      const upload = (await uploadResults(coordinator, projectId, content, fileName).expect(201)).body.upload;
+      expect(upload.missingMapping).toEqual([]);
+      expect(upload.unsureMapping).toEqual([]);
+      const response = await coordinator
+        .post(resultsUrl(projectId))
+        .send({ uploadId: upload.id, mapping: upload.guessedMapping, modelRevisionId: revision.id, name: fileName, ...extra })
+        .expect(201);
+      return { upload, resultSet: response.body.resultSet };
+    }
+
+    it('a European export: semicolons, decimal commas, CRLF and a station column x [m]', async () => {
+      const { upload, resultSet } = await importGuessed(readFileSync(fixturePath('european-export.csv')), 'european-export.csv');
+      expect(upload.guessedMapping).toEqual({
+        memberColumn: 'Member',
+        combinationColumn: 'Load combination',
+        stationColumn: 'x [m]',
+        shearColumn: 'Vz [kN]',
+        majorMomentColumn: 'My [kNm]',
+        forceUnit: 'kN',
+        momentUnit: 'kNm',
+        lengthUnit: 'm',
+        memberKeyKind: 'auto',
+      });
+      expect(resultSet).toMatchObject({ rowCount: 18, memberKeys: 3, combinations: ['CO1', 'CO2'] });
+    });
+
+    it('one column per combination', async () => {
+      const { resultSet } = await importGuessed(readFileSync(fixturePath('wide-combinations.csv')), 'wide-combinations.csv');
+      expect(resultSet).toMatchObject({ rowCount: 6, memberKeys: 2, combinations: ['CO1', 'CO2', 'CO3'], mapping: { combinationColumns: ['Vz CO1 [kN]', 'Vz CO2 [kN]', 'Vz CO3 [kN]'] } });
+    });
+
+    it('envelope rows', async () => {
+      const { resultSet } = await importGuessed(readFileSync(fixturePath('envelope-rows.tsv')), 'envelope-rows.tsv');
+      expect(resultSet).toMatchObject({ rowCount: 8, combinations: ['envelope max', 'envelope min'] });
+    });
+
+    it('units in a second header row, shown in the preview', async () => {
+      const { upload, resultSet } = await importGuessed(readFileSync(fixturePath('units-row.csv')), 'units-row.csv');
+      expect(upload).toMatchObject({ unitsRow: 2, units: ['', '', 'm', 'kN', 'kNm'], rows: [['TopMid', 'CO1', '0', '-98.40', '0'], expect.anything(), expect.anything(), expect.anything(), expect.anything(), expect.anything()] });
+      expect(resultSet.rowCount).toBe(6);
+    });
+
+    it('several sheets of one workbook, the sheet naming the combination', async () => {
+      const content = await workbook(SHEET_PER_COMBINATION);
+      const upload = (await uploadResults(coordinator, projectId, content, 'per-combination.xlsx').expect(201)).body.upload;
+      expect(upload.sheets).toEqual(['Notes', 'CO1', 'CO2']);
+      const mapping = { memberColumn: 'Member', stationColumn: 'x [m]', shearColumn: 'Vz [kN]', forceUnit: 'kN', lengthUnit: 'm', sheets: ['CO1', 'CO2'], combinationFromSheet: true };
+      const response = await coordinator.post(resultsUrl(projectId)).send({ uploadId: upload.id, mapping, modelRevisionId: revision.id, name: 'Per combination' }).expect(201);
+      expect(response.body.resultSet).toMatchObject({ sheet: 'CO1, CO2', rowCount: 12, combinations: ['CO1', 'CO2'] });
+    });
+
+    it('asks instead of guessing when the header does not settle a column, naming the candidates', async () => {
+      const upload = (await uploadResults(coordinator, projectId, 'Member,Combination,Load case,V2 [kN],V3 [kN]\nB1,CO1,LC1,1,2\n', 'numbered.csv').expect(201)).body.upload;
+      expect(upload.unsureMapping).toEqual([
+        { field: 'combinationColumn', columns: ['Combination', 'Load case'], why: 'each could be the load combination' },
+        { field: 'shearColumn', columns: ['V2 [kN]', 'V3 [kN]'], why: expect.stringContaining('numbered local axes') },
+      ]);
+    });
+  });
+
   describe('/api/projects/:projectId/result-mappings', () => {
+    it('downloads a template as the mapping file taulens check --mapping reads, and the command line checks with it', async () => {
+      const mapping = { memberColumn: 'Member', combinationColumn: 'Load combination', stationColumn: 'x [m]', shearColumn: 'Vz [kN]', forceUnit: 'kN', lengthUnit: 'm', memberKeyKind: 'name' };
+      const created = await coordinator.post(mappingsUrl(projectId)).send({ name: 'European export, v2', mapping }).expect(201);
+      const download = await (await app.signIn(team.reviewer)).get(`${mappingsUrl(projectId)}/${created.body.template.id}/download`).expect(200);
+      expect(download.headers['content-disposition']).toBe('attachment; filename=European-export-v2.mapping.json');
+      expect(JSON.parse(download.text)).toEqual(mapping);
+      await (await app.signIn(team.outsider)).get(`${mappingsUrl(projectId)}/${created.body.template.id}/download`).expect(404);
+      await coordinator.get(`${mappingsUrl(projectId)}/${team.project.id}/download`).expect(404);
+
+      const files = tempFiles('taulens-mapping-');
+      try {
+        let stdout = '';
+        const status = await dispatch(
+          ['check', buildingSmartSample('beam-varying-cardinal-points.ifc'), '--forces', fixturePath('european-export.csv'), '--mapping', files.write('european.mapping.json', download.text), '--standard', 'en1993-1-1', '--json'],
+          { out: (text) => (stdout += text), err: () => undefined },
+        );
+        expect(status).toBe(1);
+        const output = JSON.parse(stdout);
+        expect(output.forces.mapping).toEqual(mapping);
+        expect(output.members.find((member: { name: string }) => member.name === 'BotMid').governing).toMatchObject({ combination: 'CO1', station_m: 5, VEd_kN: -200 });
+      } finally {
+        files.remove();
+      }
+    });
+
+
     it('saves, lists and deletes templates; only coordinators change them', async () => {
       const mapping = { ...DEFAULT_MAPPING, stationColumn: 'x', lengthUnit: 'm', memberKeyKind: 'tag' };
       const created = await coordinator.post(mappingsUrl(projectId)).send({ name: 'With stations', mapping }).expect(201);
