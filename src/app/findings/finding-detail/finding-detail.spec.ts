@@ -81,6 +81,35 @@ describe('FindingDetail', () => {
     expect(buttons(page)).toEqual(['undo Reopen', 'gavel Accept as is…']);
   });
 
+  it("links a finding raised by a check run to the member's calculation sheet in that run", async () => {
+    const page = await open('reviewer', testDetail());
+    expect(page.querySelector('.sheet-link')!.getAttribute('href')).toBe(`/projects/${TEST_PROJECT_ID}/checks/run-1/members/2O2Fr$t4X7Zf8NOew3FLOH`);
+  });
+
+  it('links a finding raised by hand to no calculation sheet', async () => {
+    const page = await open('reviewer', testDetail({ finding: testFinding({ kind: 'manual', runId: null }) }));
+    expect(page.querySelector('.sheet-link')).toBeNull();
+  });
+
+  it('offers the project members matching what follows @ and writes the chosen one out as their address', async () => {
+    const page = await open('engineer', testDetail());
+    const box = page.querySelector<HTMLTextAreaElement>('.comment-form textarea')!;
+    box.focus();
+    box.value = 'Plate sizes agreed with @rev';
+    box.dispatchEvent(new Event('input'));
+    await settle();
+    const options = [...document.querySelectorAll<HTMLElement>('mat-option')];
+    expect(options.map((option) => option.textContent!.replace(/\s+/g, ' ').trim())).toEqual(['Test reviewer reviewer@example.test']);
+    options[0].click();
+    await settle();
+    expect(box.value).toBe('Plate sizes agreed with @reviewer@example.test ');
+
+    box.value = 'No mention here';
+    box.dispatchEvent(new Event('input'));
+    await settle();
+    expect(document.querySelectorAll('mat-option')).toHaveLength(0);
+  });
+
   it('shows the snapshot as the way into the 3D view when there is one', async () => {
     const page = await open('reviewer', testDetail({ finding: testFinding({ hasSnapshot: true, kind: 'manual' }) }));
     expect(page.querySelector('.view-link img')!.getAttribute('src')).toBe(`${findingApi}/snapshot.png`);

@@ -1,7 +1,9 @@
 import { DatePipe } from '@angular/common';
 import { httpResource } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatAutocompleteModule } from '@angular/material/autocomplete';
 import { MatButtonModule } from '@angular/material/button';
 import { MatChipInputEvent, MatChipsModule } from '@angular/material/chips';
 import { MatDialog } from '@angular/material/dialog';
@@ -36,6 +38,7 @@ import { FindingsApi, findingUrl } from '../findings-api';
 const MAX_COMMENT = 4000;
 const MAX_LABEL = 60;
 const MAX_LABELS = 20;
+const MAX_MENTION_CHOICES = 8;
 
 /** One finding: status actions the role allows, triage fields, comments with mentions, history and its view in 3D. */
 @Component({
@@ -44,6 +47,7 @@ const MAX_LABELS = 20;
     DatePipe,
     ReactiveFormsModule,
     RouterLink,
+    MatAutocompleteModule,
     MatButtonModule,
     MatChipsModule,
     MatFormFieldModule,
@@ -92,6 +96,12 @@ export class FindingDetail {
   });
   protected readonly snapshotUrl = computed(() => findingUrl(this.context.projectId(), this.findingId(), '/snapshot.png'));
   protected readonly viewLink = computed(() => ['/projects', this.context.projectId(), '3d-view']);
+  /** The member's calculation sheet in the run the finding follows (for an accepted finding, the run it was accepted on). */
+  protected readonly sheetLink = computed(() => {
+    const finding = this.finding();
+    if (!finding?.runId || finding.kind === 'manual' || finding.memberGlobalIds.length !== 1) return null;
+    return ['/projects', this.context.projectId(), 'checks', finding.runId, 'members', finding.memberGlobalIds[0]];
+  });
 
   protected readonly people = projectPeople(() => this.context.projectId());
 
@@ -111,6 +121,23 @@ export class FindingDetail {
     text: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(MAX_COMMENT), Validators.pattern(/\S/)] }),
   });
   protected readonly comment = this.commentForm.controls.text;
+  private readonly commentText = toSignal(this.comment.valueChanges, { initialValue: '' });
+
+  /**
+   * Members matching the "@…" being typed at the end of the comment, by name or address; each option's value is the
+   * whole comment with the mention written out as the address, which the server recognises unambiguously.
+   */
+  protected readonly mentionChoices = computed(() => {
+    const text = this.commentText();
+    const typing = /(^|\s)@([^\s@]*)$/.exec(text);
+    if (!typing) return [];
+    const typed = typing[2].toLowerCase();
+    const head = text.slice(0, typing.index + typing[1].length);
+    return this.people()
+      .filter((person) => person.name.toLowerCase().includes(typed) || person.email.toLowerCase().startsWith(typed))
+      .slice(0, MAX_MENTION_CHOICES)
+      .map((person) => ({ person, text: `${head}@${person.email} ` }));
+  });
 
   constructor() {
     // The form shows the stored values again after every load (and after a refused change).
