@@ -187,3 +187,44 @@ describe('computeCheckRun: run mechanics', () => {
     expect(seen.every((p, i) => i === 0 || p.done > seen[i - 1].done)).toBe(true);
   });
 });
+
+describe('computeCheckRun: sections of other families', () => {
+  // CHS 168.3 × 8 (EN 10210-2 size, from memory): A = π/4·(168.3² − 152.3²) mm²; EN 1993-1-1 §6.2.6(3)(g): Av = 2A/π;
+  // Vpl,Rd = Av·(fy/√3)/γM0 with fy = 355 MPa (S355, t ≤ 16 mm, EN 10025-2) and γM0 = 1.0 — closed forms.
+  const tube: MemberProfile = { family: 'tube', diameter_mm: 168.3, wallThickness_mm: 8, name: 'CHS 168.3x8', source: 'ifc-profile', ifcType: 'IfcCircleHollowProfileDef', fabrication: 'rolled' };
+  const area_mm2 = (Math.PI / 4) * (168.3 ** 2 - 152.3 ** 2);
+  const vplRd_N = ((2 * area_mm2) / Math.PI) * (355 / Math.sqrt(3));
+  const en = { standard: 'en1993-1-1', gammaM0: 1.0 } as const;
+  const steel = material('S355', 355);
+
+  it('checks a circular hollow section against its plastic shear resistance, major axis', () => {
+    const [check] = run([member('CHS', tube, steel)], { CHS: [shear('ULS-1', 200_000), shear('ULS-2', -400_000)] }, en).members;
+    expect(check.status).toBe('pass');
+    expect(check.governing).toMatchObject({ combination: 'ULS-2', axis: 'major', check: 'major-axis shear' });
+    // Outline chords make A a hair smaller than the circle's (0.01 mm chord tolerance): 0.1 % covers it.
+    expect(Math.abs(check.governing!.VRd_N - vplRd_N) / vplRd_N).toBeLessThan(1e-3);
+    expect(check.governing!.utilisation).toBeCloseTo(400_000 / check.governing!.VRd_N, 12);
+    expect(check.governing!.tauMax_MPa).toBeGreaterThan(0);
+  });
+
+  it('fails it above the resistance and says which axis and check governed', () => {
+    const [check] = run([member('CHS', tube, steel)], { CHS: [shear('ULS-1', 1.2 * vplRd_N)] }, en).members;
+    expect(check).toMatchObject({ status: 'fail', governing: { axis: 'major', check: 'major-axis shear' } });
+  });
+
+  it('marks an angle not applicable under EN 1993-1-1, which gives it no shear area rule, with the reason', () => {
+    const angle: MemberProfile = { family: 'angle', depth_mm: 100, width_mm: 100, thickness_mm: 10, rootRadius_mm: 12, name: 'L100x100x10', source: 'ifc-profile', ifcType: 'IfcLShapeProfileDef', fabrication: 'rolled' };
+    const [check] = run([member('L', angle, steel)], { L: [shear('ULS-1', 10_000)] }, en).members;
+    expect(check).toMatchObject({ status: 'not-applicable', reason: expect.stringContaining('No shear check for this section by this standard') });
+  });
+
+  it('uses the project resistance factor for other families as for I-sections (AISC LRFD)', () => {
+    const hss: MemberProfile = { ...tube, name: 'HSS' };
+    const base = run([member('H', hss, material('A992', 345))], { H: [shear('ULS-1', 10_000)] }, { standard: 'aisc360-22-lrfd' }).members[0];
+    const lower = run([member('H', hss, material('A992', 345))], { H: [shear('ULS-1', 10_000)] }, { standard: 'aisc360-22-lrfd', phiV: 0.8 }).members[0];
+    // AISC 360-22 §G5: φv = 0.90 for round HSS; the project's 0.80 scales VRd by 0.8/0.9.
+    expect(lower.governing!.VRd_N / base.governing!.VRd_N).toBeCloseTo(0.8 / 0.9, 12);
+    expect(lower.flags).toContain('resistance-factor-overridden');
+    expect(base.flags).not.toContain('resistance-factor-overridden');
+  });
+});

@@ -22,7 +22,10 @@ import { EngineInputError } from '../engine/input-error';
 import type { Fabrication, ISectionInput } from '../engine/section';
 import { shearStressProfile } from '../engine/shear-stress';
 import { formatNumber as f, step } from '../engine/trace';
-import { type IMemberProfile, isIProfile, type MemberFlag, type MemberRecord } from '../ifc/model-read-result';
+import { type AxisCapacity, evaluateFamilyCheck, FamilyCapacityCache, type FamilyCheckFlag, familyUtilisation, type PreparedFamilyCapacity } from '../engine/family-capacity';
+import { webShearArea_mm2 } from '../engine/section-family';
+import type { FamilyCheckName, ShearAxis } from '../engine/shear-axis';
+import { type IMemberProfile, isIProfile, type MemberFlag, type MemberProfile, type MemberRecord, sectionDimensionsOf } from '../ifc/model-read-result';
 import type { GoverningShear } from '../results/governing-shear';
 import type { CheckParameters } from './check-parameters';
 
@@ -32,6 +35,7 @@ export type MemberCheckStatus = 'pass' | 'fail' | 'not-checked' | 'not-applicabl
 
 export type RunFlag =
   | CheckFlag
+  | FamilyCheckFlag
   | MemberFlag
   | 'no-results'
   | 'fabrication-overridden'
@@ -55,6 +59,9 @@ export interface GoverningCheck extends CombinationCheck {
   tauAvgWeb_MPa: number;
   /** EN 1993-1-1 (6.19)/(6.20), reported beside the check; null for AISC. */
   elasticUtilisation: number | null;
+  /** The axis and check that govern ('major' and 'major-axis shear' for the web of an I); absent in older runs. */
+  axis?: ShearAxis;
+  check?: FamilyCheckName;
 }
 
 export interface MemberCheck {
@@ -109,16 +116,17 @@ const PROGRESS_STEPS = 100;
 export function computeCheckRun(input: CheckRunInput): CheckRunComputation {
   const { members, shears, parameters, onProgress } = input;
   const capacities = new RunCapacities(parameters);
+  const families = new RunFamilyCapacities(parameters);
   const overrides = fabricationOverrides(parameters);
   const every = Math.max(1, Math.ceil(members.length / PROGRESS_STEPS));
   const results: MemberCheck[] = [];
   members.forEach((member, index) => {
-    results.push(checkOneMember(member, shears.get(member.globalId) ?? [], parameters, overrides, capacities));
+    results.push(checkOneMember(member, shears.get(member.globalId) ?? [], parameters, overrides, capacities, families));
     if (onProgress && ((index + 1) % every === 0 || index + 1 === members.length)) {
       onProgress({ done: index + 1, total: members.length });
     }
   });
-  return { members: results, summary: summarise(results, capacities.size) };
+  return { members: results, summary: summarise(results, capacities.size + families.size) };
 }
 
 function checkOneMember(
@@ -127,6 +135,7 @@ function checkOneMember(
   parameters: CheckParameters,
   overrides: ReadonlyMap<string, Fabrication>,
   capacities: RunCapacities,
+  families: RunFamilyCapacities,
 ): MemberCheck {
   const memberFlags: RunFlag[] = [...member.flags];
   const unchecked = (status: MemberCheckStatus, reason: string, flags: RunFlag[] = memberFlags): MemberCheck => ({
@@ -144,8 +153,9 @@ function checkOneMember(
   if (member.status === 'not-applicable') return unchecked('not-applicable', member.reason ?? 'The profile is not an I-section.');
   // A flagged member may carry a section (read, but on a member of no length, say); it is never checked.
   if (member.status === 'flagged') return unchecked('not-checked', member.reason ?? 'The model reader flagged this member.');
-  if (!isIProfile(member.profile)) return unchecked('not-checked', member.reason ?? 'No I-section could be read for this member.');
+  if (!member.profile) return unchecked('not-checked', member.reason ?? 'No section could be read for this member.');
   if (shears.length === 0) return unchecked('not-checked', 'No shear results were matched to this member.', [...memberFlags, 'no-results']);
+  if (!isIProfile(member.profile)) return checkFamilyMember(member, member.profile, shears, parameters, overrides, families, unchecked);
 
   const { section, overridden } = checkedSection(member.profile, overrides);
   const material = materialOf(member, parameters);
@@ -185,6 +195,66 @@ function checkOneMember(
       tauMax_MPa: magnitude * prepared.tauMaxPerNewton_MPa,
       tauAvgWeb_MPa: magnitude * prepared.tauAvgWebPerNewton_MPa,
       elasticUtilisation: result.elasticUtilisation,
+    },
+    combinations,
+    flags: [...new Set<RunFlag>([...memberFlags, ...result.flags, ...runFlags])],
+  };
+}
+
+/**
+ * A member of another family (channel, tee, angle, box, tube) against the shear parallel to its web(s): the results
+ * give one shear force per combination, taken as the major-axis shear.
+ */
+function checkFamilyMember(
+  member: CheckableMember,
+  profile: MemberProfile,
+  shears: readonly GoverningShear[],
+  parameters: CheckParameters,
+  overrides: ReadonlyMap<string, Fabrication>,
+  families: RunFamilyCapacities,
+  unchecked: (status: MemberCheckStatus, reason: string, flags?: RunFlag[]) => MemberCheck,
+): MemberCheck {
+  const memberFlags: RunFlag[] = [...member.flags];
+  const fabrication = overrides.get(sectionKey(profile.name)) ?? profile.fabrication;
+  const material = materialOf(member, parameters);
+  const prepared = families.get(profile, fabrication, material);
+  if (prepared instanceof EngineInputError) {
+    return unchecked('not-checked', `The section cannot be checked: ${prepared.message}.`, [...memberFlags, 'invalid-profile']);
+  }
+  const axis = prepared.major;
+  if (!axis.applicable) return unchecked('not-applicable', `No shear check for this section by this standard: ${axis.reason}.`);
+  const combinations = shears.map((shear) => ({
+    combination: shear.combination,
+    VEd_N: shear.shear_N,
+    utilisation: familyUtilisation(axis, shear.shear_N),
+    ...(shear.station_mm !== undefined && { station_mm: shear.station_mm }),
+    row: shear.row,
+    memberKey: shear.memberKey,
+  }));
+  let governing = combinations[0];
+  for (const combination of combinations) if (combination.utilisation > governing.utilisation) governing = combination;
+  const contextFlags: FamilyCheckFlag[] = material.assumed ? ['assumed-grade'] : [];
+  if (profile.source === 'catalogue' || profile.source === 'project-catalogue') contextFlags.push('catalogue-section');
+  const result = evaluateFamilyCheck(prepared, 'major', { shear_N: governing.VEd_N }, contextFlags);
+  const runFlags: RunFlag[] = fabrication !== profile.fabrication ? ['fabrication-overridden'] : [];
+  if (axis.aisc && projectResistanceFactor(parameters) !== null) runFlags.push('resistance-factor-overridden');
+  if (new Set(shears.map((shear) => shear.memberKey)).size > 1) runFlags.push('several-result-keys');
+  const magnitude = Math.abs(governing.VEd_N);
+  return {
+    globalId: member.globalId,
+    status: result.status === 'fail' ? 'fail' : 'pass',
+    warning: result.warning,
+    grade: material.grade,
+    fy_MPa: result.fy_MPa,
+    fabrication: prepared.fabrication,
+    governing: {
+      ...governing,
+      VRd_N: result.VRd_N,
+      tauMax_MPa: magnitude * axis.tauMaxPerShear_perMm2,
+      tauAvgWeb_MPa: magnitude / webShearArea_mm2(prepared.dimensions),
+      elasticUtilisation: result.elasticUtilisation,
+      axis: 'major',
+      check: result.governing,
     },
     combinations,
     flags: [...new Set<RunFlag>([...memberFlags, ...result.flags, ...runFlags])],
@@ -291,6 +361,56 @@ class RunCapacities {
     }
     return entry;
   }
+}
+
+/**
+ * Prepared capacities of the other families for a run: both axes, once per section, grade and fabrication. A
+ * project resistance factor (AISC φv / Ωv) replaces the standard's, as for I-sections.
+ */
+class RunFamilyCapacities {
+  private readonly engine = new FamilyCapacityCache();
+  private readonly adjusted = new Map<PreparedFamilyCapacity, PreparedFamilyCapacity>();
+
+  constructor(private readonly parameters: CheckParameters) {}
+
+  get size(): number {
+    return this.engine.size;
+  }
+
+  get(profile: MemberProfile, fabrication: Fabrication, material: MaterialChoice): PreparedFamilyCapacity | EngineInputError {
+    let base: PreparedFamilyCapacity;
+    try {
+      base = this.engine.get(sectionDimensionsOf(profile), { grade: material.grade }, this.parameters.standard, { ...engineParamsOf(this.parameters), fabrication });
+    } catch (error) {
+      if (error instanceof EngineInputError) return error;
+      throw error;
+    }
+    let prepared = this.adjusted.get(base);
+    if (!prepared) {
+      prepared = { ...base, major: this.withResistanceFactor(base.major), minor: this.withResistanceFactor(base.minor) };
+      this.adjusted.set(base, prepared);
+    }
+    return prepared;
+  }
+
+  private withResistanceFactor(axis: PreparedFamilyCapacity['major']): PreparedFamilyCapacity['major'] {
+    if (!axis.applicable || !axis.aisc) return axis;
+    const parameters = this.parameters;
+    const factor = projectResistanceFactor(parameters);
+    if (factor === null) return axis;
+    const VRd_N = factor * axis.aisc.vn_N;
+    const formula = parameters.standard === 'aisc360-22-lrfd' ? 'φv·Vn' : 'Vn/Ωv';
+    const override = step('AISC 360-22 §G1', 'Available shear strength with the project’s resistance factor', formula, `${f(factor)} × ${f(axis.aisc.vn_N / 1000)} kN`, VRd_N / 1000, 'kN');
+    const adjusted: AxisCapacity = { ...axis, VRd_N, trace: [...axis.trace, override] };
+    return adjusted;
+  }
+}
+
+/** The project's AISC resistance factor φv, or 1/Ωv for ASD, when the run sets one; null otherwise. */
+function projectResistanceFactor(parameters: CheckParameters): number | null {
+  if (parameters.standard === 'aisc360-22-lrfd') return parameters.phiV;
+  if (parameters.standard === 'aisc360-22-asd' && parameters.omegaV !== null) return 1 / parameters.omegaV;
+  return null;
 }
 
 /** The engine's parameters for a run's. */

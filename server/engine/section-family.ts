@@ -157,6 +157,30 @@ export function webThickness_mm(d: SectionDimensions): number | null {
   }
 }
 
+/**
+ * The plates that carry shear parallel to y, for the average web stress reported beside the check: the clear web of an
+ * I or channel, the stem of a tee, both webs of a box, the vertical leg of an angle, half a tube's wall.
+ */
+export function webShearArea_mm2(d: SectionDimensions): number {
+  switch (d.family) {
+    case 'I':
+      return (d.depth_mm - d.topFlange.thickness_mm - d.bottomFlange.thickness_mm) * d.webThickness_mm;
+    case 'channel':
+      return (d.depth_mm - 2 * d.flangeThickness_mm) * d.webThickness_mm;
+    case 'tee':
+      return (d.depth_mm - d.flangeThickness_mm) * d.webThickness_mm;
+    case 'box':
+      return 2 * (d.depth_mm - 2 * d.flangeThickness_mm) * d.webThickness_mm;
+    case 'angle':
+      return d.depth_mm * d.thickness_mm;
+    case 'tube':
+      return (Math.PI * (d.diameter_mm - d.wallThickness_mm) * d.wallThickness_mm) / 2;
+    case 'plate':
+    case 'other':
+      return d.depth_mm * d.width_mm;
+  }
+}
+
 /** Thickness of the flange(s) (the top flange of an I), null for families without one. */
 export function flangeThickness_mm(d: SectionDimensions): number | null {
   switch (d.family) {

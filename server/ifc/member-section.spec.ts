@@ -38,10 +38,11 @@ describe('SectionResolver.fromOutline', () => {
     expect(outcome.status).not.toBe('ok');
   });
 
-  it('lists a channel outline with its dimensions, unchecked', () => {
+  it('reads a channel outline with its dimensions and section properties, for checking', () => {
     const channel = sectionOutline({ family: 'channel', depth_mm: 200, width_mm: 80, webThickness_mm: 6, flangeThickness_mm: 11, rootRadius_mm: 13 }, 0.01);
     expect(resolver.fromOutline(channel, origin, ['UPE 200'])).toMatchObject({
-      status: 'not-applicable',
+      status: 'ok',
+      section: { area_mm2: expect.any(Number) },
       profile: { family: 'channel', source: 'outline', depth_mm: expect.closeTo(200, 6), width_mm: expect.closeTo(80, 6) },
     });
   });

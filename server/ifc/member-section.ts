@@ -12,6 +12,8 @@ import type { CatalogueHit, CatalogueSection } from '../catalogue/catalogue-sect
 import type { FlangeInput, ISectionInput } from '../engine/section';
 import { SectionInputError } from '../engine/section';
 import { overallDepth_mm, overallWidth_mm, SECTION_FAMILY_LABELS, webThickness_mm, type SectionDimensions, type SectionPolygon } from '../engine/section-family';
+import { defaultFabrication } from '../engine/family-capacity';
+import { polygonAxisSection } from '../engine/polygon-axis-section';
 import { sectionOutline } from '../engine/section-outline';
 import { normalisePolygon, polygonProperties, type PolygonProperties } from '../engine/section-polygon';
 import { recogniseSection } from '../engine/section-recognition';
@@ -19,6 +21,9 @@ import { sectionProperties } from '../engine/section-properties';
 import { fabricationOf } from './fabrication';
 import { type MemberFlag, type MemberProfile, type MemberSection, type ProfileSource, sectionDimensionsOf } from './model-read-result';
 import type { IShapeReading, ProfileReading } from './profile-reader';
+
+/** Chord tolerance of the outlines members are measured with: far below any rolling tolerance (common practice, no source). */
+const OUTLINE_TOLERANCE_MM = 0.01;
 
 export type SectionOutcome =
   | { status: 'ok'; profile: MemberProfile; section: MemberSection; flags: MemberFlag[] }
@@ -77,12 +82,7 @@ export class SectionResolver {
 
   /** A section known by its dimensions (from a parametric profile, a measured outline or a body cut). */
   fromDimensions(dimensions: SectionDimensions, origin: SectionOrigin, inRolledCatalogue = false): SectionOutcome {
-    if (dimensions.family !== 'I') {
-      const profile: MemberProfile = { ...dimensions, name: origin.name, source: origin.source, ifcType: origin.ifcType, fabrication: 'rolled' };
-      const family = SECTION_FAMILY_LABELS[dimensions.family];
-      const what = origin.name ? `'${origin.name}': ${family}` : `Section: ${family}`;
-      return { status: 'not-applicable', reason: `${what}. Its web check is not available yet; it is listed with its dimensions only.`, profile, flags: origin.flags };
-    }
+    if (dimensions.family !== 'I') return this.fromOtherFamily(dimensions, origin);
     const input: ISectionInput = {
       depth_mm: dimensions.depth_mm,
       webThickness_mm: dimensions.webThickness_mm,
@@ -91,6 +91,32 @@ export class SectionResolver {
       fabrication: fabricationOf({ ...dimensions, inRolledCatalogue }),
     };
     return this.withProperties(input, origin);
+  }
+
+  /**
+   * Channels, tees, angles, boxes and tubes are checked through their outline (engine/family-capacity.ts); plates and
+   * other shapes have no shear rule and are listed with their dimensions only.
+   */
+  private fromOtherFamily(dimensions: Exclude<SectionDimensions, { family: 'I' }>, origin: SectionOrigin): SectionOutcome {
+    const profile: MemberProfile = { ...dimensions, name: origin.name, source: origin.source, ifcType: origin.ifcType, fabrication: defaultFabrication(dimensions) };
+    const family = SECTION_FAMILY_LABELS[dimensions.family];
+    const named = origin.name ? `'${origin.name}': ${family}` : `Section: ${family}`;
+    if (dimensions.family === 'plate' || dimensions.family === 'other') {
+      return { status: 'not-applicable', reason: `${named}. There is no web shear rule for this family; it is listed with its dimensions only.`, profile, flags: origin.flags };
+    }
+    try {
+      const major = polygonAxisSection(sectionOutline(dimensions, OUTLINE_TOLERANCE_MM), 'major');
+      const section: MemberSection = {
+        area_mm2: major.area_mm2,
+        iMajor_mm4: major.i_mm4,
+        qMax_mm3: major.firstMoment_mm3(major.neutralAxis_mm),
+        neutralAxisFromBottom_mm: major.neutralAxis_mm - major.from_mm,
+      };
+      return { status: 'ok', profile, section, flags: origin.flags };
+    } catch (error) {
+      if (!(error instanceof SectionInputError)) throw error;
+      return { status: 'flagged', reason: `${named} with dimensions that do not make a section: ${error.message}.`, flags: [...origin.flags, 'invalid-profile'] };
+    }
   }
 
   private resolveUncached(reading: ProfileReading, fallbackNames: readonly (string | null)[]): SectionOutcome {

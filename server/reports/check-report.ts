@@ -48,6 +48,10 @@ const FLAG_TEXT: Readonly<Partial<Record<RunFlag, string>>> = {
   'fabrication-overridden': 'The run sets the fabrication (rolled or welded) differently from the model.',
   'resistance-factor-overridden': 'A project resistance factor replaces the code value.',
   'several-result-keys': 'Shear results of several analysis members are combined for this member.',
+  'tension-field-not-counted': 'Tension-field action (AISC 360-22 §G2.2) would add strength; it is not counted.',
+  'flexure-checked-separately': 'A moment acts with the shear: check flexure and combined forces separately (AISC 360-22 chapters F and H).',
+  'shear-length-not-given': 'No shear length was given, so the length-dependent buckling term was left out (conservative).',
+  'whole-section-reduced-for-shear': 'The reduced yield strength for shear was applied to the whole section (conservative).',
 };
 
 const SHEET_STATUS = {
