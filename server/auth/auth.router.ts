@@ -69,6 +69,10 @@ export function authRouter(ctx: AppContext, deps: { passport: PassportInstance; 
     res.status(202).json({ status: 'accepted' });
   });
 
+  router.post('/invitations/:token/join', tokenLimit, requireSignedIn, validate(tokenInput), async (req, res) => {
+    res.json(await invitations.join(inputOf(res, tokenInput).params.token, currentUser(req)));
+  });
+
   router.get('/password-reset/:token', tokenLimit, validate(tokenInput), async (_req, res) => {
     res.json(await resets.lookup(inputOf(res, tokenInput).params.token));
   });

@@ -9,6 +9,8 @@ export interface InvitationMailInput {
   project?: { name: string; role: string };
   acceptUrl: string;
   expiresAt: Date;
+  /** The address has an account: the invitee signs in to join instead of creating one. */
+  hasAccount: boolean;
 }
 
 export function invitationMail(input: InvitationMailInput): MailMessage {
@@ -19,7 +21,9 @@ export function invitationMail(input: InvitationMailInput): MailMessage {
     greeting: input.inviteeName ? `Hello ${input.inviteeName},` : 'Hello,',
     paragraphs: [
       `${input.inviterName} invited you to Taulens${where}. Taulens checks the web shear of the steel members in a structural model.`,
-      'Open the link below, confirm your name and choose a password to create your account.',
+      input.hasAccount
+        ? 'You already have a Taulens account with this address: open the link below and sign in to join.'
+        : 'Open the link below, confirm your name and choose a password to create your account.',
     ],
     action: { label: 'Accept the invitation', url: input.acceptUrl },
     notes: [

@@ -19,6 +19,7 @@ describe('mail layout', () => {
       project: { name: 'Depot & Offices', role: 'engineer' },
       acceptUrl: 'http://taulens.test/invitations/abc_DEF-123',
       expiresAt: new Date('2026-12-08T21:05:00Z'),
+      hasAccount: false,
     });
     expect(mail.subject).toBe('You are invited to Depot & Offices on Taulens');
     expect(mail.text).toContain('Accept the invitation: http://taulens.test/invitations/abc_DEF-123');
@@ -27,6 +28,13 @@ describe('mail layout', () => {
     expect(mail.html).toContain('href="http://taulens.test/invitations/abc_DEF-123"');
     expect(mail.html).toContain('Hello Ana &lt;b&gt;,');
     expect(mail.html).not.toContain('<b>');
+  });
+
+  it('asks the holder of an existing account to sign in and join, not to create an account', () => {
+    const input = { to: 'known@example.test', inviteeName: '', inviterName: 'Corin', project: { name: 'Depot', role: 'reviewer' } };
+    const mail = invitationMail({ ...input, acceptUrl: 'http://taulens.test/invitations/x', expiresAt: new Date(), hasAccount: true });
+    expect(mail.text).toContain('sign in to join');
+    expect(mail.text).not.toContain('create your account');
   });
 
   it('says who asked for a password reset', () => {

@@ -3,7 +3,6 @@ import { runTransaction } from '../data-source';
 import { ConflictError, NotFoundError } from '../http/errors';
 import { type InvitationView, InvitationService } from '../users/invitation.service';
 import type { Mailer } from '../mail/mailer';
-import { User } from '../users/user.entity';
 import { ProjectMember } from './project-member.entity';
 import type { ProjectRole } from './project-role';
 
@@ -14,8 +13,6 @@ export interface MemberView {
   role: ProjectRole;
   active: boolean;
 }
-
-export type AddMemberResult = { outcome: 'added'; member: MemberView } | { outcome: 'invited'; invitation: InvitationView };
 
 export class MemberService {
   private readonly invitations: InvitationService;
@@ -37,21 +34,15 @@ export class MemberService {
     return members.map(toMemberView);
   }
 
-  /** Adds an existing user straight away; anyone else gets an invitation e-mail for this project. */
-  async add(projectId: string, email: string, role: ProjectRole, actor: { id: string; name: string }): Promise<AddMemberResult> {
-    const user = await this.dataSource.getRepository(User).findOneBy({ email: email.toLowerCase() });
-    if (!user) {
-      const invitation = await this.invitations.invite({ email, project: { id: projectId, role }, invitedBy: actor });
-      return { outcome: 'invited', invitation };
+  /**
+   * Invites the address into the project, whether or not it has an account, so the answer never tells which; the
+   * invitee joins by accepting. Only someone already in the project is refused, as the member list shows them anyway.
+   */
+  async add(projectId: string, email: string, role: ProjectRole, actor: { id: string; name: string }): Promise<{ invitation: InvitationView }> {
+    if (await this.dataSource.getRepository(ProjectMember).existsBy({ projectId, user: { email: email.toLowerCase() } })) {
+      throw new ConflictError(`${email} is already a member of this project.`, { code: 'already_member' });
     }
-    const member = await runTransaction(this.dataSource, async (manager) => {
-      if (await manager.existsBy(ProjectMember, { projectId, userId: user.id })) {
-        throw new ConflictError(`${user.name} is already a member of this project.`, { code: 'already_member' });
-      }
-      await manager.insert(ProjectMember, { projectId, userId: user.id, role });
-      return findMember(manager, projectId, user.id);
-    });
-    return { outcome: 'added', member: toMemberView(member) };
+    return { invitation: await this.invitations.invite({ email, project: { id: projectId, role }, invitedBy: actor }) };
   }
 
   async setRole(projectId: string, userId: string, role: ProjectRole): Promise<MemberView> {

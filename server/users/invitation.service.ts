@@ -1,7 +1,7 @@
 import { type DataSource, IsNull, MoreThan } from 'typeorm';
 import { runTransaction } from '../data-source';
 import { createLinkToken, hashLinkToken } from '../auth/token';
-import { ConflictError, GoneError, NotFoundError } from '../http/errors';
+import { ConflictError, ForbiddenError, GoneError, NotFoundError } from '../http/errors';
 import { invitationMail } from '../mail/invitation-mail';
 import type { Mailer } from '../mail/mailer';
 import { Project } from '../projects/project.entity';
@@ -27,6 +27,16 @@ export interface InvitationView {
   expiresAt: string;
 }
 
+/** What the invitation link shows to whoever holds it (the invitee). */
+export interface InvitationPreview {
+  email: string;
+  name: string;
+  expiresAt: string;
+  /** An address with an account joins by signing in; any other creates its account. */
+  hasAccount: boolean;
+  project: { name: string; role: ProjectRole } | null;
+}
+
 export class InvitationService {
   constructor(
     private readonly dataSource: DataSource,
@@ -34,10 +44,15 @@ export class InvitationService {
     private readonly publicUrl: string,
   ) {}
 
-  /** Stores the invitation and e-mails its link; if the e-mail fails, nothing is kept. */
+  /**
+   * Stores the invitation and e-mails its link; if the e-mail fails, nothing is kept. A project invitation goes out the
+   * same way whether or not the address has an account, so the inviter does not learn which; the invitee joins by
+   * accepting. Site invitations (no project, or admin rights) are for new accounts only: admins see every account.
+   */
   async invite(request: InvitationRequest): Promise<InvitationView> {
     const email = request.email.toLowerCase();
-    if (await this.dataSource.getRepository(User).existsBy({ email })) {
+    const hasAccount = await this.dataSource.getRepository(User).existsBy({ email });
+    if (hasAccount && (!request.project || request.isAdmin)) {
       throw new ConflictError('A user with this e-mail address already exists.', { code: 'user_exists' });
     }
     const project = request.project
@@ -69,6 +84,7 @@ export class InvitationService {
           project: project && request.project ? { name: project.name, role: request.project.role } : undefined,
           acceptUrl: `${this.publicUrl}/invitations/${token}`,
           expiresAt,
+          hasAccount,
         }),
       );
     } catch (error) {
@@ -78,9 +94,16 @@ export class InvitationService {
     return { id: invitation.id, email, expiresAt: expiresAt.toISOString() };
   }
 
-  async lookup(token: string): Promise<{ email: string; name: string; expiresAt: string }> {
+  async lookup(token: string): Promise<InvitationPreview> {
     const invitation = await this.findUsable(token);
-    return { email: invitation.email, name: invitation.name, expiresAt: invitation.expiresAt.toISOString() };
+    const project = invitation.projectId ? await this.dataSource.getRepository(Project).findOneBy({ id: invitation.projectId }) : null;
+    return {
+      email: invitation.email,
+      name: invitation.name,
+      expiresAt: invitation.expiresAt.toISOString(),
+      hasAccount: await this.dataSource.getRepository(User).existsBy({ email: invitation.email }),
+      project: project && invitation.role ? { name: project.name, role: invitation.role } : null,
+    };
   }
 
   /**
@@ -89,11 +112,13 @@ export class InvitationService {
    */
   async accept(token: string, input: { name: string; password: string }): Promise<User> {
     const invitation = await this.findUsable(token);
+    if (await this.dataSource.getRepository(User).existsBy({ email: invitation.email })) throw accountExistsError();
     const passwordHash = await hashPassword(input.password);
     return runTransaction(this.dataSource, async (manager) => {
       // Checked again inside the transaction: a second accept may have run meanwhile.
       const fresh = await manager.findOneByOrFail(Invitation, { id: invitation.id });
-      if (fresh.usedAt || (await manager.existsBy(User, { email: fresh.email }))) throw usedError();
+      if (fresh.usedAt) throw usedError();
+      if (await manager.existsBy(User, { email: fresh.email })) throw accountExistsError();
 
       const others = await manager.findBy(Invitation, { email: fresh.email, usedAt: IsNull(), expiresAt: MoreThan(new Date()) });
       const open = [fresh, ...others.filter((i) => i.id !== fresh.id)];
@@ -113,6 +138,26 @@ export class InvitationService {
     });
   }
 
+  /** The signed-in holder of the invited address joins the invitation's project with its role. */
+  async join(token: string, user: { id: string; email: string }): Promise<{ projectId: string | null }> {
+    const invitation = await this.findUsable(token);
+    if (invitation.email !== user.email) {
+      throw new ForbiddenError(`This invitation is for ${invitation.email}. Sign out and sign in with that address to accept it.`, {
+        code: 'invitation_for_other_account',
+      });
+    }
+    return runTransaction(this.dataSource, async (manager) => {
+      const fresh = await manager.findOneByOrFail(Invitation, { id: invitation.id });
+      if (fresh.usedAt) throw usedError();
+      const { projectId, role } = fresh;
+      if (projectId && role && !(await manager.existsBy(ProjectMember, { projectId, userId: user.id }))) {
+        await manager.insert(ProjectMember, { projectId, userId: user.id, role });
+      }
+      await manager.update(Invitation, fresh.id, { usedAt: new Date() });
+      return { projectId: fresh.projectId };
+    });
+  }
+
   private async findUsable(token: string): Promise<Invitation> {
     const invitation = await this.dataSource.getRepository(Invitation).findOneBy({ tokenHash: hashLinkToken(token) });
     if (!invitation) {
@@ -120,9 +165,7 @@ export class InvitationService {
         code: 'invitation_not_found',
       });
     }
-    if (invitation.usedAt || (await this.dataSource.getRepository(User).existsBy({ email: invitation.email }))) {
-      throw usedError();
-    }
+    if (invitation.usedAt) throw usedError();
     if (invitation.expiresAt.getTime() <= Date.now()) {
       throw new GoneError('This invitation has expired. Ask an administrator or project coordinator to invite you again.', {
         code: 'invitation_expired',
@@ -135,6 +178,12 @@ export class InvitationService {
 function usedError(): GoneError {
   return new GoneError('This invitation has already been used. Sign in with your e-mail address and password.', {
     code: 'invitation_used',
+  });
+}
+
+function accountExistsError(): ConflictError {
+  return new ConflictError('This address already has an account. Sign in with it, then open the invitation link again to join.', {
+    code: 'account_exists',
   });
 }
 

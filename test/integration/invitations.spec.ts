@@ -33,7 +33,13 @@ describe('invitations', () => {
 
     const invitee = await app.agent();
     const lookup = await invitee.get(`/api/auth/invitations/${link.token}`).expect(200);
-    expect(lookup.body).toEqual({ email: 'new.person@example.test', name: 'New Person', expiresAt: created.body.invitation.expiresAt });
+    expect(lookup.body).toEqual({
+      email: 'new.person@example.test',
+      name: 'New Person',
+      expiresAt: created.body.invitation.expiresAt,
+      hasAccount: false,
+      project: null,
+    });
 
     const accepted = await invitee.post(`/api/auth/invitations/${link.token}/accept`).send({ name: 'Nell Person', password: NEW_PASSWORD }).expect(200);
     expect(accepted.body.user).toMatchObject({ email: 'new.person@example.test', name: 'Nell Person', isAdmin: false });
@@ -127,30 +133,54 @@ describe('invitations', () => {
     expect(response.body.error.details).toEqual([{ location: 'body', field: 'role', message: 'give both projectId and role, or neither' }]);
   });
 
-  it('lets a coordinator add an existing user at once, or invite a new address into the project', async () => {
+  it('answers a coordinator the same for an address with an account and one without: both are invited and join only by accepting', async () => {
     const team = await createTeam(app.dataSource);
     const coordinator = await app.signIn(team.coordinator);
+    const membersUrl = `/api/projects/${team.project.id}/members`;
+    const memberEmails = async () => (await coordinator.get(membersUrl).expect(200)).body.members.map((m: { email: string }) => m.email);
 
-    const added = await coordinator.post(`/api/projects/${team.project.id}/members`).send({ email: team.outsider.email, role: 'engineer' }).expect(201);
-    expect(added.body).toEqual({
-      outcome: 'added',
-      member: { userId: team.outsider.id, email: team.outsider.email, name: team.outsider.name, role: 'engineer', active: true },
+    const existing = await coordinator.post(membersUrl).send({ email: team.outsider.email, role: 'engineer' }).expect(201);
+    const fresh = await coordinator.post(membersUrl).send({ email: 'site.engineer@example.test', role: 'engineer' }).expect(201);
+    for (const [response, email] of [[existing, team.outsider.email], [fresh, 'site.engineer@example.test']] as const) {
+      expect(response.body).toEqual({ invitation: { id: expect.any(String), email, expiresAt: expect.any(String) } });
+    }
+    expect(await memberEmails()).not.toContain(team.outsider.email);
+    const already = await coordinator.post(membersUrl).send({ email: team.engineer.email, role: 'reviewer' }).expect(409);
+    expect(already.body.error.code).toBe('already_member');
+
+    // The holder of an account joins by signing in; the link cannot create a second account for the address.
+    const existingMail = await lastMailTo(app.dataSource, team.outsider.email);
+    expect(existingMail.text).toContain(`as engineer in the project “${team.project.name}”`);
+    expect(existingMail.text).toContain('sign in');
+    const existingLink = linkIn(existingMail, app.config.publicUrl, '/invitations/').token;
+    const anonymous = await app.agent();
+    expect((await anonymous.get(`/api/auth/invitations/${existingLink}`).expect(200)).body).toEqual({
+      email: team.outsider.email,
+      name: '',
+      expiresAt: existing.body.invitation.expiresAt,
+      hasAccount: true,
+      project: { name: team.project.name, role: 'engineer' },
     });
-    const twice = await coordinator.post(`/api/projects/${team.project.id}/members`).send({ email: team.outsider.email, role: 'reviewer' }).expect(409);
-    expect(twice.body.error.code).toBe('already_member');
+    const second = await anonymous.post(`/api/auth/invitations/${existingLink}/accept`).send({ name: 'Twin', password: NEW_PASSWORD }).expect(409);
+    expect(second.body.error.code).toBe('account_exists');
+    await anonymous.post(`/api/auth/invitations/${existingLink}/join`).expect(401);
+    const someoneElse = await app.signIn(team.reviewer);
+    const wrongAccount = await someoneElse.post(`/api/auth/invitations/${existingLink}/join`).expect(403);
+    expect(wrongAccount.body.error.code).toBe('invitation_for_other_account');
+    expect(await memberEmails()).not.toContain(team.outsider.email);
 
-    const invited = await coordinator.post(`/api/projects/${team.project.id}/members`).send({ email: 'site.engineer@example.test', role: 'engineer' }).expect(201);
-    expect(invited.body).toMatchObject({ outcome: 'invited', invitation: { email: 'site.engineer@example.test' } });
-    const mail = await lastMailTo(app.dataSource, 'site.engineer@example.test');
-    expect(mail.text).toContain(`as engineer in the project “${team.project.name}”`);
-    const { token } = linkIn(mail, app.config.publicUrl, '/invitations/');
-    const invitee = await app.agent();
-    await invitee.post(`/api/auth/invitations/${token}/accept`).send({ name: 'Site Engineer', password: NEW_PASSWORD }).expect(200);
-    const members = await coordinator.get(`/api/projects/${team.project.id}/members`).expect(200);
-    expect(members.body.members.map((m: { email: string; role: string }) => [m.email, m.role])).toContainEqual([
-      'site.engineer@example.test',
-      'engineer',
-    ]);
+    const invitee = await app.signIn(team.outsider);
+    await invitee.post(`/api/auth/invitations/${existingLink}/join`).expect(200, { projectId: team.project.id });
+    const members = (await coordinator.get(membersUrl).expect(200)).body.members;
+    expect(members.map((m: { email: string; role: string }) => [m.email, m.role])).toContainEqual([team.outsider.email, 'engineer']);
+    const again = await invitee.post(`/api/auth/invitations/${existingLink}/join`).expect(410);
+    expect(again.body.error.code).toBe('invitation_used');
+
+    const freshMail = await lastMailTo(app.dataSource, 'site.engineer@example.test');
+    const freshLink = linkIn(freshMail, app.config.publicUrl, '/invitations/').token;
+    expect((await anonymous.get(`/api/auth/invitations/${freshLink}`).expect(200)).body).toMatchObject({ hasAccount: false });
+    await anonymous.post(`/api/auth/invitations/${freshLink}/accept`).send({ name: 'Site Engineer', password: NEW_PASSWORD }).expect(200);
+    expect(await memberEmails()).toContain('site.engineer@example.test');
   });
 
   it('keeps nothing when the invitation e-mail cannot be sent', async () => {

@@ -44,6 +44,11 @@ const CASES: Case[] = [
     expected: [401, 401, 401, 401, 401, 401],
   },
   {
+    route: 'POST /api/auth/invitations/:token/join',
+    send: (a) => a.post('/api/auth/invitations/unknown-token/join'),
+    expected: [401, 404, 404, 404, 404, 404],
+  },
+  {
     route: 'POST /api/auth/invitations/:token/accept',
     send: (a) => a.post('/api/auth/invitations/unknown-token/accept').send({ name: 'N', password: 'long enough password' }),
     expected: [404, 404, 404, 404, 404, 404],

@@ -8,6 +8,9 @@ export interface InvitationPreview {
   email: string;
   name: string | null;
   expiresAt: string;
+  /** The address has an account: its holder signs in and joins instead of creating one. */
+  hasAccount: boolean;
+  project: { name: string; role: string } | null;
 }
 
 /** The token links sent by e-mail: accepting an invitation and resetting a password. */
@@ -18,6 +21,11 @@ export class AuthApi {
   /** Creates the account and signs it in. */
   acceptInvitation(token: string, name: string, password: string): Observable<unknown> {
     return this.http.post(`${invitationUrl(token)}/accept`, { name, password });
+  }
+
+  /** The signed-in holder of the invited address joins the invitation's project. */
+  joinInvitation(token: string): Observable<{ projectId: string | null }> {
+    return this.http.post<{ projectId: string | null }>(`${invitationUrl(token)}/join`, null);
   }
 
   /** The server answers the same whether or not the address has an account. */

@@ -2,12 +2,11 @@ import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
 import { ProjectRole } from '../core/permissions';
-import { Member } from './project';
 
-/** What adding by e-mail did: an existing user became a member, or an invitation went out. */
-export type MemberAddition =
-  | { outcome: 'added'; member: Member }
-  | { outcome: 'invited'; invitation: { id: string; email: string; expiresAt: string } };
+/** Adding by e-mail always sends an invitation, whether or not the address has an account; the invitee accepts. */
+export interface MemberAddition {
+  invitation: { id: string; email: string; expiresAt: string };
+}
 
 /** Writes to `/api/projects/:projectId/members`; the page reads the list with httpResource. */
 @Injectable({ providedIn: 'root' })

@@ -5,7 +5,7 @@ import { provideRouter, Router, withComponentInputBinding } from '@angular/route
 import { RouterTestingHarness } from '@angular/router/testing';
 import { CSRF_TOKEN_URL } from '../../core/csrf.interceptor';
 import { nextRequest, provideApiForTests, settle } from '../../core/http.testing';
-import { meFor } from '../../core/session.testing';
+import { meFor, signInForTest } from '../../core/session.testing';
 import { AcceptInvitation } from './accept-invitation';
 
 @Component({ template: 'projects' })
@@ -21,6 +21,7 @@ describe('AcceptInvitation', () => {
           [
             { path: 'invitations/:token', component: AcceptInvitation },
             { path: 'projects', component: Projects },
+            { path: 'projects/:projectId', component: Projects },
           ],
           withComponentInputBinding(),
         ),
@@ -58,7 +59,7 @@ describe('AcceptInvitation', () => {
 
   it('creates the account with the chosen name and password, then opens the projects', async () => {
     const page = await open((request) =>
-      request.flush({ email: 'newcomer@example.test', name: 'New Comer', expiresAt: '2026-03-09T08:00:00Z' }),
+      request.flush({ email: 'newcomer@example.test', name: 'New Comer', expiresAt: '2026-03-09T08:00:00Z', hasAccount: false, project: null }),
     );
     expect(page.querySelector<HTMLInputElement>('input[formcontrolname=name]')!.value).toBe('New Comer');
     for (const input of page.querySelectorAll<HTMLInputElement>('input[type=password]')) {
@@ -73,5 +74,33 @@ describe('AcceptInvitation', () => {
     (await nextRequest(backend, '/api/auth/me')).flush(meFor('engineer'));
     await settle();
     expect(TestBed.inject(Router).url).toBe('/projects');
+  });
+
+  const forExistingAccount = (request: Awaited<ReturnType<typeof nextRequest>>) =>
+    request.flush({
+      email: 'engineer@example.test',
+      name: '',
+      expiresAt: '2026-03-09T08:00:00Z',
+      hasAccount: true,
+      project: { name: 'Gantry 4', role: 'reviewer' },
+    });
+
+  it('asks the holder of an existing account to sign in, coming back here, instead of creating an account', async () => {
+    const page = await open(forExistingAccount);
+    expect(page.querySelector('form')).toBeNull();
+    expect(page.textContent).toContain('to the project Gantry 4 as reviewer');
+    const signIn = [...page.querySelectorAll('a')].find((a) => a.textContent?.trim() === 'Sign in to join')!;
+    expect(signIn.getAttribute('href')).toBe('/sign-in?returnUrl=%2Finvitations%2Ftok-1');
+  });
+
+  it('lets the signed-in holder join the project, then opens it', async () => {
+    await signInForTest(meFor('engineer'));
+    const page = await open(forExistingAccount);
+    [...page.querySelectorAll<HTMLButtonElement>('button')].find((b) => b.textContent?.trim() === 'Join the project')!.click();
+    (await nextRequest(backend, CSRF_TOKEN_URL)).flush({ token: 't' });
+    (await nextRequest(backend, { method: 'POST', url: '/api/auth/invitations/tok-1/join' })).flush({ projectId: 'p1' });
+    (await nextRequest(backend, '/api/auth/me')).flush(meFor('engineer'));
+    await settle();
+    expect(TestBed.inject(Router).url).toBe('/projects/p1');
   });
 });

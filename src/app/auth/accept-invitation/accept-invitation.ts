@@ -13,7 +13,10 @@ import { AuthCard } from '../auth-card/auth-card';
 import { NewPasswordFields } from '../new-password-fields/new-password-fields';
 import { createNewPasswordForm } from '../password-rules';
 
-/** Opened from the e-mailed link `/invitations/:token`: name and password create the account. */
+/**
+ * Opened from the e-mailed link `/invitations/:token`: name and password create the account, or the holder of an
+ * existing account signs in and joins the project.
+ */
 @Component({
   selector: 'tl-accept-invitation',
   imports: [
@@ -42,6 +45,11 @@ export class AcceptInvitation {
     return error ? linkProblemOf(error) : null;
   });
 
+  protected readonly signedInAsInvitee = computed(
+    () => this.invitation.hasValue() && this.session.user()?.email === this.invitation.value().email,
+  );
+  protected readonly signInLink = computed(() => ({ returnUrl: `/invitations/${this.token()}` }));
+
   protected readonly form = new FormGroup({
     name: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(120)] }),
     password: createNewPasswordForm(),
@@ -69,6 +77,20 @@ export class AcceptInvitation {
       await firstValueFrom(this.api.acceptInvitation(this.token(), name.trim(), password.password));
       await this.session.signedInByServer();
       await this.router.navigateByUrl('/projects');
+    } catch (error) {
+      this.failure.set(errorMessage(error));
+    } finally {
+      this.saving.set(false);
+    }
+  }
+
+  protected async joinProject(): Promise<void> {
+    this.saving.set(true);
+    this.failure.set(null);
+    try {
+      const { projectId } = await firstValueFrom(this.api.joinInvitation(this.token()));
+      await this.session.signedInByServer();
+      await this.router.navigateByUrl(projectId ? `/projects/${projectId}` : '/projects');
     } catch (error) {
       this.failure.set(errorMessage(error));
     } finally {

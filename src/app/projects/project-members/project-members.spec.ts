@@ -58,7 +58,7 @@ describe('ProjectMembers', () => {
     expect(page.textContent).toContain('Engineer');
   });
 
-  it('lets a coordinator add someone without an account, which sends an invitation', async () => {
+  it('lets a coordinator add someone by e-mail, which sends an invitation without saying whether they have an account', async () => {
     const page = await open('coordinator');
     const email = page.querySelector<HTMLInputElement>('input[type=email]')!;
     email.value = 'newcomer@example.test';
@@ -66,12 +66,14 @@ describe('ProjectMembers', () => {
     page.querySelector<HTMLButtonElement>('form button[type=submit]')!.click();
     const sent = await answerAfterToken(
       { method: 'POST', url: membersUrl },
-      { outcome: 'invited', invitation: { id: 'i1', email: 'newcomer@example.test', expiresAt: '2026-03-09T08:00:00Z' } },
+      { invitation: { id: 'i1', email: 'newcomer@example.test', expiresAt: '2026-03-09T08:00:00Z' } },
       201,
     );
     expect(sent).toEqual({ email: 'newcomer@example.test', role: 'engineer' });
     await reloadsAfterWrite();
-    expect(page.querySelector('[role=status]')?.textContent).toContain('newcomer@example.test has no account yet: an invitation was sent.');
+    expect(page.querySelector('[role=status]')?.textContent).toContain(
+      'An invitation was sent to newcomer@example.test. They join as engineer once they accept it.',
+    );
   });
 
   it("shows the server's refusal to remove the last coordinator", async () => {

@@ -14,7 +14,7 @@ import { PROJECT_ROLES, ProjectRole, ROLE_LABELS } from '../../core/permissions'
 import { Session } from '../../core/session';
 import { Member } from '../project';
 import { ProjectContext } from '../project-context';
-import { MemberAddition, membersUrl, ProjectMembersApi } from '../project-members-api';
+import { membersUrl, ProjectMembersApi } from '../project-members-api';
 import { RoleField } from '../role-field/role-field';
 
 /** Who is in the project and in which role; coordinators add, re-role and remove members. */
@@ -70,7 +70,7 @@ export class ProjectMembers {
     const { email, role } = this.addForm.getRawValue();
     this.write(this.api.add(this.context.projectId(), email.trim(), role), (addition) => {
       this.addForm.reset({ email: '', role });
-      return describeAddition(addition, email.trim());
+      return `An invitation was sent to ${addition.invitation.email}. They join as ${ROLE_LABELS[role].toLowerCase()} once they accept it.`;
     });
   }
 
@@ -113,9 +113,4 @@ export class ProjectMembers {
       },
     });
   }
-}
-
-function describeAddition(addition: MemberAddition, email: string): string {
-  if (addition.outcome === 'invited') return `${email} has no account yet: an invitation was sent.`;
-  return `${addition.member.name} was added as ${ROLE_LABELS[addition.member.role].toLowerCase()}.`;
 }
