@@ -15,6 +15,10 @@ describe('new password form', () => {
     expect(formWith('abcdefghi').controls.password.hasError('tooShort')).toBe(true);
   });
 
+  it('rejects ten spaces', () => {
+    expect(formWith(' '.repeat(10)).controls.password.hasError('onlySpaces')).toBe(true);
+  });
+
   it('counts bytes, not letters, against the 72-byte limit', () => {
     // 36 "é" are 36 letters but 72 UTF-8 bytes; one more goes over.
     expect(formWith('é'.repeat(36)).valid).toBe(true);
