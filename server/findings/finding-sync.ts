@@ -98,10 +98,10 @@ export async function syncFindingsFromRun(
         note('title', before.title, escalated.title);
         note('priority', before.priority, escalated.priority);
       }
-      if (update.status?.from === 'accepted') note('justification', before?.justification ?? null, null);
       if (update.status) {
         statusChanges.push({ findingId: update.id, ...update.status });
         history.push({ findingId: update.id, field: 'status', ...update.status });
+        if (update.status.from === 'accepted') note('justification', before?.justification ?? null, null);
       }
       note('utilisation', utilisationText(before?.utilisation ?? null), utilisationText(update.utilisation));
       note('description', before?.description || null, update.description);

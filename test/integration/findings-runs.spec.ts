@@ -136,17 +136,35 @@ describe('findings from check runs', () => {
     expect(await failFinding()).toMatchObject({ status: 'open', justification: null, runId: later.id });
   });
 
-  it('turns a warning finding into a failure, with history, when a later run finds the member failing', async () => {
+  it('turns an accepted warning finding into a failure and reopens it, with history, when a later run finds the member failing', async () => {
     const member = members.find((candidate) => candidate !== overloaded && candidate.tag)!;
     await syncFindingsFromRun(app.dataSource, projectId, { runId: 'warning-run', revisionNumber: 1 }, [runResult(member.globalId, 'warning', 0.94)]);
     const warning = (await findings()).filter((finding) => finding.memberKey === member.globalId);
     expect(warning.map((finding) => finding.kind)).toEqual(['web-shear-warning']);
+    const justification = 'Close to capacity is acceptable for this temporary strut (invented scenario).';
+    await reviewer.post(findingsUrl(projectId, `/${warning[0].id}/transitions`)).send({ to: 'accepted', justification }).expect(200);
     await syncFindingsFromRun(app.dataSource, projectId, { runId: 'failure-run', revisionNumber: 1, standardLabel: 'AISC 360-22 ASD' }, [runResult(member.globalId, 'fail', 1.08)]);
     const after = (await findings()).filter((finding) => finding.memberKey === member.globalId);
     expect(after).toHaveLength(1);
-    expect(after[0]).toMatchObject({ id: warning[0].id, kind: 'web-shear-fail', priority: 'high', title: `Web shear over capacity: T-${member.globalId.slice(0, 4)}` });
+    expect(after[0]).toMatchObject({
+      id: warning[0].id,
+      kind: 'web-shear-fail',
+      status: 'open',
+      justification: null,
+      priority: 'high',
+      title: `Web shear over capacity: T-${member.globalId.slice(0, 4)}`,
+    });
     const history = await app.dataSource.getRepository(FindingChange).find({ where: { findingId: after[0].id }, order: { at: 'ASC' } });
-    expect(history.map((change) => change.field)).toEqual(['created', 'title', 'priority', 'utilisation', 'description']);
+    const system = history.filter((change) => change.source === 'system').map((change) => [change.field, change.fromValue]);
+    expect(system).toEqual([
+      ['created', null],
+      ['title', `Web shear close to capacity: T-${member.globalId.slice(0, 4)}`],
+      ['priority', 'normal'],
+      ['status', 'accepted'],
+      ['justification', justification],
+      ['utilisation', '94 %'],
+      ['description', warning[0].description],
+    ]);
     expect(history.at(-1)?.toValue).toContain('in the AISC 360-22 ASD check of model revision 1.');
     // Leaves the scene as it was for the next revision's test.
     await app.dataSource.getRepository(FindingChange).delete({ findingId: after[0].id });
