@@ -22,8 +22,13 @@ function sendFile(res: Response, file: ExportFile): void {
 export function findingExportsRouter(ctx: AppContext): Router {
   const notifier = new FindingNotifier(ctx.dataSource, ctx.mailer, ctx.config.publicUrl, ctx.logger);
   const exchange = new FindingExchangeService(ctx.dataSource, ctx.storage, notifier);
-  // The archive reader refuses larger files anyway; the limit stops them before they are held in memory.
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: DEFAULT_ARCHIVE_LIMITS.maxArchiveBytes, files: 1 } });
+  // The archive reader refuses larger files anyway; the limit stops them before they are held in memory. Browsers send
+  // file names as raw UTF-8 without a charset, which busboy would read as latin1.
+  const upload = multer({
+    storage: multer.memoryStorage(),
+    limits: { fileSize: DEFAULT_ARCHIVE_LIMITS.maxArchiveBytes, files: 1 },
+    defParamCharset: 'utf8',
+  });
   const router = Router({ mergeParams: true });
 
   router.get('/export.bcfzip', requireProjectPermission('export'), validate(exportBcfInput), async (req, res) => {

@@ -285,6 +285,14 @@ describe('findings as BCF', () => {
           code: 'bcf_wrong_file_type',
           message: /choose a \.bcf or \.bcfzip file/,
         },
+        {
+          name: 'a file with a non-ASCII name that is not BCF, named as written',
+          archive: () => zipOf([{ name: 'bcf.version', contents: VERSION_2_1 }]),
+          fileName: 'Prüfbericht_钢梁.zip',
+          status: 400,
+          code: 'bcf_wrong_file_type',
+          message: /^“Prüfbericht_钢梁\.zip” is not a BCF file/,
+        },
       ];
 
       it.each(cases)('$name', async ({ archive, fileName, status, code, message }) => {
