@@ -38,16 +38,17 @@ describe('demo shear results and check run steps', () => {
 
     const sets = await db.dataSource.getRepository(ResultSet).findBy({ projectId: depot.id });
     expect(sets).toHaveLength(1);
-    expect(sets[0]).toMatchObject({ modelRevisionId: revision!.id, combinations: ['ULS-1', 'ULS-2', 'ULS-3'], memberKeyCount: 398 });
-    expect(sets[0].matching).toMatchObject({ matched: 396, unmatchedResults: 2, membersWithoutResults: 0, warning: null });
+    expect(sets[0]).toMatchObject({ modelRevisionId: revision!.id, combinations: ['ULS-1', 'ULS-2', 'ULS-3'], memberKeyCount: 402 });
+    expect(sets[0].matching).toMatchObject({ matched: 400, unmatchedResults: 2, membersWithoutResults: 0, warning: null });
     expect(await db.dataSource.getRepository(ResultMappingTemplate).countBy({ projectId: depot.id })).toBe(1);
 
     const runs = await db.dataSource.getRepository(CheckRun).findBy({ projectId: depot.id });
     expect(runs).toHaveLength(1);
     expect(runs[0]).toMatchObject({ status: 'done', standard: 'en1993-1-1', modelRevisionId: revision!.id, createdByName: 'Esme Varga' });
-    expect(runs[0].summary).toMatchObject({ members: 400, fail: 5, warnings: 5, notApplicable: 4, notChecked: 0, unmatchedResults: 2 });
+    expect(runs[0].summary).toMatchObject({ members: 400, fail: 5, warnings: 7, notApplicable: 2, notChecked: 0, unmatchedResults: 2 });
     const results = await listRunMemberResults(db.dataSource, runs[0].id);
     expect(new Set(results.filter((r) => r.status === 'fail').map((r) => r.profileName))).toEqual(new Set(['PG600x250']));
-    expect(new Set(results.filter((r) => r.status === 'warning').map((r) => r.profileName))).toEqual(new Set(['PG600x250', 'IPE 270']));
+    // HE 240 A beams are drawn as an outline without root fillets: measured as drawn, two of them reach the warning band.
+    expect(new Set(results.filter((r) => r.status === 'warning').map((r) => r.profileName))).toEqual(new Set(['PG600x250', 'IPE 270', 'HE 240 A']));
   });
 });

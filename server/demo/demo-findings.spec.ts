@@ -35,9 +35,9 @@ describe('demo findings step', () => {
     const again = await db.dataSource.getRepository(Finding).find({ where: { projectId: depot.id }, order: { number: 'ASC' } });
 
     expect(again.map((finding) => [finding.id, finding.status])).toEqual(first.map((finding) => [finding.id, finding.status]));
-    // The demo run's five failures and five warnings (see demo-check-run.spec.ts), each a finding.
+    // The demo run's five failures and seven warnings (see demo-check-run.spec.ts), each a finding.
     expect(first.filter((finding) => finding.kind === 'web-shear-fail')).toHaveLength(5);
-    expect(first.filter((finding) => finding.kind === 'web-shear-warning')).toHaveLength(5);
+    expect(first.filter((finding) => finding.kind === 'web-shear-warning')).toHaveLength(7);
     expect(first.filter((finding) => finding.assigneeId !== null)).toHaveLength(2);
     expect(first.filter((finding) => finding.status === 'in-progress')).toHaveLength(1);
     expect(first.filter((finding) => finding.status === 'accepted').map((finding) => finding.justification)).toEqual([expect.stringContaining('engineer of record')]);
