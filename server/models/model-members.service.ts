@@ -13,7 +13,7 @@ import { revisionNotFound, revisionNotReady } from './revision-errors';
 import type { RevisionView } from './revision-view';
 
 function uncheckedFamilyReason(family: SectionFamily | null): string {
-  return family ? `Section family '${SECTION_FAMILY_LABELS[family]}': listed with its dimensions; its web check is not available yet.` : 'No reason recorded.';
+  return family ? `Section family '${SECTION_FAMILY_LABELS[family]}': no web shear rule for it; listed with its dimensions.` : 'No reason recorded.';
 }
 
 export interface ComparisonView extends RevisionComparison {
@@ -66,7 +66,7 @@ export class ModelMembersService {
         .getRawMany<{ value: string }>();
       return rows.map((r) => r.value).sort(naturalOrder);
     };
-    // Members of a family without a check yet count by family; the rest by their reason.
+    // Members of a family without a shear rule (plates, other shapes) count by family; the rest by their reason.
     const skippedRows = this.members()
       .createQueryBuilder('m')
       .select('m.profileFamily', 'family')
