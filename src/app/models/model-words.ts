@@ -18,7 +18,7 @@ const PHASE_LABELS: Readonly<Record<string, string>> = {
 
 export const MEMBER_STATUS_LABELS: Readonly<Record<MemberStatus, string>> = {
   ok: 'Section read',
-  'not-applicable': 'Not an I-section',
+  'not-applicable': 'No shear rule',
   flagged: 'Needs a look',
 };
 

@@ -100,7 +100,7 @@ export const STATUS_LABELS: Readonly<Record<MemberCheckStatus, string>> = {
   warning: 'close to capacity',
   fail: 'fails',
   'not-checked': 'not checked',
-  'not-applicable': 'not an I-section web check',
+  'not-applicable': 'no web shear rule for this section',
 };
 
 const STATUS_ORDER: readonly MemberCheckStatus[] = ['pass', 'warning', 'fail', 'not-checked', 'not-applicable'];

@@ -39,7 +39,7 @@ describe('ViewerLegend', () => {
       'close to capacity',
       'fails',
       'not checked',
-      'not an I-section web check',
+      'no web shear rule for this section',
     ]);
   });
 

@@ -46,7 +46,7 @@ describe('MemberDetail', () => {
       ['Flange tip radius', '6 mm'],
       ['Flange slope', '8 %'],
     ]);
-    expect(text(page)).toContain('Not an I-section: ' + channelRecord().reason);
+    expect(text(page)).toContain('No shear rule: ' + channelRecord().reason);
     expect(page.querySelector('table.stations')).toBeNull();
   });
 

@@ -51,7 +51,7 @@ describe('MemberTable', () => {
     const [beam, channel, tube] = rowTexts(page);
     expect(beam).toContain('IPE200 rolled, dimensions written in the model | I-section | 200 | 5.6 | 100 × 8.5 |');
     expect(channel).toContain('UPN 200 measured from the profile outline | channel | 200 | 8.5 | 75 × 11.5 |');
-    expect(channel).toContain('| Not an I-section |');
+    expect(channel).toContain('| No shear rule |');
     // A tube has no flange: its width (the diameter) stands alone.
     expect(tube).toContain('CHS 168.3x8 dimensions written in the model | circular hollow section | 168.3 | 8 | 168.3 |');
   });
@@ -87,7 +87,7 @@ describe('MemberTable', () => {
       ['6', TUBE_ROW.reason],
       ['2', CHANNEL_ROW.reason],
     ]);
-    expect(rowTexts(page)[1]).toContain('P4Purlin P4 | IfcMember | — | channel | Not an I-section |');
+    expect(rowTexts(page)[1]).toContain('P4Purlin P4 | IfcMember | — | channel | No shear rule |');
   });
 
   it('shows no reason counts among the sections, nor when nothing was skipped', async () => {

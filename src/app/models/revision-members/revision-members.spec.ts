@@ -80,7 +80,7 @@ describe('RevisionMembers', () => {
     (await nextRequest(backend, membersRequest({ status: 'not-applicable,flagged', page: '0' }))).flush({ total: 1, members: [brace] });
     await settle();
     const [row] = rowTexts(page);
-    expect(row).toContain('Not an I-section');
+    expect(row).toContain('No shear rule');
     expect(row).toContain("its profile is 'CHS 168.3x8' (IfcCircleHollowProfileDef)");
   });
 
