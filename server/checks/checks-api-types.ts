@@ -5,8 +5,10 @@
 import type { Standard } from '../engine/check';
 import type { GradeId } from '../engine/grades';
 import type { ISectionInput } from '../engine/section';
+import type { SectionDimensions, SectionPolygon } from '../engine/section-family';
 import type { SectionPropertyValues } from '../engine/section-properties';
 import type { JunctionStress } from '../engine/shear-stress';
+import type { ShearAxis } from '../engine/shear-axis';
 import type { TraceStep } from '../engine/trace';
 import type { MemberRecord } from '../ifc/model-read-result';
 import type { CheckParameters } from './check-parameters';
@@ -79,7 +81,10 @@ export interface MemberSheet {
   reason: string | null;
   /** The member's result as the run recorded it (with its per-combination list). */
   check: MemberCheck;
+  /** An I-section as checked; null for every other family, which comes in `familySection`. */
   section: { input: ISectionInput; properties: SectionPropertyValues } | null;
+  /** A checked member of another family (channel, tee, angle, box, tube): its section along the governing axis. */
+  familySection?: FamilySheetSection;
   /** How the section was found and, for a tapered member, which of its sections the check used and why. */
   sectionNote: string | null;
   grade: GradeId | null;
@@ -96,6 +101,8 @@ export interface MemberSheet {
     /** EN 1993-1-1 (6.19): fy/(√3·γM0); absent for AISC, whose check is not a stress check. */
     elasticLimit_MPa?: number;
   } | null;
+  /** τ(s) of a member of another family for the governing shear, with `familySection`. */
+  familyStress?: FamilySheetStress;
   governing: {
     combination: string;
     station_mm: number | null;
@@ -115,4 +122,43 @@ export interface MemberSheet {
   } | null;
   engineVersion: { run: string; sheet: string };
   cautions: string[];
+}
+
+/** A section of another family on its calculation sheet: enough to draw it to scale, voids included. */
+export interface FamilySheetSection {
+  dimensions: Exclude<SectionDimensions, { family: 'I' }>;
+  /** The idealised outline in the section's own frame (mm, centred on its bounding box; voids clockwise). */
+  outline: SectionPolygon;
+  /** The axis of the governing shear: 'major' loads the web(s) (parallel to y), 'minor' the flanges (parallel to x). */
+  axis: ShearAxis;
+  /** Along that axis, s measured in the direction of the shear (y for 'major', x for 'minor'). */
+  properties: {
+    area_mm2: number;
+    neutralAxis_mm: number;
+    i_mm4: number;
+    elasticModulus_mm3: number;
+    plasticNeutralAxis_mm: number;
+    plasticModulus_mm3: number;
+    from_mm: number;
+    to_mm: number;
+    /** False when the bending axis is not principal (an angle): τ = V·Q/(I·b) is then an estimate. */
+    principal: boolean;
+  };
+}
+
+/** τ(s) = V·Q(s)/(I·b(s)) over the section for the governing shear, along `FamilySheetSection.axis`. */
+export interface FamilySheetStress {
+  shear_kN: number;
+  /** Ascending in s; both sides of each width jump, the side below first. */
+  samples: { s_mm: number; width_mm: number; tau_MPa: number }[];
+  tauMax_MPa: number;
+  at_mm: number;
+  /** Jumps inside the section worth a label: τ just below and just above the level. */
+  jumps: { level_mm: number; below_MPa: number; above_MPa: number }[];
+  /** V/A over the whole section, for comparison. */
+  average_MPa: number;
+  /** Major axis: V over the plates parallel to the shear (engine/section-family.ts webShearArea_mm2); null otherwise. */
+  webAverage_MPa: number | null;
+  /** EN 1993-1-1 (6.19): fy/(√3·γM0); absent for AISC. */
+  elasticLimit_MPa?: number;
 }
