@@ -12,6 +12,8 @@ import { toNewtonMillimetres } from './unit-words';
 export interface ResultRow {
   /** Row number in the file (in its sheet) as a spreadsheet shows it. */
   row: number;
+  /** Index of the row's worksheet among those read, when several are read. */
+  sheet?: number;
   memberKey: string;
   combination: string;
   /** Distance along the analysis member, when the file gives stations. */
@@ -36,6 +38,8 @@ export interface RowContext {
   sheet?: string;
   /** Names the sheet in every message (when several are read). */
   sheetInMessages?: boolean;
+  /** The worksheet's index among those read, given to each row when several are read. */
+  sheetIndex?: number;
 }
 
 /** Reads records into rows; unit factors and the layout are settled once here, not per row. */
@@ -68,6 +72,7 @@ export function createRowReader(mapping: ColumnMapping, columns: ResolvedColumns
   ).filter((entry): entry is [number, string] => entry[0] !== undefined);
   const sheetPart = mapping.combinationFromSheet ? (context.sheet ?? '') : '';
   const wide = columns.wide && { columns: columns.wide.columns, combinations: columns.wide.combinations };
+  const sheet = context.sheetIndex;
 
   return (record, rows) => {
     const { row, cells } = record;
@@ -119,7 +124,7 @@ export function createRowReader(mapping: ColumnMapping, columns: ResolvedColumns
         const column = wide.columns[i];
         const shear = cellNumber(cells[column] ?? null, decimalSeparator);
         if (Number.isNaN(shear)) issues = withIssue(issues, shearIssue(row, column, cells[column] ?? null));
-        rows.push({ row, memberKey, combination: joined(combination, wide.combinations[i]), station_mm, shear_N: shear * newtonsPerUnit, end1_mm, end2_mm });
+        rows.push({ row, sheet, memberKey, combination: joined(combination, wide.combinations[i]), station_mm, shear_N: shear * newtonsPerUnit, end1_mm, end2_mm });
       }
       if (issues) rows.length = start;
       return issues;
@@ -138,7 +143,7 @@ export function createRowReader(mapping: ColumnMapping, columns: ResolvedColumns
       }
     }
     if (issues) return issues;
-    rows.push({ row, memberKey, combination, station_mm, shear_N: shear * newtonsPerUnit, minorShear_N, majorMoment_Nmm, minorMoment_Nmm, end1_mm, end2_mm });
+    rows.push({ row, sheet, memberKey, combination, station_mm, shear_N: shear * newtonsPerUnit, minorShear_N, majorMoment_Nmm, minorMoment_Nmm, end1_mm, end2_mm });
     return undefined;
   };
 }

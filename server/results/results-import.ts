@@ -15,5 +15,5 @@ export interface ImportedResults {
 export async function importResultsFile(file: string, mapping: ColumnMapping, sheet?: string): Promise<ImportedResults> {
   const collector = new GoverningShearCollector();
   const summary = await readResults(file, mapping, collector.add, { sheet });
-  return { summary, governing: collector.table() };
+  return { summary, governing: collector.table(mapping.sheets) };
 }

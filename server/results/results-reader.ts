@@ -61,7 +61,7 @@ export async function readResults(
       }
       first ??= table;
       const columns = resolveColumns(mapping, table.headers);
-      const readRow = createRowReader(mapping, columns, { headers: table.headers, decimalSeparator: table.decimalSeparator, sheet: table.sheet, sheetInMessages: sheets.length > 1 });
+      const readRow = createRowReader(mapping, columns, { headers: table.headers, decimalSeparator: table.decimalSeparator, sheet: table.sheet, sheetInMessages: sheets.length > 1, ...(sheets.length > 1 && { sheetIndex }) });
       keys.sheet = sheetIndex;
       lastRow = table.unitsRow ?? table.headerRow ?? 0;
       for await (const chunk of records) {
