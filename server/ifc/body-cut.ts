@@ -43,7 +43,11 @@ export type BodyCut =
       stations: number[];
       ifcType: string;
     }
-  | { status: 'failed'; reason: string };
+  /**
+   * `notOneSection`: the geometry itself shows the body is not one prismatic member (its section varies, or it cuts
+   * into separate pieces), so no name may stand in for it.
+   */
+  | { status: 'failed'; reason: string; notOneSection?: true };
 
 /** Fractions of the length cut: away from the ends, where copes, notches and end plates sit. */
 export const CUT_STATIONS = [0.2, 0.35, 0.5, 0.65, 0.8] as const;
@@ -54,7 +58,7 @@ const MIN_SLENDERNESS = 1.5;
 /** Beyond this |w·Z| the member counts as vertical, and the element's +Y orients its section. */
 const VERTICAL = 0.9999;
 
-const failed = (reason: string): BodyCut => ({ status: 'failed', reason });
+const failed = (reason: string, notOneSection = false): BodyCut => ({ status: 'failed', reason, ...(notOneSection ? { notOneSection } : {}) });
 
 /** Eigenvalues (ascending) and unit eigenvectors of a symmetric 3×3 matrix [xx, xy, xz, yy, yz, zz], by Jacobi rotations. */
 export function symmetricEigen3(m: readonly number[]): { values: number[]; vectors: Vec3[] } {
@@ -384,7 +388,8 @@ function cutFaces({ faces, clips, ifcType, options }: CutInput): BodyCut {
   const cuts = sections.flatMap((s, i) => (s.status === 'section' ? [{ ...s, station: CUT_STATIONS[i] }] : []));
   if (cuts.length === 0) {
     const reasons = sections.map((s) => (s.status === 'failed' ? s.reason : ''));
-    return failed(`Its body (${ifcType}) gives no section: ${reasons[Math.floor(reasons.length / 2)]}.`);
+    const pieces = sections.some((s) => s.status === 'failed' && 'pieces' in s && s.pieces !== undefined);
+    return failed(`Its body (${ifcType}) gives no section: ${reasons[Math.floor(reasons.length / 2)]}.`, pieces);
   }
   const same = (a: (typeof cuts)[number], b: (typeof cuts)[number]): boolean => {
     const reference = Math.max(a.bounds[2] - a.bounds[0], a.bounds[3] - a.bounds[1]);
@@ -398,7 +403,8 @@ function cutFaces({ faces, clips, ifcType, options }: CutInput): BodyCut {
     if (group.length > best.length || (group.length === best.length && nearMiddle(group) < nearMiddle(best))) best = group;
   }
   if (best.length < 2) {
-    return failed(cuts.length >= 2 ? 'The section varies along the member.' : `Its body (${ifcType}) gives one section only: ${sections.find((s) => s.status === 'failed')!.reason}.`);
+    if (cuts.length >= 2) return failed('The section varies along the member.', true);
+    return failed(`Its body (${ifcType}) gives one section only: ${sections.find((s) => s.status === 'failed')!.reason}.`);
   }
   const kept = best.reduce((a, b) => (Math.abs(b.station - 0.5) < Math.abs(a.station - 0.5) ? b : a));
   const polygon = toSectionPolygon(kept.outer, kept.voids, options.scaleToMm);

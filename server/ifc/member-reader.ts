@@ -164,6 +164,9 @@ export class MemberReader {
     if (cut?.status === 'cut') {
       return this.sections.fromOutline(cut.polygon, { name: '', source: 'body-cut', ifcType: cut.ifcType, flags: [] }, names);
     }
+    if (cut?.status === 'failed' && cut.notOneSection) {
+      return { status: 'flagged', reason: `The body cannot be one member's section: ${cut.reason}`, flags: ['section-unrecognised'] };
+    }
     if (cut) return this.sections.fromNamesOnly(names, `its body gives no section (${cut.reason})`, shape.otherBodyTypes[0] ?? 'body', ['geometry-unread']);
     if (!shape.hasRepresentation) return { status: 'flagged', reason: '', flags: ['no-profile'] };
     const body = shape.otherBodyTypes.length ? `its body is ${[...new Set(shape.otherBodyTypes)].join(', ')}` : 'it has no body representation';

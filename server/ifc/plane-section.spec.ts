@@ -66,6 +66,7 @@ describe('planeSection', () => {
     expect(planeSection(WALL, ALONG_Z, 500, 200)).toEqual({
       status: 'failed',
       reason: 'the cut gives 2 separate pieces (two members in one body, or a built-up pair)',
+      pieces: 2,
     });
   });
 

@@ -25,7 +25,8 @@ export type PlaneSection =
       /** Bounding box [minU, minV, maxU, maxV], model units. */
       bounds: [number, number, number, number];
     }
-  | { status: 'failed'; reason: string };
+  /** `pieces`: the cut found several separate outlines — not one member's section. */
+  | { status: 'failed'; reason: string; pieces?: number };
 
 /** Points closer than this fraction of the section size are one point (exports round their coordinates). */
 const JOIN_FRACTION = 1e-5;
@@ -191,7 +192,7 @@ export function planeSection(faces: BodyFaces, axes: CutAxes, offset: number, si
   const depth = loops.map((loop, i) => loops.filter((other, j) => j !== i && insideLoop(loop[0], other)).length);
   const outers = loops.filter((_, i) => depth[i] % 2 === 0);
   if (outers.length > 1) {
-    return { status: 'failed', reason: `the cut gives ${outers.length} separate pieces (two members in one body, or a built-up pair)` };
+    return { status: 'failed', reason: `the cut gives ${outers.length} separate pieces (two members in one body, or a built-up pair)`, pieces: outers.length };
   }
   const outer = signedArea(outers[0]) > 0 ? outers[0] : outers[0].reverse();
   const voids = loops.filter((_, i) => depth[i] % 2 === 1).map((l) => (signedArea(l) < 0 ? l : l.reverse()));

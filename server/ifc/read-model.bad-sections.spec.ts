@@ -20,7 +20,7 @@ describe('bad-sections.ifc', () => {
     ['B-open', 'profile-not-in-catalogue', 'it is open: a gap of 300 mm'],
     ['B-bowtie', 'profile-not-in-catalogue', "outline 'PL-CROSSED-1' encloses no area"],
     ['B-offset', 'section-unrecognised', 'its top flange is off-centre from the web by 40 mm'],
-    ['B-pair', 'geometry-unread', 'the cut gives 2 separate pieces'],
+    ['B-pair', 'section-unrecognised', "The body cannot be one member's section: Its body (IfcFacetedBrep) gives no section: the cut gives 2 separate pieces"],
   ])('flags %s (%s) with its reason', (name, flag, words) => {
     const m = member(name);
     expect(m).toMatchObject({ status: 'flagged', flags: expect.arrayContaining([flag]), reason: expect.stringContaining(words) });
@@ -29,8 +29,9 @@ describe('bad-sections.ifc', () => {
     expect(JSON.stringify(m)).not.toMatch(/NaN|null,"reason":""/);
   });
 
-  it('does not take the name of an I-like outline it cannot read (IPE 300) as its section', () => {
+  it('does not take a name (IPE 300) as the section of an outline or a body that contradicts it', () => {
     expect(member('B-offset').profile).toBeNull();
+    expect(member('B-pair').profile).toBeNull();
   });
 
   it('counts every member flagged and still bakes the geometry', () => {

@@ -194,7 +194,13 @@ export async function checkIfcUpload(req: Request, file: ReceivedFile, options: 
     return { path: file.path, fileName: file.originalName, sizeBytes: file.size, sha256: file.sha256, header };
   }
   const extracted = requestTempFile(req, options.dir, '.ifc');
-  await readingIfc(() => extractIfcFromZip(file.path, extracted, { ...DEFAULT_ARCHIVE_LIMITS, maxUncompressedBytes: options.maxBytes }));
+  try {
+    await readingIfc(() => extractIfcFromZip(file.path, extracted, { ...DEFAULT_ARCHIVE_LIMITS, maxUncompressedBytes: options.maxBytes }));
+  } catch (error) {
+    // Gone before the refusal is answered, not after: the client may look at once.
+    await Promise.all([rm(extracted, { force: true }), rm(file.path, { force: true })]);
+    throw error;
+  }
   await rm(file.path, { force: true });
   return checkIfcFile(extracted, file.originalName);
 }
