@@ -1,8 +1,9 @@
 import { expectClose } from '../engine/expect-close';
-import type { IDimensions, SectionDimensions } from '../engine/section-family';
+import type { IDimensions } from '../engine/section-family';
 import type { MemberRecord } from '../ifc/model-read-result';
 import { recommendedParameters } from './check-parameters';
 import { computeCheckRun } from './check-run-compute';
+import type { FamilySheetSection } from './checks-api-types';
 import { buildMemberSheet, sectionNoteOf } from './member-sheet';
 
 // An invented haunched rafter (demo scenario): 600 deep at the start, 400 at the end, same plates.
@@ -62,7 +63,7 @@ describe('buildMemberSheet for sections of other families', () => {
   const V_N = 300_000;
   const steel = { name: 'S355', grade: 'S355' as const, fy_MPa: 355, assumed: false };
 
-  function sheetOf(dimensions: Exclude<SectionDimensions, { family: 'I' }>, ifcType: string, standard: 'en1993-1-1' | 'aisc360-22-lrfd' = 'en1993-1-1') {
+  function sheetOf(dimensions: FamilySheetSection['dimensions'], ifcType: string, standard: 'en1993-1-1' | 'aisc360-22-lrfd' = 'en1993-1-1') {
     const parameters = recommendedParameters(standard);
     const record: MemberRecord = { ...member({ ...dimensions, name: 'invented', source: 'ifc-profile', ifcType, fabrication: 'welded' }), material: steel };
     const shears = [

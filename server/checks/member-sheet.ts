@@ -6,25 +6,21 @@
  * The recorded values (governing combination, VEd, VRd, utilisation) come from the run. The trace and τ(y) are
  * recomputed from the run's inputs; when the engine has changed since the run, the sheet says so.
  */
-import { findSection, sectionKey, seriesOf } from '../catalogue/catalogue';
+import { findSection, seriesOf } from '../catalogue/catalogue';
 import { lightestPassingSection } from '../catalogue/section-selection';
 import type { Standard } from '../engine/check';
-import { type AxisCapacity, evaluateFamilyCheck, type FamilyCheckFlag, type FamilyCheckResult, prepareFamilyCapacity } from '../engine/family-capacity';
 import { type GradeId, yieldRuleLabel } from '../engine/grades';
 import type { ISectionInput } from '../engine/section';
 import { sectionPropertyValues } from '../engine/section-properties';
-import { polygonShearStressProfile } from '../engine/polygon-shear-stress';
 import { shearStressProfile } from '../engine/shear-stress';
-import type { ShearAxis } from '../engine/shear-axis';
-import { formatNumber, step } from '../engine/trace';
 import { requiredWebThickness_mm } from '../engine/web-thickness';
-import { dimensionsLabel, type SectionDimensions, webShearArea_mm2 } from '../engine/section-family';
-import { sectionOutline } from '../engine/section-outline';
-import { isIProfile, type MemberRecord, PROFILE_SOURCE_LABELS, sectionDimensionsOf } from '../ifc/model-read-result';
+import { dimensionsLabel } from '../engine/section-family';
+import { isIProfile, type MemberRecord, PROFILE_SOURCE_LABELS } from '../ifc/model-read-result';
 import { REPORT_CAUTIONS } from '../reports/report-cautions';
 import type { CheckParameters } from './check-parameters';
 import { engineParamsOf, evaluateMember, type MemberCheck } from './check-run-compute';
-import type { FamilySheetSection, FamilySheetStress, MemberSheet } from './checks-api-types';
+import type { MemberSheet } from './checks-api-types';
+import { evaluateFamilyMember, familySectionOf, familyStressOf } from './family-member-sheet';
 import { resultStatusOf } from './member-result-row';
 
 export interface SheetInput {
@@ -148,97 +144,6 @@ function combinationsOf(check: MemberCheck): MemberSheet['combinations'] {
     memberKey: combination.memberKey,
     row: combination.row,
   }));
-}
-
-/** Chord tolerance of the drawn outline: a tenth of a millimetre is below what any print of a section shows (common practice, no source). */
-const DRAWING_CHORD_TOLERANCE_MM = 0.1;
-/** A jump in τ smaller than this share of τmax is a chord of an arc, not a flange face: left unlabelled. */
-const JUMP_LABEL_SHARE = 0.05;
-
-interface FamilyEvaluation {
-  dimensions: Exclude<SectionDimensions, { family: 'I' }>;
-  grade: GradeId;
-  capacity: AxisCapacity;
-  result: FamilyCheckResult;
-}
-
-/**
- * A member of another family against one shear on one axis as a run checks it (check-run-compute.ts
- * checkFamilyMember: the run's fabrication for the profile, the member's grade or the run's default, a project
- * resistance factor): the governing trace the sheet shows. Null when the axis has no rule for this section.
- */
-export function evaluateFamilyMember(member: MemberRecord, parameters: CheckParameters, axis: ShearAxis, shear_N: number): FamilyEvaluation | null {
-  const profile = member.profile;
-  if (!profile || isIProfile(profile) || member.status === 'not-applicable') return null;
-  const overrides = new Map(Object.entries(parameters.fabricationOverrides).map(([name, fabrication]) => [sectionKey(name), fabrication]));
-  const fabrication = overrides.get(sectionKey(profile.name)) ?? profile.fabrication;
-  const assumed = !member.material || member.material.assumed;
-  const grade = assumed ? parameters.defaultGrade : member.material!.grade;
-  const dimensions = sectionDimensionsOf(profile) as FamilyEvaluation['dimensions'];
-  const prepared = prepareFamilyCapacity(dimensions, { grade }, parameters.standard, { ...engineParamsOf(parameters), fabrication });
-  const base = prepared[axis];
-  if (!base.applicable) return null;
-  const capacity = withProjectResistanceFactor(base, parameters);
-  const contextFlags: FamilyCheckFlag[] = assumed ? ['assumed-grade'] : [];
-  if (profile.source === 'catalogue' || profile.source === 'project-catalogue') contextFlags.push('catalogue-section');
-  const result = evaluateFamilyCheck({ ...prepared, [axis]: capacity }, axis, { shear_N }, contextFlags);
-  return { dimensions, grade, capacity, result };
-}
-
-/** AISC: the project's φv (LRFD) or 1/Ωv (ASD) in place of the code's, with its step in the trace, as a run applies it. */
-function withProjectResistanceFactor(capacity: AxisCapacity, parameters: CheckParameters): AxisCapacity {
-  const lrfd = parameters.standard === 'aisc360-22-lrfd';
-  const factor = lrfd ? parameters.phiV : parameters.standard === 'aisc360-22-asd' && parameters.omegaV !== null ? 1 / parameters.omegaV : null;
-  if (!capacity.aisc || factor === null) return capacity;
-  const vn_N = capacity.aisc.vn_N;
-  const VRd_N = factor * vn_N;
-  const formula = lrfd ? 'φv·Vn' : 'Vn/Ωv';
-  const override = step('AISC 360-22 §G1', 'Available shear strength with the project’s resistance factor', formula, `${formatNumber(factor)} × ${formatNumber(vn_N / 1000)} kN`, VRd_N / 1000, 'kN');
-  return { ...capacity, VRd_N, trace: [...capacity.trace, override] };
-}
-
-function familySectionOf({ dimensions, capacity }: FamilyEvaluation): FamilySheetSection {
-  const s = capacity.section;
-  return {
-    dimensions,
-    outline: sectionOutline(dimensions, DRAWING_CHORD_TOLERANCE_MM),
-    axis: capacity.axis,
-    properties: {
-      area_mm2: s.area_mm2,
-      neutralAxis_mm: s.neutralAxis_mm,
-      i_mm4: s.i_mm4,
-      elasticModulus_mm3: s.elasticModulus_mm3,
-      plasticNeutralAxis_mm: s.plasticNeutralAxis_mm,
-      plasticModulus_mm3: s.plasticModulus_mm3,
-      from_mm: s.from_mm,
-      to_mm: s.to_mm,
-      principal: s.principal,
-    },
-  };
-}
-
-function familyStressOf({ dimensions, capacity }: FamilyEvaluation, shear_N: number): FamilySheetStress {
-  const section = capacity.section;
-  const profile = polygonShearStressProfile(section, shear_N);
-  const points = profile.points;
-  const jumps: FamilySheetStress['jumps'] = [];
-  for (let i = 1; i < points.length; i++) {
-    const [below, above] = [points[i - 1], points[i]];
-    const inside = below.s_mm > section.from_mm && below.s_mm < section.to_mm;
-    if (inside && below.s_mm === above.s_mm && Math.abs(above.tau_MPa - below.tau_MPa) >= JUMP_LABEL_SHARE * profile.tauMax_MPa) {
-      jumps.push({ level_mm: below.s_mm, below_MPa: below.tau_MPa, above_MPa: above.tau_MPa });
-    }
-  }
-  return {
-    shear_kN: toKN(shear_N),
-    samples: points.map((point) => ({ s_mm: point.s_mm, width_mm: point.width_mm, tau_MPa: point.tau_MPa })),
-    tauMax_MPa: profile.tauMax_MPa,
-    at_mm: profile.tauMaxAt_mm,
-    jumps,
-    average_MPa: profile.average_MPa,
-    webAverage_MPa: capacity.axis === 'major' ? Math.abs(shear_N) / webShearArea_mm2(dimensions) : null,
-    ...(capacity.en && { elasticLimit_MPa: capacity.en.elasticStressLimit_MPa }),
-  };
 }
 
 function cautionsFor(input: SheetInput): string[] {

@@ -4,6 +4,7 @@ import { TEST_PROJECT_ID } from '../../core/session.testing';
 import { configureProjectPagesForTests, openProjectSection } from '../../projects/project.testing';
 import { MemberSheet } from '../checks-api';
 import { memberSheet } from '../checks.testing';
+import { familySheet } from './family-sheet.testing';
 
 const GLOBAL_ID = '2O2Fr$t4X7Zf8NOew3FLOH';
 const sheetApi = `/api/projects/${TEST_PROJECT_ID}/checks/run-1/members/${encodeURIComponent(GLOBAL_ID)}/sheet`;
@@ -65,5 +66,26 @@ describe('CalculationSheet', () => {
     const page = await open(memberSheet({ engineVersion: { run: 'engine-old', sheet: 'engine-test' }, cautions: [changed, ...memberSheet().cautions] }));
     expect(page.querySelector('.member-cautions')!.textContent).toContain(changed);
     expect(page.querySelector('.facts')!.textContent).toContain('this sheet engine-test');
+  });
+
+  it('draws a box with its void from its outline, dimensioned in AISC notation, beside τ with both flange jumps', async () => {
+    const box = familySheet({ family: 'box', depth_mm: 300, width_mm: 200, webThickness_mm: 10, flangeThickness_mm: 16 }, 'aisc360-22-lrfd');
+    const page = await open(box);
+    const outline = page.querySelector('svg.section-drawing path.outline')!;
+    expect(outline.getAttribute('fill-rule')).toBe('evenodd');
+    expect(outline.getAttribute('d')!.match(/M/g)).toHaveLength(2);
+    expect([...page.querySelectorAll('svg.section-drawing .dimension text')].map((text) => text.textContent!.trim())).toEqual(['H = 300', 'B = 200', 'tw = 10', 'tf = 16']);
+    expect(page.querySelector('svg.stress-plot .peak text')!.textContent).toContain('τmax =');
+    expect(page.querySelectorAll('svg.stress-plot .jump')).toHaveLength(2);
+    expect(page.querySelector('.trace')!.textContent).toContain('G4');
+  });
+
+  it('draws a tube as a ring, dimensioned in EN notation, at the height of its τ plot', async () => {
+    const tube = familySheet({ family: 'tube', diameter_mm: 219.1, wallThickness_mm: 8 }, 'en1993-1-1');
+    const page = await open(tube);
+    const outline = page.querySelector('svg.section-drawing path.outline')!;
+    expect(outline.getAttribute('d')!.match(/M/g)).toHaveLength(2);
+    expect([...page.querySelectorAll('svg.section-drawing .dimension text')].map((text) => text.textContent!.trim())).toEqual(['d = 219.1', 't = 8']);
+    expect(page.querySelector('svg.section-drawing')!.getAttribute('height')).toBe(page.querySelector('svg.stress-plot')!.getAttribute('height'));
   });
 });

@@ -13,7 +13,7 @@ import { ProjectContext } from '../../projects/project-context';
 import { MemberSheet, sheetUrl, STATUS_NAMES } from '../checks-api';
 import { flagLabel } from '../flag-labels';
 import { UtilisationBar } from '../utilisation-bar/utilisation-bar';
-import { figureFrame, SectionFigure, sectionFigure, StressFigure, stressFigure } from './sheet-figures';
+import { familyFrame, familySectionFigure, familyStressInput, figureFrame, SectionFigure, sectionFigure, StressFigure, stressFigure } from './sheet-figures';
 
 interface Figures {
   section: SectionFigure;
@@ -71,7 +71,15 @@ export class CalculationSheet {
   });
 
   protected readonly figures = computed((): Figures | null => {
-    const stress = this.sheet()?.stress;
+    const sheet = this.sheet();
+    if (sheet?.familySection && sheet.familyStress) {
+      const frame = familyFrame(sheet.familySection);
+      return {
+        section: familySectionFigure(sheet.familySection, sheet.standard, frame),
+        stress: stressFigure(familyStressInput(sheet.familySection, sheet.familyStress), frame),
+      };
+    }
+    const stress = sheet?.stress;
     const props = this.properties();
     if (!stress || props === null || typeof props === 'string') return null;
     const frame = figureFrame(props);

@@ -2,7 +2,8 @@ import { expectClose } from '../../../../server/engine/expect-close';
 import { sectionProperties } from '../../../../server/engine/section-properties';
 import { shearStressProfile } from '../../../../server/engine/shear-stress';
 import { iSection } from '../../../../server/engine/test-sections';
-import { figureFrame, PLOT_WIDTH_MM, sectionFigure, stressFigure } from './sheet-figures';
+import { familySheet } from './family-sheet.testing';
+import { familyFrame, familySectionFigure, familyStressInput, figureFrame, PLOT_WIDTH_MM, sectionFigure, stressFigure } from './sheet-figures';
 
 // IPE 300: h 300, b 150, tw 7.1, tf 10.7, r 15 mm (EN 10365 dimensions).
 const IPE_300 = iSection(300, 7.1, [150, 10.7, 15]);
@@ -141,6 +142,79 @@ describe('stress figure', () => {
   it('closes the filled area against the τ = 0 axis', () => {
     const { figure } = stressOf(GIRDER, GIRDER_SHEAR_N);
     expect(figure.areaPath.startsWith('M0,500L')).toBe(true);
+    expect(figure.areaPath.endsWith('L0,0Z')).toBe(true);
+  });
+});
+
+describe('figures of other families', () => {
+  // Invented sections; the sheet data comes from the server's own sheet builder, as the API sends it.
+  const box = { family: 'box', depth_mm: 300, width_mm: 200, webThickness_mm: 10, flangeThickness_mm: 16 } as const;
+  const tube = { family: 'tube', diameter_mm: 219.1, wallThickness_mm: 8 } as const;
+
+  function subpaths(path: string): number[][][] {
+    return path
+      .split('M')
+      .filter(Boolean)
+      .map((loop) =>
+        loop
+          .replace('Z', '')
+          .split('L')
+          .map((pair) => pair.split(',').map(Number)),
+      );
+  }
+
+  it('draws a box to scale with its void as a second loop, and dimensions it in EN notation', () => {
+    const { familySection } = familySheet(box, 'en1993-1-1');
+    const frame = familyFrame(familySection);
+    const figure = familySectionFigure(familySection, 'en1993-1-1', frame);
+    // 200 × 300 mm in the 62 × 125 mm box: 1:5 (1:2.5 would be 120 mm tall... plus margins, and 80 mm wide).
+    expect(frame.scale).toBe(5);
+    const [outer, hole] = subpaths(figure.outlinePath);
+    expect(subpaths(figure.outlinePath)).toHaveLength(2);
+    expect(Math.max(...outer.map(([x]) => x)) - Math.min(...outer.map(([x]) => x))).toBeCloseTo(200, 9);
+    expect(Math.max(...outer.map(([, y]) => y)) - Math.min(...outer.map(([, y]) => y))).toBeCloseTo(300, 9);
+    // The opening: 200 − 2·10 wide and 300 − 2·16 deep, centred.
+    expect(Math.max(...hole.map(([x]) => x)) - Math.min(...hole.map(([x]) => x))).toBeCloseTo(180, 9);
+    expect(Math.min(...hole.map(([, y]) => y))).toBeCloseTo(16, 9);
+    expect(figure.dimensions.map((dimension) => dimension.label)).toEqual(['h = 300', 'b = 200', 'tw = 10', 'tf = 16']);
+    const depth = figure.dimensions.find((dimension) => dimension.key === 'depth')!;
+    expect(Math.abs(depth.y1 - depth.y2)).toBeCloseTo(300, 9);
+    expect(figure.webAxis).not.toBeNull();
+  });
+
+  it('dimensions a box in AISC notation and a tube by its diameter and wall', () => {
+    expect(familySectionFigure(familySheet(box, 'aisc360-22-lrfd').familySection, 'aisc360-22-lrfd').dimensions.map((dimension) => dimension.label)).toEqual([
+      'H = 300',
+      'B = 200',
+      'tw = 10',
+      'tf = 16',
+    ]);
+    const { familySection } = familySheet(tube, 'aisc360-22-lrfd');
+    const figure = familySectionFigure(familySection, 'aisc360-22-lrfd');
+    expect(figure.dimensions.map((dimension) => dimension.label)).toEqual(['D = 219.1', 't = 8']);
+    const [outer, hole] = subpaths(figure.outlinePath);
+    expect(Math.max(...outer.map(([x]) => x))).toBeCloseTo(219.1 / 2, 6);
+    expect(Math.max(...hole.map(([x]) => x))).toBeCloseTo(219.1 / 2 - 8, 6);
+  });
+
+  it('plots τ of a box level with its section: peak at mid-depth, a jump at each flange face, V/(2·hw·tw) between them', () => {
+    const { familySection, familyStress } = familySheet(box, 'en1993-1-1');
+    const frame = familyFrame(familySection);
+    const figure = stressFigure(familyStressInput(familySection, familyStress), frame);
+    expect(figure.peak.y).toBeCloseTo(150, 6);
+    // Square corners: the cut width jumps from 2·tw = 20 to b = 200 at the inside faces, so τ by 10 times.
+    expect(figure.jumps.map((jump) => jump.segment.y1).sort((a, b) => a - b)).toEqual([16, 284]);
+    for (const jump of familyStress.jumps) expect(Math.max(jump.below_MPa, jump.above_MPa) / Math.min(jump.below_MPa, jump.above_MPa)).toBeCloseTo(10, 9);
+    expect(figure.marks[0].label.startsWith('V/(2·hw·tw) = ')).toBe(true);
+    expect([figure.marks[0].segment.y1, figure.marks[0].segment.y2]).toEqual([16, 284]);
+  });
+
+  it('plots τ of a tube over its whole diameter with the peak at the centre', () => {
+    const { familySection, familyStress } = familySheet(tube, 'en1993-1-1');
+    const figure = stressFigure(familyStressInput(familySection, familyStress), familyFrame(familySection));
+    // Mid-depth, within the chords' 0.01 mm of the circle.
+    expect(figure.peak.y).toBeCloseTo(219.1 / 2, 1);
+    expect(figure.jumps).toEqual([]);
     expect(figure.areaPath.endsWith('L0,0Z')).toBe(true);
   });
 });

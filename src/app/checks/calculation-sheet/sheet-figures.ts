@@ -7,8 +7,13 @@
  * svgY = depth. Their width and height attributes are paper millimetres at a drawing-office scale 1:n, so a print is to
  * scale; text and arrow sizes are paper sizes multiplied by n, so they print the same at every scale.
  */
+import type { FamilySheetSection, FamilySheetStress } from '../../../../server/checks/checks-api-types';
+import type { Standard } from '../../../../server/engine/check';
+import type { Point2_mm } from '../../../../server/engine/section-family';
 import type { SectionProperties } from '../../../../server/engine/section-properties';
+import { outlineAlongShear } from '../../../../server/engine/shear-axis';
 import { formatNumber } from '../../../../server/engine/trace';
+import { type SectionDimensionMark, sectionDimensionMarks, WEB_AVERAGE_FORMULAS } from '../../../../server/reports/section-dimension-marks';
 import { drawingScale, niceTicks, PT_PER_MM, sectionOutline_mm } from '../../../../server/reports/section-outline';
 
 /**
@@ -42,7 +47,8 @@ export interface Segment {
 }
 
 export interface DimensionLine extends Segment {
-  key: 'd' | 'b-top' | 'b-bottom' | 'tf' | 'tw' | 'r';
+  /** I-sections: 'd', 'b-top', 'b-bottom', 'tf', 'tw', 'r'; other families: SectionDimensionMark keys. */
+  key: string;
   label: string;
   labelX: number;
   labelY: number;
@@ -59,8 +65,10 @@ export interface SectionFigure {
   frame: FigureFrame;
   viewBox: string;
   widthPaper_mm: number;
+  /** The outer loop and any voids, one closed subpath each: fill it with the even-odd rule. */
   outlinePath: string;
-  webAxis: Segment;
+  /** Centre line of a section symmetric about the vertical; null for channels and angles. */
+  webAxis: Segment | null;
   dimensions: DimensionLine[];
   arrowSize: number;
   textSize: number;
@@ -260,8 +268,8 @@ export interface StressFigureInput {
   tauMax_MPa: number;
   tauMaxAt_mm: number;
   junctions: readonly JunctionJump[];
-  /** V/(hw·tw) and the levels bounding the clear web. */
-  webAverage: { tau_MPa: number; from_mm: number; to_mm: number };
+  /** The web average, the levels bounding the plates it averages over, and its formula ('V/(hw·tw)' when absent). */
+  webAverage: { tau_MPa: number; from_mm: number; to_mm: number; formula?: string } | null;
   /** EN 1993-1-1 (6.19): fy/(√3·γM0); absent for AISC. */
   elasticLimit_MPa?: number;
 }
@@ -291,15 +299,16 @@ export function stressFigure(data: StressFigureInput, frame: FigureFrame): Stres
   const peakY = y(data.tauMaxAt_mm);
   const labelColumn = plotWidth + 3 * n;
   const { webAverage } = data;
-  const marks: StressMark[] = [
-    {
+  const marks: StressMark[] = [];
+  if (webAverage) {
+    marks.push({
       key: 'web-average',
       segment: { x1: x(webAverage.tau_MPa), y1: y(webAverage.to_mm), x2: x(webAverage.tau_MPa), y2: y(webAverage.from_mm) },
-      label: `V/(hw·tw) = ${formatNumber(webAverage.tau_MPa)}`,
+      label: `${webAverage.formula ?? 'V/(hw·tw)'} = ${formatNumber(webAverage.tau_MPa)}`,
       labelX: labelColumn,
       labelY: peakY + 2.5 * text,
-    },
-  ];
+    });
+  }
   if (data.elasticLimit_MPa !== undefined) {
     marks.push({
       key: 'elastic-limit',
@@ -332,5 +341,149 @@ export function stressFigure(data: StressFigureInput, frame: FigureFrame): Stres
     })),
     marks,
     textSize: text,
+  };
+}
+
+/** The outline a family's sheet draws: turned a quarter for the minor axis, so the shear runs up the page as τ(s) does. */
+function drawnOutline(section: FamilySheetSection): { loops: Point2_mm[][]; minX: number; maxX: number } {
+  const polygon = outlineAlongShear(section.outline, section.axis);
+  const loops = [polygon.outer, ...polygon.voids];
+  const xs = polygon.outer.map(([x]) => x);
+  return { loops, minX: Math.min(...xs), maxX: Math.max(...xs) };
+}
+
+/** The frame of a family's figures: s from the section's bottom (from_mm) to its top (to_mm) along the shear. */
+export function familyFrame(section: FamilySheetSection): FigureFrame {
+  const { minX, maxX } = drawnOutline(section);
+  const depth_mm = section.properties.to_mm - section.properties.from_mm;
+  const ptBox = (paper_mm: number): number => paper_mm * PT_PER_MM;
+  const scale = drawingScale(maxX - minX, depth_mm, ptBox(SECTION_BOX_MM.width), ptBox(SECTION_BOX_MM.height));
+  const viewTop = -MARGIN_MM.top * scale;
+  const viewHeight = depth_mm + (MARGIN_MM.top + MARGIN_MM.bottom) * scale;
+  return { scale, depth_mm, viewTop, viewHeight, heightPaper_mm: viewHeight / scale };
+}
+
+/** One dimension mark of engine/section-dimension-marks.ts as an SVG dimension line, paper offsets scaled by 1:n. */
+function dimensionLineOf(mark: SectionDimensionMark, from_mm: number, frame: FigureFrame): DimensionLine {
+  const n = frame.scale;
+  const gap = 1.5 * n;
+  const text = TEXT_MM * n;
+  const at = ([px, py]: Point2_mm): [number, number] => [px, svgY(frame, py - from_mm)];
+  const [x1, y1] = at(mark.from);
+  const [x2, y2] = at(mark.to);
+  if (mark.kind === 'thickness') {
+    // Arrows on the plate's faces, a leader on past `to` to the label.
+    const length = Math.hypot(x2 - x1, y2 - y1) || 1;
+    const [ux, uy] = [(x2 - x1) / length, (y2 - y1) / length];
+    const end: [number, number] = [x2 + ux * 6 * n, y2 + uy * 6 * n];
+    const toRight = end[0] >= x2;
+    return {
+      key: mark.key,
+      x1,
+      y1,
+      x2,
+      y2,
+      label: mark.label,
+      labelX: end[0] + (toRight ? gap : -gap),
+      labelY: end[1] + text / 3,
+      anchor: toRight ? 'start' : 'end',
+      vertical: false,
+      extensions: [{ x1: x2, y1: y2, x2: end[0], y2: end[1] }],
+      arrows: 'both',
+    };
+  }
+  const offset = 8 * n;
+  const vertical = mark.side === 'left' || mark.side === 'right';
+  const sign = mark.side === 'left' || mark.side === 'top' ? -1 : 1;
+  if (vertical) {
+    const lineX = x1 + sign * offset;
+    return {
+      key: mark.key,
+      x1: lineX,
+      y1,
+      x2: lineX,
+      y2,
+      label: mark.label,
+      labelX: lineX + sign * gap,
+      labelY: (y1 + y2) / 2,
+      anchor: 'middle',
+      vertical: true,
+      extensions: [
+        { x1: x1 + sign * gap, y1, x2: lineX + sign * gap, y2: y1 },
+        { x1: x2 + sign * gap, y1: y2, x2: lineX + sign * gap, y2 },
+      ],
+      arrows: 'both',
+    };
+  }
+  const lineY = y1 + sign * offset;
+  return {
+    key: mark.key,
+    x1,
+    y1: lineY,
+    x2,
+    y2: lineY,
+    label: mark.label,
+    labelX: (x1 + x2) / 2,
+    labelY: sign < 0 ? lineY - gap : lineY + gap + text,
+    anchor: 'middle',
+    vertical: false,
+    extensions: [
+      { x1, y1: y1 + sign * gap, x2: x1, y2: lineY + sign * gap },
+      { x1: x2, y1: y2 + sign * gap, x2, y2: lineY + sign * gap },
+    ],
+    arrows: 'both',
+  };
+}
+
+/** A channel, tee, angle, box or tube drawn to scale from its outline, voids included, with its main dimensions. */
+export function familySectionFigure(section: FamilySheetSection, standard: Standard, frame: FigureFrame = familyFrame(section)): SectionFigure {
+  const n = frame.scale;
+  const from = section.properties.from_mm;
+  const { loops, minX, maxX } = drawnOutline(section);
+  const y = (s_mm: number): number => svgY(frame, s_mm - from);
+  const outlinePath = loops.map((loop) => `M${loop.map(([x, s]) => point(x, y(s))).join('L')}Z`).join('');
+  const left = minX - MARGIN_MM.left * n;
+  const width = maxX - minX + (MARGIN_MM.left + MARGIN_MM.right) * n;
+  const symmetric = section.dimensions.family === 'box' || section.dimensions.family === 'tube';
+  return {
+    frame,
+    viewBox: [left, frame.viewTop, width, frame.viewHeight].map(round).join(' '),
+    widthPaper_mm: round(width / n),
+    outlinePath,
+    webAxis: symmetric ? { x1: 0, y1: y(section.properties.to_mm) - 3 * n, x2: 0, y2: y(from) + 3 * n } : null,
+    dimensions: sectionDimensionMarks(section.dimensions, standard, section.axis).map((mark) => dimensionLineOf(mark, from, frame)),
+    arrowSize: ARROW_MM * n,
+    textSize: TEXT_MM * n,
+  };
+}
+
+/**
+ * τ(s) of a family's section as the stress figure draws it: levels from the section's bottom, each jump labelled
+ * from the side nearer the neutral axis (the web or wall) to the side beyond it, the web average over the plates it
+ * averages (between the outermost jumps, or the whole depth).
+ */
+export function familyStressInput(section: FamilySheetSection, stress: FamilySheetStress): StressFigureInput {
+  const from = section.properties.from_mm;
+  const neutralAxis = section.properties.neutralAxis_mm;
+  const levels = stress.jumps.map((jump) => jump.level_mm - from);
+  const depth = section.properties.to_mm - from;
+  return {
+    samples: stress.samples.map((sample) => ({ y_mm: sample.s_mm - from, tau_MPa: sample.tau_MPa })),
+    tauMax_MPa: stress.tauMax_MPa,
+    tauMaxAt_mm: stress.at_mm - from,
+    junctions: stress.jumps.map((jump) => {
+      const below = jump.level_mm > neutralAxis;
+      return { level_mm: jump.level_mm - from, webSide_MPa: below ? jump.below_MPa : jump.above_MPa, flangeSide_MPa: below ? jump.above_MPa : jump.below_MPa };
+    }),
+    webAverage:
+      stress.webAverage_MPa === null
+        ? null
+        : {
+            tau_MPa: stress.webAverage_MPa,
+            from_mm: levels.length > 1 ? Math.min(...levels) : 0,
+            to_mm: levels.length > 1 ? Math.max(...levels) : depth,
+            formula: WEB_AVERAGE_FORMULAS[section.dimensions.family],
+          },
+    elasticLimit_MPa: stress.elasticLimit_MPa,
   };
 }
