@@ -47,6 +47,11 @@ export interface EnBendingCapacity {
   /** EN 1993-1-5 §7.1 data when the web buckles in shear, else null. */
   buckling: { vbwRd_N: number; mfRd_Nmm: number } | null;
   trace: TraceStep[];
+  /** Per-force constants, prepared once so enShearBendingUtilisation reads flat numbers: whether §7.1 applies. */
+  webBuckles: boolean;
+  /** §7.1: Vbw,Rd and Mf,Rd/Mpl,Rd; 0 where the web does not buckle. */
+  vbwRd_N: number;
+  flangeShare: number;
 }
 
 export interface ShearBendingResult {
@@ -172,7 +177,20 @@ export function prepareEnBending(input: EnBendingInput): EnBendingCapacity {
       trace.push(step(CLAUSE_7, 'Plastic moment resistance of the cross-section', 'Mpl,Rd = Wpl·fy/γM0', `${f(section.plasticModulus_mm3)} mm³ × ${f(fy)} MPa / ${f(gammaM0)}`, mpl / 1e6, 'kNm'));
     }
   }
-  return { basis, mcRd_Nmm: mc, mplRd_Nmm: mpl, vplRd_N: input.vplRd_N, plasticShare, elasticRatio, shearAreaPlates: plates !== null, buckling, trace };
+  return {
+    basis,
+    mcRd_Nmm: mc,
+    mplRd_Nmm: mpl,
+    vplRd_N: input.vplRd_N,
+    plasticShare,
+    elasticRatio,
+    shearAreaPlates: plates !== null,
+    buckling,
+    trace,
+    webBuckles: buckling !== null,
+    vbwRd_N: buckling === null ? 0 : buckling.vbwRd_N,
+    flangeShare: buckling === null ? 0 : buckling.mfRd_Nmm / mpl,
+  };
 }
 
 function requireForces(shear_N: unknown, moment_Nmm: unknown): { v: number; m: number } {
@@ -195,14 +213,17 @@ export function shearReductionRho(shear_N: number, vplRd_N: number): number {
   return ratio >= 1 ? 1 : (2 * ratio - 1) ** 2;
 }
 
-/** The per-force arithmetic: the shear-with-bending utilisation alone, without a trace. */
+/**
+ * The per-force arithmetic: the shear-with-bending utilisation alone, without a trace. It reads only numbers prepared
+ * once per section and axis and allocates nothing, so a check run can call it for every station and combination.
+ */
 export function enShearBendingUtilisation(c: EnBendingCapacity, shear_N: number, moment_Nmm: number): number {
   const v = Math.abs(shear_N);
   const m = Math.abs(moment_Nmm);
-  if (c.buckling !== null) {
+  if (c.webBuckles) {
     const e1 = m / c.mplRd_Nmm;
-    const e3 = v / c.buckling.vbwRd_N;
-    const flanges = c.buckling.mfRd_Nmm / c.mplRd_Nmm;
+    const e3 = v / c.vbwRd_N;
+    const flanges = c.flangeShare;
     return e3 > 0.5 && e1 >= flanges ? e1 + (1 - flanges) * (2 * e3 - 1) ** 2 : e1;
   }
   return ratioTo(m, reducedMoment_Nmm(c, shearReductionRho(v, c.vplRd_N)));
@@ -223,10 +244,10 @@ export function enShearBending(c: EnBendingCapacity, shear_N: number | undefined
   const { v, m } = requireForces(shear_N, moment_Nmm);
   const trace: TraceStep[] = [...c.trace];
   if (c.buckling !== null) {
-    const { vbwRd_N, mfRd_Nmm } = c.buckling;
+    const { vbwRd_N } = c.buckling;
     const e1 = m / c.mplRd_Nmm;
     const e3 = v / vbwRd_N;
-    const flanges = mfRd_Nmm / c.mplRd_Nmm;
+    const flanges = c.flangeShare;
     trace.push(step(CLAUSE + '(2)', 'The web buckles in shear: interaction by EN 1993-1-5 §7.1', '—', '—', '—'));
     trace.push(step(CLAUSE_7 + ' (7.1)', 'Bending ratio', 'η̄1 = MEd/Mpl,Rd', `${f(m / 1e6)} / ${f(c.mplRd_Nmm / 1e6)} kNm`, e1));
     trace.push(step(CLAUSE_7 + ' (7.1)', 'Shear ratio of the web', 'η̄3 = VEd/Vbw,Rd', `${f(v / 1000)} / ${f(vbwRd_N / 1000)} kN`, e3));
