@@ -1,8 +1,8 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { CheckRun } from './check-run.entity';
+import type { FamilyCheckName, ShearAxis } from '../engine/shear-axis';
 import type { RunFlag } from './check-run-compute';
 import { RESULT_STATUSES, type ResultStatus } from './checks-api-types';
-
 
 /**
  * One member's outcome in a check run: the columns the results table sorts and filters on, indexed per run. Kept
@@ -50,6 +50,12 @@ export class CheckMemberResult {
 
   @Column({ type: 'text', nullable: true })
   governingCombination: string | null;
+
+  @Column({ type: String, length: 8, nullable: true })
+  governingAxis: ShearAxis | null;
+
+  @Column({ type: String, length: 24, nullable: true })
+  governingCheck: FamilyCheckName | null;
 
   @Column({ type: 'real', nullable: true })
   VEd_kN: number | null;

@@ -3,7 +3,8 @@ import type { GradeId } from '../engine/grades';
 import { sectionProperties } from '../engine/section-properties';
 import { shearStressProfile } from '../engine/shear-stress';
 import { fromNewtons, toNewtons } from '../engine/units';
-import type { IMemberProfile, MemberMaterial, MemberProfile } from '../ifc/model-read-result';
+import { evaluateFamilyCheck, prepareFamilyCapacity } from '../engine/family-capacity';
+import { type IMemberProfile, type MemberMaterial, type MemberProfile, sectionDimensionsOf } from '../ifc/model-read-result';
 import type { GoverningShear } from '../results/governing-shear';
 import { type CheckParametersInput, checkParametersSchema } from './check-parameters';
 import { type CheckableMember, type CheckRunProgress, computeCheckRun } from './check-run-compute';
@@ -226,5 +227,107 @@ describe('computeCheckRun: sections of other families', () => {
     expect(lower.governing!.VRd_N / base.governing!.VRd_N).toBeCloseTo(0.8 / 0.9, 12);
     expect(lower.flags).toContain('resistance-factor-overridden');
     expect(base.flags).not.toContain('resistance-factor-overridden');
+  });
+});
+
+describe('computeCheckRun: both shear axes and shear with bending', () => {
+  const en = { standard: 'en1993-1-1' } as const;
+  const steel = material('S355', 355);
+  const kN = 1e3;
+  const kNm = 1e6;
+
+  // Invented welded girder, the hand-worked case of server/engine/shear-bending.spec.ts: 500 deep, web 10, flanges
+  // 220 × 16, S355 (fy = 355 MPa for t ≤ 16 mm, EN 10025-2), η = 1.2, γM0 = 1.0: Vpl,Rd = 1151.1 kN. The run takes the
+  // moment resistance on an elastic basis: I = (220·500³ − 210·468³)/12 = 497.86e6 mm⁴, Mel,Rd = I/250·355 = 706.96 kNm.
+  // VEd = 900 kN: ρ = (2 × 900/1151.1 − 1)² = 0.3179 (EN 1993-1-1 (6.29)); the web edge at 234 mm reaches
+  // (1 − ρ)·fy when the extreme fibre at 250 mm is at fy·min(1, 0.6821 × 250/234) = 0.7288·fy, so
+  // MV,Rd = 0.7288 × 706.96 = 515.2 kNm and MEd = 450 kNm uses 0.8734 of it [calc, by hand], above the shear alone (0.7819).
+  const girder: MemberProfile = {
+    family: 'I',
+    name: 'Welded girder 500',
+    source: 'ifc-profile',
+    ifcType: 'IfcIShapeProfileDef',
+    fabrication: 'welded',
+    depth_mm: 500,
+    webThickness_mm: 10,
+    topFlange: { width_mm: 220, thickness_mm: 16, filletRadius_mm: 0 },
+    bottomFlange: { width_mm: 220, thickness_mm: 16, filletRadius_mm: 0 },
+  };
+
+  it('checks shear with bending at the largest shear with the moment there (EN 1993-1-1 §6.2.8, worked by hand)', () => {
+    const [check] = run([member('G', girder, steel)], { G: [shear('CO1', 900 * kN, { station_mm: 0, majorMoment_Nmm: 450 * kNm }), shear('CO2', 300 * kN, { station_mm: 0 })] }, en).members;
+    expect(check.status).toBe('pass');
+    expect(check.governing).toMatchObject({ combination: 'CO1', axis: 'major', check: 'shear with bending', VEd_N: 900 * kN, MEd_Nmm: 450 * kNm });
+    expect(Math.abs(check.governing!.VRd_N / kN - 1151.1) / 1151.1).toBeLessThan(1e-4);
+    expect(Math.abs(check.governing!.utilisation - 0.8734) / 0.8734).toBeLessThan(2e-4);
+    expect(check.checks!.map((c) => [c.axis, c.check, c.combination])).toEqual([
+      ['major', 'major-axis shear', 'CO1'],
+      ['major', 'shear with bending', 'CO1'],
+    ]);
+    expect(check.checks![0].utilisation).toBeCloseTo(900 / 1151.1, 4);
+    expect(check.combinations[0].byAxis).toEqual({ major: check.governing!.utilisation, minor: null });
+    expect(check.combinations[1].utilisation).toBeCloseTo((300 * kN) / check.governing!.VRd_N, 12);
+  });
+
+  it('checks an I on its minor axis with the family engine, and names it when it governs', () => {
+    const ipe = profileOf('IPE 300');
+    const prepared = prepareFamilyCapacity(sectionDimensionsOf(ipe), { grade: 'S355' }, 'en1993-1-1', { fabrication: 'rolled', momentBasis: 'elastic' });
+    if (!prepared.minor.applicable || !prepared.major.applicable) throw new Error('IPE 300 is checkable on both axes');
+    const Vy = 0.8 * prepared.minor.VRd_N;
+    const [check] = run([member('I', ipe, steel)], { I: [shear('CO1', 100 * kN, { station_mm: 0, minor: { shear_N: -Vy, station_mm: 2000, row: 5, memberKey: 'K' } })] }, en).members;
+    expect(check.governing).toMatchObject({ axis: 'minor', check: 'minor-axis shear', VEd_N: -Vy, station_mm: 2000, row: 5 });
+    expect(check.governing!.utilisation).toBeCloseTo(0.8, 12);
+    // The major axis keeps check.ts's capacity, which the family engine equals for an I (family-capacity.spec.ts).
+    expect(check.checks![0]).toMatchObject({ axis: 'major', check: 'major-axis shear' });
+    expect(check.checks![0].VRd_N).toBeCloseTo(prepared.major.VRd_N, 6);
+    expect(check.combinations[0]).toMatchObject({ minorVEd_N: -Vy, byAxis: { minor: 0.8 } });
+  });
+
+  it('checks a channel on both axes with the engine’s own capacities and the moment about each', () => {
+    const channel: MemberProfile = {
+      family: 'channel',
+      name: 'Invented channel 200',
+      source: 'ifc-profile',
+      ifcType: 'IfcUShapeProfileDef',
+      fabrication: 'rolled',
+      depth_mm: 200,
+      width_mm: 80,
+      webThickness_mm: 6,
+      flangeThickness_mm: 11,
+      rootRadius_mm: 13,
+    } as MemberProfile;
+    const prepared = prepareFamilyCapacity(sectionDimensionsOf(channel), { grade: 'S355' }, 'en1993-1-1', { fabrication: 'rolled', momentBasis: 'elastic' });
+    const forces = shear('CO1', 150 * kN, { station_mm: 0, majorMoment_Nmm: 20 * kNm, minor: { shear_N: 20 * kN, station_mm: 0, moment_Nmm: 2 * kNm, row: 2, memberKey: 'K' } });
+    const [check] = run([member('C', channel, steel)], { C: [forces] }, en).members;
+    const expected = (['major', 'minor'] as const).map((axis) => {
+      const forcesOf = axis === 'major' ? { shear_N: 150 * kN, moment_Nmm: 20 * kNm } : { shear_N: 20 * kN, moment_Nmm: 2 * kNm };
+      return evaluateFamilyCheck(prepared, axis, forcesOf);
+    });
+    expect(check.combinations[0].byAxis).toEqual({ major: expected[0].utilisation, minor: expected[1].utilisation });
+    const governingAxis = expected[0].utilisation >= expected[1].utilisation ? expected[0] : expected[1];
+    expect(check.governing).toMatchObject({ axis: governingAxis.axis, check: governingAxis.governing, utilisation: governingAxis.utilisation });
+    expect(check.checks!.map((c) => `${c.axis} ${c.check}`)).toEqual(['major major-axis shear', 'major shear with bending', 'minor minor-axis shear', 'minor shear with bending']);
+  });
+
+  it('checks what the results give: a moment without its shear is a plain reason and a flag, never a NaN', () => {
+    const [check] = run([member('G', girder, steel)], { G: [shear('CO1', 200 * kN, { station_mm: 0, minorMomentPeak: { moment_Nmm: 5 * kNm, station_mm: 2500 } })] }, en).members;
+    expect(check.status).toBe('pass');
+    expect(check.governing).toMatchObject({ axis: 'major', check: 'major-axis shear' });
+    expect(Number.isNaN(check.governing!.utilisation)).toBe(false);
+    expect(check.flags).toContain('moment-without-shear');
+    expect(check.reason).toContain('without the minor-axis shear (Vy)');
+  });
+
+  it('says so when the largest moment acts away from the largest shear', () => {
+    const [check] = run([member('G', girder, steel)], { G: [shear('CO1', 200 * kN, { station_mm: 0, majorMoment_Nmm: 0, majorMomentPeak: { moment_Nmm: 300 * kNm, station_mm: 5000 } })] }, en).members;
+    expect(check.flags).toContain('moment-peak-elsewhere');
+    expect(check.reason).toContain('another station');
+  });
+
+  it('keeps Vz-only results as before: no per-axis values, the major-axis shear of check.ts', () => {
+    const [check] = run([member('I', profileOf('IPE 300'), steel)], { I: [shear('CO1', 100 * kN)] }, en).members;
+    expect(check.combinations[0].byAxis).toBeUndefined();
+    expect(check.reason).toBeUndefined();
+    expect(check.governing).toMatchObject({ axis: 'major', check: 'major-axis shear' });
   });
 });

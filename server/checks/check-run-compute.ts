@@ -15,18 +15,18 @@ import {
   evaluateCapacity,
   prepareCapacity,
   type PreparedCapacity,
-  utilisationOf,
 } from '../engine/check';
 import type { GradeId } from '../engine/grades';
 import { EngineInputError } from '../engine/input-error';
 import type { Fabrication, ISectionInput } from '../engine/section';
 import { shearStressProfile } from '../engine/shear-stress';
 import { formatNumber as f, step } from '../engine/trace';
-import { type AxisCapacity, evaluateFamilyCheck, FamilyCapacityCache, type FamilyCheckFlag, familyUtilisation, type PreparedFamilyCapacity } from '../engine/family-capacity';
+import { type AxisCapacity, type AxisForces, evaluateFamilyCheck, FamilyCapacityCache, type FamilyCheckFlag, type PreparedFamilyCapacity } from '../engine/family-capacity';
 import { webShearArea_mm2 } from '../engine/section-family';
-import type { FamilyCheckName, ShearAxis } from '../engine/shear-axis';
+import { type FamilyCheckName, SHEAR_CHECK_NAMES, type ShearAxis } from '../engine/shear-axis';
+import { type EnBendingCapacity, enShearBendingUtilisation } from '../engine/shear-bending';
 import { type IMemberProfile, isIProfile, type MemberFlag, type MemberProfile, type MemberRecord, sectionDimensionsOf } from '../ifc/model-read-result';
-import type { GoverningShear } from '../results/governing-shear';
+import type { GoverningShear, MomentPeak } from '../results/governing-shear';
 import type { CheckParameters } from './check-parameters';
 
 export type CheckableMember = Pick<MemberRecord, 'globalId' | 'status' | 'reason' | 'profile' | 'material' | 'flags'>;
@@ -40,16 +40,42 @@ export type RunFlag =
   | 'no-results'
   | 'fabrication-overridden'
   | 'resistance-factor-overridden'
-  | 'several-result-keys';
+  | 'several-result-keys'
+  /** A moment about an axis is given where that axis's shear is not: that shear with bending is not checked. */
+  | 'moment-without-shear'
+  /** The largest moment acts at another station than the largest shear: the interaction is checked at the shear's. */
+  | 'moment-peak-elsewhere';
 
 export interface CombinationCheck {
   combination: string;
-  /** Signed, as imported. */
+  /** The major-axis shear (Vz), signed, as imported; station, row and key are its own. */
   VEd_N: number;
+  /** The largest of the member's checks in this combination, over both axes. */
   utilisation: number;
   station_mm?: number;
   row: number;
   memberKey: string;
+  /**
+   * Per axis, each the larger of its shear and its shear with bending; null where the axis has no shear given. Only
+   * where the results give more than Vz (older runs and Vz-only results have |VEd|/VRd of the major axis).
+   */
+  byAxis?: { major: number; minor: number | null };
+  /** The minor-axis shear (Vy), signed, when given. */
+  minorVEd_N?: number;
+}
+
+/** The governing result of one axis and check over the combinations (what `checks` of a member lists). */
+export interface AxisCheck {
+  axis: ShearAxis;
+  check: FamilyCheckName;
+  combination: string;
+  station_mm?: number;
+  VEd_N: number;
+  /** The moment at the shear's station, for 'shear with bending'; null for the shear checks. */
+  MEd_Nmm: number | null;
+  /** The shear resistance of the axis. */
+  VRd_N: number;
+  utilisation: number;
 }
 
 export interface GoverningCheck extends CombinationCheck {
@@ -62,6 +88,8 @@ export interface GoverningCheck extends CombinationCheck {
   /** The axis and check that govern ('major' and 'major-axis shear' for the web of an I); absent in older runs. */
   axis?: ShearAxis;
   check?: FamilyCheckName;
+  /** The moment at the governing shear's station about the axis it bends, when given. */
+  MEd_Nmm?: number;
 }
 
 export interface MemberCheck {
@@ -69,12 +97,14 @@ export interface MemberCheck {
   status: MemberCheckStatus;
   /** Passing, but at or above the warning ratio. */
   warning: boolean;
-  /** Why a member was not checked or not applicable. */
+  /** Why a member was not checked or not applicable; for a checked member, what of it was not checked. */
   reason?: string;
   grade: GradeId | null;
   fy_MPa: number | null;
   fabrication: Fabrication | null;
   governing: GoverningCheck | null;
+  /** The governing result per axis and check the member was checked for; absent in older runs. */
+  checks?: AxisCheck[];
   combinations: CombinationCheck[];
   flags: RunFlag[];
 }
@@ -153,111 +183,214 @@ function checkOneMember(
   if (member.status === 'not-applicable') return unchecked('not-applicable', member.reason ?? 'The profile is not an I-section.');
   // A flagged member may carry a section (read, but on a member of no length, say); it is never checked.
   if (member.status === 'flagged') return unchecked('not-checked', member.reason ?? 'The model reader flagged this member.');
-  if (!member.profile) return unchecked('not-checked', member.reason ?? 'No section could be read for this member.');
+  const profile = member.profile;
+  if (!profile) return unchecked('not-checked', member.reason ?? 'No section could be read for this member.');
   if (shears.length === 0) return unchecked('not-checked', 'No shear results were matched to this member.', [...memberFlags, 'no-results']);
-  if (!isIProfile(member.profile)) return checkFamilyMember(member, member.profile, shears, parameters, overrides, families, unchecked);
 
-  const { section, overridden } = checkedSection(member.profile, overrides);
   const material = materialOf(member, parameters);
-  const prepared = capacities.get(section, material);
-  if (prepared instanceof EngineInputError) {
-    return unchecked('not-checked', `The section cannot be checked: ${prepared.message}.`, [...memberFlags, 'invalid-profile']);
+  const fabrication = overrides.get(sectionKey(profile.name)) ?? profile.fabrication;
+  const invalid = (error: EngineInputError) => unchecked('not-checked', `The section cannot be checked: ${error.message}.`, [...memberFlags, 'invalid-profile']);
+  const notes: string[] = [];
+  let rules: MemberRules;
+  if (isIProfile(profile)) {
+    const prepared = capacities.get(checkedSection(profile, overrides).section, material);
+    if (prepared instanceof EngineInputError) return invalid(prepared);
+    // The minor axis and shear with bending of an I go through the family engine, with the I's own dimensions.
+    const needsFamily = shears.some((shear) => shear.minor !== undefined || shear.majorMoment_Nmm !== undefined || shear.minorMomentPeak !== undefined);
+    let family = needsFamily ? families.get(profile, fabrication, material) : null;
+    if (family instanceof EngineInputError) {
+      notes.push(`Minor-axis shear and shear with bending are not checked: ${family.message}.`);
+      family = null;
+    }
+    rules = { i: prepared, family, majorVRd_N: prepared.capacity.VRd_N, majorBending: family?.major.applicable ? family.major.bending : null };
+  } else {
+    const family = families.get(profile, fabrication, material);
+    if (family instanceof EngineInputError) return invalid(family);
+    if (!family.major.applicable) return unchecked('not-applicable', `No shear check for this section by this standard: ${family.major.reason}.`);
+    rules = { i: null, family, majorVRd_N: family.major.VRd_N, majorBending: family.major.bending };
   }
-  const { capacity } = prepared;
+  const minorAxis = rules.family?.minor.applicable ? rules.family.minor : null;
+  const givenFlags = new Set<RunFlag>();
+  if (rules.family && !minorAxis && shears.some((shear) => shear.minor !== undefined)) {
+    notes.push(`Minor-axis shear is not checked: ${(rules.family.minor as { reason: string }).reason}.`);
+  }
 
-  const combinations = shears.map((shear) => ({
-    combination: shear.combination,
-    VEd_N: shear.shear_N,
-    utilisation: utilisationOf(capacity, shear.shear_N),
-    ...(shear.station_mm !== undefined && { station_mm: shear.station_mm }),
-    row: shear.row,
-    memberKey: shear.memberKey,
-  }));
-  let governing = combinations[0];
-  for (const combination of combinations) if (combination.utilisation > governing.utilisation) governing = combination;
+  const best = emptySlots();
+  const beyondMajorShear = shears.some((shear) => shear.minor !== undefined || (rules.majorBending !== null && shear.majorMoment_Nmm !== undefined));
+  const combinations = shears.map((shear, index): CombinationCheck => {
+    const majorShear = Math.abs(shear.shear_N) / rules.majorVRd_N;
+    const majorBending = rules.majorBending !== null && shear.majorMoment_Nmm !== undefined ? enShearBendingUtilisation(rules.majorBending, shear.shear_N, shear.majorMoment_Nmm) : -1;
+    const minor = shear.minor;
+    const minorShear = minorAxis && minor ? Math.abs(minor.shear_N) / minorAxis.VRd_N : -1;
+    const minorBending = minorAxis?.bending && minor?.moment_Nmm !== undefined ? enShearBendingUtilisation(minorAxis.bending, minor.shear_N, minor.moment_Nmm) : -1;
+    keepLarger(best, SLOT.majorShear, majorShear, index);
+    keepLarger(best, SLOT.majorBending, majorBending, index);
+    keepLarger(best, SLOT.minorShear, minorShear, index);
+    keepLarger(best, SLOT.minorBending, minorBending, index);
+    if (shear.minorMomentPeak !== undefined && minor === undefined) givenFlags.add('moment-without-shear');
+    if (momentPeakElsewhere(shear.majorMomentPeak, shear.majorMoment_Nmm, shear.station_mm) || (minor && momentPeakElsewhere(shear.minorMomentPeak, minor.moment_Nmm, minor.station_mm))) {
+      givenFlags.add('moment-peak-elsewhere');
+    }
+    const major = Math.max(majorShear, majorBending);
+    const minorUtilisation = minorShear < 0 ? null : Math.max(minorShear, minorBending);
+    return {
+      combination: shear.combination,
+      VEd_N: shear.shear_N,
+      utilisation: minorUtilisation !== null && minorUtilisation > major ? minorUtilisation : major,
+      ...(shear.station_mm !== undefined && { station_mm: shear.station_mm }),
+      row: shear.row,
+      memberKey: shear.memberKey,
+      ...(beyondMajorShear && { byAxis: { major, minor: minorUtilisation } }),
+      ...(minor !== undefined && { minorVEd_N: minor.shear_N }),
+    };
+  });
+  if (givenFlags.has('moment-without-shear')) notes.push('A moment about the minor axis is given without the minor-axis shear (Vy): shear with bending about that axis is not checked.');
+  if (givenFlags.has('moment-peak-elsewhere')) notes.push('The largest moment acts at another station than the largest shear; shear with bending is checked at the largest shear with the moment there.');
 
-  const result = evaluateCapacity(capacity, governing.VEd_N, contextFlagsOf(member.profile, material));
-  const runFlags: RunFlag[] = [];
-  if (overridden) runFlags.push('fabrication-overridden');
-  if (prepared.resistanceOverridden) runFlags.push('resistance-factor-overridden');
-  if (new Set(shears.map((shear) => shear.memberKey)).size > 1) runFlags.push('several-result-keys');
-  const magnitude = Math.abs(governing.VEd_N);
+  const slot = governingSlot(best);
+  const shear = shears[best[slot].index];
+  const axis: ShearAxis = slot === SLOT.minorShear || slot === SLOT.minorBending ? 'minor' : 'major';
+  const forces = axis === 'major' ? { shear_N: shear.shear_N, moment_Nmm: shear.majorMoment_Nmm } : { shear_N: shear.minor!.shear_N, moment_Nmm: shear.minor!.moment_Nmm };
+  const where = axis === 'major' ? shear : shear.minor!;
+  const evaluated = evaluateGoverning(rules, axis, forces, member, material);
+  const magnitude = Math.abs(forces.shear_N);
+  const runFlags: RunFlag[] = [...givenFlags];
+  if (fabrication !== profile.fabrication) runFlags.push('fabrication-overridden');
+  if (rules.i ? rules.i.resistanceOverridden : rules.family!.major.applicable && rules.family!.major.aisc && projectResistanceFactor(parameters) !== null) runFlags.push('resistance-factor-overridden');
+  if (new Set(shears.map((s) => s.memberKey)).size > 1) runFlags.push('several-result-keys');
+  if (parameters.standard !== 'en1993-1-1' && shears.some((s) => s.majorMoment_Nmm !== undefined || s.minor?.moment_Nmm !== undefined)) runFlags.push('flexure-checked-separately');
   return {
     globalId: member.globalId,
-    status: result.status,
-    warning: result.warning,
+    status: evaluated.status,
+    warning: evaluated.warning,
+    ...(notes.length > 0 && { reason: notes.join(' ') }),
     grade: material.grade,
-    fy_MPa: result.fy_MPa,
-    fabrication: section.fabrication,
+    fy_MPa: evaluated.fy_MPa,
+    fabrication: rules.i ? fabrication : rules.family!.fabrication,
     governing: {
-      ...governing,
-      VRd_N: result.VRd_N,
-      tauMax_MPa: magnitude * prepared.tauMaxPerNewton_MPa,
-      tauAvgWeb_MPa: magnitude * prepared.tauAvgWebPerNewton_MPa,
-      elasticUtilisation: result.elasticUtilisation,
+      combination: shear.combination,
+      VEd_N: forces.shear_N,
+      utilisation: best[slot].utilisation,
+      ...(where.station_mm !== undefined && { station_mm: where.station_mm }),
+      row: where.row,
+      memberKey: where.memberKey,
+      VRd_N: evaluated.VRd_N,
+      tauMax_MPa: magnitude * evaluated.tauMaxPerNewton_MPa,
+      tauAvgWeb_MPa: magnitude * evaluated.tauAvgPerNewton_MPa,
+      elasticUtilisation: evaluated.elasticUtilisation,
+      ...(forces.moment_Nmm !== undefined && { MEd_Nmm: forces.moment_Nmm }),
+      axis,
+      check: SLOT_CHECKS[slot],
     },
+    checks: axisChecks(best, shears, rules, minorAxis),
     combinations,
-    flags: [...new Set<RunFlag>([...memberFlags, ...result.flags, ...runFlags])],
+    flags: [...new Set<RunFlag>([...memberFlags, ...evaluated.flags, ...runFlags])],
   };
 }
 
-/**
- * A member of another family (channel, tee, angle, box, tube) against the shear parallel to its web(s): the results
- * give one shear force per combination, taken as the major-axis shear.
- */
-function checkFamilyMember(
-  member: CheckableMember,
-  profile: MemberProfile,
-  shears: readonly GoverningShear[],
-  parameters: CheckParameters,
-  overrides: ReadonlyMap<string, Fabrication>,
-  families: RunFamilyCapacities,
-  unchecked: (status: MemberCheckStatus, reason: string, flags?: RunFlag[]) => MemberCheck,
-): MemberCheck {
-  const memberFlags: RunFlag[] = [...member.flags];
-  const fabrication = overrides.get(sectionKey(profile.name)) ?? profile.fabrication;
-  const material = materialOf(member, parameters);
-  const prepared = families.get(profile, fabrication, material);
-  if (prepared instanceof EngineInputError) {
-    return unchecked('not-checked', `The section cannot be checked: ${prepared.message}.`, [...memberFlags, 'invalid-profile']);
+/** What a member is checked with: an I's check.ts capacity (major-axis shear), and the family engine's both axes. */
+interface MemberRules {
+  i: PreparedMember | null;
+  /** null for an I whose results give neither Vy nor a moment (or whose outline the family engine refused). */
+  family: PreparedFamilyCapacity | null;
+  majorVRd_N: number;
+  majorBending: EnBendingCapacity | null;
+}
+
+/** The four checks of a member, in the order that breaks ties (the plain shear of an axis before its interaction). */
+const SLOT = { majorShear: 0, majorBending: 1, minorShear: 2, minorBending: 3 } as const;
+const SLOT_CHECKS: readonly FamilyCheckName[] = [SHEAR_CHECK_NAMES.major, 'shear with bending', SHEAR_CHECK_NAMES.minor, 'shear with bending'];
+const SLOT_AXES: readonly ShearAxis[] = ['major', 'major', 'minor', 'minor'];
+
+/** Per check, the largest utilisation over the combinations and the combination's index (-1: not checked). */
+type Slots = Array<{ utilisation: number; index: number }>;
+
+function emptySlots(): Slots {
+  return SLOT_CHECKS.map(() => ({ utilisation: -1, index: -1 }));
+}
+
+function keepLarger(slots: Slots, slot: number, utilisation: number, index: number): void {
+  if (utilisation > slots[slot].utilisation) {
+    slots[slot].utilisation = utilisation;
+    slots[slot].index = index;
   }
-  const axis = prepared.major;
-  if (!axis.applicable) return unchecked('not-applicable', `No shear check for this section by this standard: ${axis.reason}.`);
-  const combinations = shears.map((shear) => ({
-    combination: shear.combination,
-    VEd_N: shear.shear_N,
-    utilisation: familyUtilisation(axis, shear.shear_N),
-    ...(shear.station_mm !== undefined && { station_mm: shear.station_mm }),
-    row: shear.row,
-    memberKey: shear.memberKey,
-  }));
-  let governing = combinations[0];
-  for (const combination of combinations) if (combination.utilisation > governing.utilisation) governing = combination;
-  const contextFlags: FamilyCheckFlag[] = material.assumed ? ['assumed-grade'] : [];
-  if (profile.source === 'catalogue' || profile.source === 'project-catalogue') contextFlags.push('catalogue-section');
-  const result = evaluateFamilyCheck(prepared, 'major', { shear_N: governing.VEd_N }, contextFlags);
-  const runFlags: RunFlag[] = fabrication !== profile.fabrication ? ['fabrication-overridden'] : [];
-  if (axis.aisc && projectResistanceFactor(parameters) !== null) runFlags.push('resistance-factor-overridden');
-  if (new Set(shears.map((shear) => shear.memberKey)).size > 1) runFlags.push('several-result-keys');
-  const magnitude = Math.abs(governing.VEd_N);
+}
+
+function governingSlot(slots: Slots): number {
+  let governing: number = SLOT.majorShear;
+  for (let slot = 1; slot < slots.length; slot++) if (slots[slot].utilisation > slots[governing].utilisation) governing = slot;
+  return governing;
+}
+
+/** Stations closer than this are one station (common practice, no source: far below any output spacing). */
+const SAME_STATION_MM = 1;
+
+/** The largest moment is larger than the one at the largest shear and acts elsewhere: its interaction is not checked. */
+function momentPeakElsewhere(peak: MomentPeak | undefined, atShear_Nmm: number | undefined, shearStation_mm: number | undefined): boolean {
+  if (peak === undefined || Math.abs(peak.moment_Nmm) <= Math.abs(atShear_Nmm ?? 0)) return false;
+  return peak.station_mm === undefined || shearStation_mm === undefined || Math.abs(peak.station_mm - shearStation_mm) > SAME_STATION_MM;
+}
+
+/** The governing result of each axis and check the member was checked for. */
+function axisChecks(slots: Slots, shears: readonly GoverningShear[], rules: MemberRules, minorAxis: AxisCapacity | null): AxisCheck[] {
+  const checks: AxisCheck[] = [];
+  slots.forEach(({ utilisation, index }, slot) => {
+    if (index < 0) return;
+    const shear = shears[index];
+    const axis = SLOT_AXES[slot];
+    const at = axis === 'major' ? { VEd_N: shear.shear_N, MEd_Nmm: shear.majorMoment_Nmm, station_mm: shear.station_mm } : { VEd_N: shear.minor!.shear_N, MEd_Nmm: shear.minor!.moment_Nmm, station_mm: shear.minor!.station_mm };
+    const bending = slot === SLOT.majorBending || slot === SLOT.minorBending;
+    checks.push({
+      axis,
+      check: SLOT_CHECKS[slot],
+      combination: shear.combination,
+      ...(at.station_mm !== undefined && { station_mm: at.station_mm }),
+      VEd_N: at.VEd_N,
+      MEd_Nmm: bending ? at.MEd_Nmm! : null,
+      VRd_N: axis === 'major' ? rules.majorVRd_N : minorAxis!.VRd_N,
+      utilisation,
+    });
+  });
+  return checks;
+}
+
+interface GoverningEvaluation {
+  status: 'pass' | 'fail';
+  warning: boolean;
+  fy_MPa: number;
+  VRd_N: number;
+  elasticUtilisation: number | null;
+  /** τ is proportional to V: per newton of the governing shear, the peak and the average over the shear-carrying plates. */
+  tauMaxPerNewton_MPa: number;
+  tauAvgPerNewton_MPa: number;
+  flags: readonly RunFlag[];
+}
+
+/**
+ * The engine's full result for the governing axis and forces: check.ts for the major-axis shear of an I (unchanged),
+ * the family engine for everything else (its I capacities on the major axis equal check.ts's).
+ */
+function evaluateGoverning(rules: MemberRules, axis: ShearAxis, forces: AxisForces & { shear_N: number }, member: CheckableMember, material: MaterialChoice): GoverningEvaluation {
+  const profile = member.profile!;
+  if (rules.i && axis === 'major' && (forces.moment_Nmm === undefined || rules.majorBending === null)) {
+    const result = evaluateCapacity(rules.i.capacity, forces.shear_N, contextFlagsOf(profile, material));
+    const { tauMaxPerNewton_MPa, tauAvgWebPerNewton_MPa } = rules.i;
+    return { ...result, tauMaxPerNewton_MPa, tauAvgPerNewton_MPa: tauAvgWebPerNewton_MPa };
+  }
+  const prepared = rules.family!;
+  const capacity = prepared[axis] as AxisCapacity;
+  const result = evaluateFamilyCheck(prepared, axis, forces, contextFlagsOf(profile, material));
+  // The web(s) for the major axis as before; for the minor axis the code's shear area of that axis (the flanges).
+  const tauAvgPerNewton_MPa = 1 / (axis === 'major' ? webShearArea_mm2(prepared.dimensions) : (capacity.en?.av_mm2 ?? capacity.aisc!.aw_mm2));
   return {
-    globalId: member.globalId,
     status: result.status === 'fail' ? 'fail' : 'pass',
     warning: result.warning,
-    grade: material.grade,
     fy_MPa: result.fy_MPa,
-    fabrication: prepared.fabrication,
-    governing: {
-      ...governing,
-      VRd_N: result.VRd_N,
-      tauMax_MPa: magnitude * axis.tauMaxPerShear_perMm2,
-      tauAvgWeb_MPa: magnitude / webShearArea_mm2(prepared.dimensions),
-      elasticUtilisation: result.elasticUtilisation,
-      axis: 'major',
-      check: result.governing,
-    },
-    combinations,
-    flags: [...new Set<RunFlag>([...memberFlags, ...result.flags, ...runFlags])],
+    VRd_N: result.VRd_N,
+    elasticUtilisation: result.elasticUtilisation,
+    tauMaxPerNewton_MPa: capacity.tauMaxPerShear_perMm2,
+    tauAvgPerNewton_MPa,
+    flags: result.flags,
   };
 }
 
@@ -274,7 +407,7 @@ function checkedSection(profile: IMemberProfile, overrides: ReadonlyMap<string, 
 }
 
 /** What the member's data tells the result beside the engine's own flags. */
-function contextFlagsOf(profile: IMemberProfile, material: MaterialChoice): CheckFlag[] {
+function contextFlagsOf(profile: MemberProfile, material: MaterialChoice): CheckFlag[] {
   const flags: CheckFlag[] = [];
   if (material.assumed) flags.push('assumed-grade');
   if (profile.source === 'catalogue' || profile.source === 'project-catalogue') flags.push('catalogue-section');

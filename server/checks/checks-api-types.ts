@@ -12,7 +12,7 @@ import type { ShearAxis } from '../engine/shear-axis';
 import type { TraceStep } from '../engine/trace';
 import type { MemberRecord } from '../ifc/model-read-result';
 import type { CheckParameters } from './check-parameters';
-import type { MemberCheck, RunFlag } from './check-run-compute';
+import type { GoverningCheck, MemberCheck, RunFlag } from './check-run-compute';
 import type { RunSummaryView } from './run-summary';
 
 export const CHECK_RUN_STATUSES = ['queued', 'running', 'done', 'failed'] as const;
@@ -51,6 +51,10 @@ export interface RunMemberRow {
   profileName: string | null;
   grade: string | null;
   governingCombination: string | null;
+  /** The axis and check that govern; null when the member was not checked. */
+  governingAxis: NonNullable<GoverningCheck['axis']> | null;
+  governingCheck: NonNullable<GoverningCheck['check']> | null;
+  /** The governing axis's shear, its resistance and the governing utilisation. */
   VEd_kN: number | null;
   VRd_kN: number | null;
   utilisation: number | null;

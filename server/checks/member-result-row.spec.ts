@@ -50,6 +50,19 @@ describe('member result rows', () => {
     expect(memberCheckOf(row, RUN_COMBINATIONS)).toEqual(original);
   });
 
+  it('give back the utilisation of each axis and the minor-axis shear where the results gave more than Vz', () => {
+    const original = check({
+      governing: { ...check().governing!, axis: 'minor', check: 'minor-axis shear', VEd_N: 40e3, utilisation: 0.8, VRd_N: 50e3 },
+      combinations: [
+        { combination: 'ULS-1', VEd_N: 100e3, utilisation: 0.8, row: 2, memberKey: 'E12', byAxis: { major: 0.25, minor: 0.8 }, minorVEd_N: 40e3 },
+        { combination: 'ULS-2', VEd_N: -300e3, utilisation: 0.77, station_mm: 6000, row: 5, memberKey: 'E12', byAxis: { major: 0.77, minor: null } },
+      ],
+    });
+    const row = memberResultRow(0, member, original, combinationIndex);
+    expect(row).toMatchObject({ governingAxis: 'minor', governingCheck: 'minor-axis shear' });
+    expect(memberCheckOf(row, RUN_COMBINATIONS)).toEqual(original);
+  });
+
   it('store nothing per combination for a member that was not checked', () => {
     const row = memberResultRow(0, member, check({ status: 'not-checked', governing: null, combinations: [], reason: 'No shear results were matched to this member.' }), combinationIndex);
     expect(row).toMatchObject({ status: 'not-checked', utilisation: null, VEd_kN: null, governingCombination: null });

@@ -1,8 +1,9 @@
 /**
  * A member's outcome in a check run as it is stored: the table's columns (check_member_result), and the engine result
  * without its per-combination list plus that list in a compact form (check_member_detail: combinations by index into
- * the run's list, the analysis member keys listed once). Utilisations are not stored per combination: |VEd| / VRd
- * gives them back.
+ * the run's list, the analysis member keys listed once). Where the results give only Vz, utilisations are not stored
+ * per combination (|VEd| / VRd gives them back); where they give Vy or moments too, the utilisation of each axis is
+ * stored per combination with the minor-axis shear: two or three numbers more per combination, only for such members.
  */
 import type { MemberRecord } from '../ifc/model-read-result';
 import type { CombinationCheck, MemberCheck } from './check-run-compute';
@@ -22,6 +23,10 @@ interface CompactCombinations {
   /** Distinct analysis member keys; `k` gives each combination's key when there are several. */
   keys: string[];
   k?: number[];
+  /** Per combination, when the member has more than Vz: utilisation of the major and of the minor axis, and Vy in N. */
+  u?: number[];
+  n?: (number | null)[];
+  w?: (number | null)[];
 }
 
 /** Column order of the two stored rows after their run id, for bulk inserts. */
@@ -35,6 +40,8 @@ export const MEMBER_RESULT_COLUMNS = [
   'grade',
   'status',
   'governingCombination',
+  'governingAxis',
+  'governingCheck',
   'VEd_kN',
   'VRd_kN',
   'utilisation',
@@ -73,6 +80,8 @@ export function memberResultRow(
     grade: check.grade,
     status: resultStatusOf(check),
     governingCombination: governing?.combination ?? null,
+    governingAxis: governing?.axis ?? null,
+    governingCheck: governing?.check ?? null,
     VEd_kN: governing ? governing.VEd_N / 1000 : null,
     VRd_kN: governing ? governing.VRd_N / 1000 : null,
     utilisation: governing?.utilisation ?? null,
@@ -103,6 +112,11 @@ function compactCombinations(combinations: readonly CombinationCheck[], combinat
     keys,
   };
   if (keys.length > 1) compact.k = combinations.map((combination) => keys.indexOf(combination.memberKey));
+  if (combinations.some((combination) => combination.byAxis)) {
+    compact.u = combinations.map((combination) => combination.byAxis?.major ?? combination.utilisation);
+    compact.n = combinations.map((combination) => combination.byAxis?.minor ?? null);
+    if (combinations.some((combination) => combination.minorVEd_N !== undefined)) compact.w = combinations.map((combination) => combination.minorVEd_N ?? null);
+  }
   return compact;
 }
 
@@ -111,14 +125,21 @@ export function combinationsOf(row: Pick<CheckMemberDetail, 'combinations' | 'de
   const compact = JSON.parse(row.combinations) as CompactCombinations;
   const VRd_N = row.detail.governing?.VRd_N;
   if (VRd_N === undefined) return [];
-  return compact.c.map((index, i) => ({
-    combination: runCombinations[index],
-    VEd_N: compact.v[i],
-    utilisation: Math.abs(compact.v[i]) / VRd_N,
-    ...(compact.s[i] !== null && { station_mm: compact.s[i]! }),
-    row: compact.r[i],
-    memberKey: compact.keys[compact.k?.[i] ?? 0],
-  }));
+  return compact.c.map((index, i) => {
+    const major = compact.u?.[i];
+    const minor = compact.n?.[i] ?? null;
+    const minorVEd_N = compact.w?.[i] ?? null;
+    return {
+      combination: runCombinations[index],
+      VEd_N: compact.v[i],
+      utilisation: major === undefined ? Math.abs(compact.v[i]) / VRd_N : minor !== null && minor > major ? minor : major,
+      ...(compact.s[i] !== null && { station_mm: compact.s[i]! }),
+      row: compact.r[i],
+      memberKey: compact.keys[compact.k?.[i] ?? 0],
+      ...(major !== undefined && { byAxis: { major, minor } }),
+      ...(minorVEd_N !== null && { minorVEd_N }),
+    };
+  });
 }
 
 /** The engine's MemberCheck back from a stored row. */

@@ -20,6 +20,8 @@ const row: RunMemberRow = {
   profileName: 'IPE 300',
   grade: 'S355',
   governingCombination: '-ULS 3',
+  governingAxis: 'major',
+  governingCheck: 'shear with bending',
   VEd_kN: -152.5,
   VRd_kN: 407.8,
   utilisation: 0.374,
@@ -37,7 +39,7 @@ describe('run members CSV', () => {
     expect(formulaSafe('IPE 300')).toBe('IPE 300');
     expect(formulaSafe(null)).toBe('');
     const lines = runMembersCsv(run, [row]).replace(/^\uFEFF/, '').split('\r\n');
-    expect(lines).toContain(`2Xq$9bTgT0uPq4u1dVc3Lk,'=1+2,'@SUM(A1),Level 2,IPE 300,S355,pass,'-ULS 3,-152.5,407.8,0.374,80.1,75.3,assumed-grade catalogue-section`);
+    expect(lines).toContain(`2Xq$9bTgT0uPq4u1dVc3Lk,'=1+2,'@SUM(A1),Level 2,IPE 300,S355,pass,'-ULS 3,major,shear with bending,-152.5,407.8,0.374,80.1,75.3,assumed-grade catalogue-section`);
   });
 
   it('starts with the run record and ends with the cautions', () => {

@@ -156,6 +156,8 @@ function toRow(row: CheckMemberResult): RunMemberRow {
     profileName: row.profileName,
     grade: row.grade,
     governingCombination: row.governingCombination,
+    governingAxis: row.governingAxis,
+    governingCheck: row.governingCheck,
     VEd_kN: row.VEd_kN,
     VRd_kN: row.VRd_kN,
     utilisation: row.utilisation,

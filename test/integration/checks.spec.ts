@@ -208,7 +208,7 @@ describe('check runs', () => {
       expect(first.body.rows.map((row: { tag: string }) => row.tag)).toEqual(['T23', 'T20', 'T17']);
       expect(first.body.rows[0]).toMatchObject({ status: 'fail', governingCombination: 'ULS-1', flags: [] });
       expect(Object.keys(first.body.rows[0]).sort()).toEqual(
-        ['globalId', 'tag', 'name', 'storey', 'profileName', 'grade', 'governingCombination', 'VEd_kN', 'VRd_kN', 'utilisation', 'tauMax_MPa', 'tauAvgWeb_MPa', 'status', 'flags'].sort(),
+        ['globalId', 'tag', 'name', 'storey', 'profileName', 'grade', 'governingCombination', 'governingAxis', 'governingCheck', 'VEd_kN', 'VRd_kN', 'utilisation', 'tauMax_MPa', 'tauAvgWeb_MPa', 'status', 'flags'].sort(),
       );
       const last = await page({ pageSize: 5, page: 7 });
       expect(last.body.rows.map((row: { status: string }) => row.status)).toEqual(Array(5).fill('not-checked'));
@@ -250,9 +250,9 @@ describe('check runs', () => {
       const text = response.text.replace(/^\uFEFF/, '');
       const lines = text.split('\r\n');
       expect(lines[0]).toBe(`Check run,${csvRun.id}`);
-      expect(lines).toContain('GlobalId,Tag,Name,Storey,Profile,Grade,Status,Governing combination,VEd (kN),VRd (kN),Utilisation,Tau max (MPa),Tau avg web (MPa),Flags');
+      expect(lines).toContain('GlobalId,Tag,Name,Storey,Profile,Grade,Status,Governing combination,Governing axis,Governing check,VEd (kN),VRd (kN),Utilisation,Tau max (MPa),Tau avg web (MPa),Flags');
       const beam = lines.find((line) => line.startsWith(byTag.get('T17')!.globalId))!;
-      expect(beam).toContain(`,pass,"'=HYPERLINK(""http://x"")",`);
+      expect(beam).toContain(`,pass,"'=HYPERLINK(""http://x"")",major,major-axis shear,`);
       expect(lines.filter((line) => line.includes(',pass,'))).toHaveLength(1);
       expect(text).toContain(REPORT_CAUTIONS_TEXT);
     });

@@ -43,6 +43,8 @@ export function memberRow(overrides: Partial<RunMemberRow> = {}): RunMemberRow {
     profileName: 'IPE 300',
     grade: 'S355',
     governingCombination: 'ULS-2',
+    governingAxis: 'major',
+    governingCheck: 'major-axis shear',
     VEd_kN: 405.2,
     VRd_kN: 360.5,
     utilisation: 1.1241,

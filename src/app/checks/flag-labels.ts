@@ -33,6 +33,8 @@ export const FLAG_LABELS: Readonly<Record<RunFlag, string>> = {
   'fabrication-overridden': 'fabrication set by run',
   'resistance-factor-overridden': 'factor overridden',
   'several-result-keys': 'several result keys',
+  'moment-without-shear': 'moment without its shear',
+  'moment-peak-elsewhere': 'largest moment elsewhere',
 };
 
 /** The label of a flag; a flag this client does not know yet is shown by its code. */

@@ -14,9 +14,10 @@ import { MatTableModule } from '@angular/material/table';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { debounceTime } from 'rxjs';
+import { governingCheckText } from '../../../../server/checks/governing-check-text';
 import { percentText } from '../../../../server/reports/report-format';
 import { errorMessage } from '../../core/api-error';
-import { CheckRun, MemberCheckStatus, RunMembersPage, runUrl, STATUS_NAMES } from '../checks-api';
+import { CheckRun, MemberCheckStatus, RunMemberRow, RunMembersPage, runUrl, STATUS_NAMES } from '../checks-api';
 import { flagLabel } from '../flag-labels';
 import {
   PAGE_SIZES,
@@ -34,7 +35,7 @@ import { UtilisationBar } from '../utilisation-bar/utilisation-bar';
 // Typing in the number and text filters waits for a pause before asking the server.
 const TYPING_PAUSE_MS = 300;
 
-const COLUMNS = ['tag', 'storey', 'profileName', 'grade', 'governingCombination', 'VEd_kN', 'VRd_kN', 'utilisation', 'status', 'flags'] as const;
+const COLUMNS = ['tag', 'storey', 'profileName', 'grade', 'governingCombination', 'governingCheck', 'VEd_kN', 'VRd_kN', 'utilisation', 'status', 'flags'] as const;
 
 interface SummaryCard {
   key: string;
@@ -169,6 +170,10 @@ export class RunResults {
 
   protected threeDParams(globalId: string): Record<string, string> {
     return { run: this.run().id, member: globalId };
+  }
+
+  protected checkText(row: RunMemberRow): string {
+    return governingCheckText(row.governingAxis, row.governingCheck) ?? '—';
   }
 
   protected numberText(value: number | null): string {
