@@ -42,12 +42,13 @@ export class RunReportService {
     for (const result of results) {
       if (result.status !== 'fail' && result.status !== 'warning') continue;
       const sheet = await memberSheet({ dataSource: this.dataSource }, projectId, runId, result.globalId);
-      if (!sheet.section) continue;
+      if (!sheet.section && !sheet.familySection) continue;
       sheets.push({
         memberLabel: memberLabelOf(result),
         profileName: sheet.member.profile?.name ?? result.profileName ?? '',
         storey: sheet.member.storey ?? undefined,
-        section: sheet.section.input,
+        section: sheet.section?.input,
+        ...(sheet.familySection && sheet.familyStress && { family: { section: sheet.familySection, stress: sheet.familyStress } }),
         ...(sheet.sectionNote ? { sectionNote: sheet.sectionNote } : {}),
         check: sheet.check,
         trace: sheet.trace,

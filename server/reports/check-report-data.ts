@@ -5,6 +5,7 @@
  */
 import type { CheckParameters } from '../checks/check-parameters';
 import type { CheckRunSummary, MemberCheck } from '../checks/check-run-compute';
+import type { FamilySheetSection, FamilySheetStress } from '../checks/checks-api-types';
 import type { ISectionInput } from '../engine/section';
 import type { TraceStep } from '../engine/trace';
 import type { FindingExport } from '../findings/export/finding-export';
@@ -30,8 +31,10 @@ export interface CalculationSheetData {
   memberLabel: string;
   profileName: string;
   storey?: string;
-  /** The section as checked (after any fabrication override of the run). */
-  section: ISectionInput;
+  /** An I-section as checked (after any fabrication override of the run); absent for other families. */
+  section?: ISectionInput;
+  /** A section of another family and τ(s) for the governing shear, as the member's calculation sheet gives them. */
+  family?: { section: FamilySheetSection; stress: FamilySheetStress };
   /** How the section was found and, for a tapered member, which section was checked (member-sheet.ts sectionNoteOf). */
   sectionNote?: string;
   /** The member's result in the run: failing, or passing with a warning; it must have a governing combination. */

@@ -1,3 +1,5 @@
+import { recommendedParameters } from '../checks/check-parameters';
+import { evaluateFamilyMember, familySectionOf, familyStressOf } from '../checks/family-member-sheet';
 import { SectionInputError } from '../engine/section';
 import { sampleCheckReport } from '../../test/fixtures/bcf/sample-check-report';
 import { buildCheckReport } from './check-report';
@@ -89,8 +91,34 @@ describe('buildCheckReport', () => {
 
   it('refuses a sheet whose section is not a real I-section, naming the field', async () => {
     const data = sampleCheckReport();
-    const broken = { ...data.sheets[0], section: { ...data.sheets[0].section, webThickness_mm: 0 } };
+    const broken = { ...data.sheets[0], section: { ...data.sheets[0].section!, webThickness_mm: 0 } };
     await expect(buildCheckReport({ ...data, sheets: [broken] })).rejects.toThrow(SectionInputError);
     await expect(buildCheckReport({ ...data, sheets: [broken] })).rejects.toThrow(/webThickness_mm/);
+  });
+
+  it('draws a sheet of a box with its void and of a tube, with their dimensions and τ plot', async () => {
+    const data = sampleCheckReport();
+    const parameters = recommendedParameters('en1993-1-1');
+    const base = data.sheets[0];
+    // Invented members: a welded box 400 × 250 (webs 10, flanges 20) and a tube Ø 273 × 10, both S355 under 600 kN.
+    const familySheet = (label: string, dimensions: Parameters<typeof familySectionOf>[0]['dimensions']) => {
+      const member = {
+        globalId: base.check.globalId,
+        status: 'ok' as const,
+        material: { name: 'S355', grade: 'S355' as const, fy_MPa: 355, assumed: false },
+        profile: { ...dimensions, name: label, source: 'ifc-profile' as const, ifcType: 'IfcParameterizedProfileDef', fabrication: 'welded' as const },
+      };
+      const evaluation = evaluateFamilyMember(member as never, parameters, 'major', 600_000)!;
+      const { section: _section, ...rest } = base;
+      return { ...rest, memberLabel: label, profileName: label, family: { section: familySectionOf(evaluation), stress: familyStressOf(evaluation, 600_000) }, trace: evaluation.result.trace };
+    };
+    const sheets = [
+      familySheet('BX-1', { family: 'box', depth_mm: 400, width_mm: 250, webThickness_mm: 10, flangeThickness_mm: 20 }),
+      familySheet('CT-1', { family: 'tube', diameter_mm: 273, wallThickness_mm: 10 }),
+    ];
+    const text = pdfPageTexts(await buildCheckReport({ ...data, sheets }, { compress: false })).join(' ');
+    for (const expected of ['Calculation sheet — BX-1', 'h = 400', 'b = 250', 'tw = 10', 'tf = 20', 'V/(2·hw·tw)', 'Calculation sheet — CT-1', 'd = 273', 't = 10', 'the total cut width']) {
+      expect({ expected, found: text.includes(expected) }).toEqual({ expected, found: true });
+    }
   });
 });

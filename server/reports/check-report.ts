@@ -30,7 +30,9 @@ import {
   table,
 } from './report-layout';
 import { PT_PER_MM, drawingScale } from './section-outline';
-import { drawSection, drawShearStressPlot } from './section-drawing';
+import { drawFamilySection, drawSection, drawShearStressPlot, type SheetFrame, type StressPlotData } from './section-drawing';
+import { WEB_AVERAGE_FORMULAS } from './section-dimension-marks';
+import { outlineAlongShear } from '../engine/shear-axis';
 
 export interface CheckReportOptions {
   /** Deflate page content (default). Tests switch it off to read the text back. */
@@ -170,7 +172,7 @@ function summary(doc: Pdf, data: CheckReportData): void {
       ['of which close to capacity', countCell(members.warnings, COLOURS.warning)],
       ['Fail', countCell(members.fail, COLOURS.fail)],
       ['Not checked', String(members.notChecked)],
-      ['Not an I-section web check', String(members.notApplicable)],
+      ['Not applicable (no shear rule for the section)', String(members.notApplicable)],
     ],
     TEXT_SIZE.body,
   );
@@ -236,28 +238,90 @@ const DRAWING_WIDTH_PT = 200;
 const DIMENSION_ROOM_PT = 60;
 const LABEL_COLUMN_PT = 78;
 
-function sheetDrawings(doc: Pdf, sheet: CalculationSheetData, governing: GoverningCheck): void {
-  const props = sectionProperties(sheet.section);
+/** What the drawings of one sheet need: the section's extent, how to draw it, and τ over its depth. */
+interface SheetFigure {
+  width_mm: number;
+  depth_mm: number;
+  /** Where x = 0 of the drawing lies, in millimetres right of the drawing's left edge. */
+  left_mm: number;
+  draw: (doc: Pdf, frame: SheetFrame) => void;
+  plot: StressPlotData;
+  formula: string;
+}
+
+function iSectionFigure(section: NonNullable<CalculationSheetData['section']>, governing: GoverningCheck, elasticLimit_MPa: number | undefined): SheetFigure {
+  const props = sectionProperties(section);
   const profile = shearStressProfile(props, governing.VEd_N);
-  const width_mm = Math.max(sheet.section.topFlange.width_mm, sheet.section.bottomFlange.width_mm);
+  const width_mm = Math.max(section.topFlange.width_mm, section.bottomFlange.width_mm);
+  return {
+    width_mm,
+    depth_mm: props.depth_mm,
+    left_mm: width_mm / 2,
+    draw: (doc, frame) => drawSection(doc, props, frame),
+    plot: {
+      depth_mm: props.depth_mm,
+      points: profile.points,
+      tauMax_MPa: profile.tauMax_MPa,
+      tauMaxAt_mm: profile.tauMaxAt_mm,
+      jumps: [profile.topJunction, profile.bottomJunction],
+      webAverage: { tau_MPa: profile.webAverageClear_MPa, formula: 'V/(hw·tw)' },
+      elasticLimit_MPa,
+    },
+    formula: 'τ(y) = V·Q(y)/(I·t(y))',
+  };
+}
+
+function familyFigure({ section, stress }: NonNullable<CalculationSheetData['family']>, standard: CheckReportData['parameters']['standard']): SheetFigure {
+  const { from_mm: from, to_mm: to, neutralAxis_mm: na } = section.properties;
+  const xs = outlineAlongShear(section.outline, section.axis).outer.map(([x]) => x);
+  const minX = Math.min(...xs);
+  return {
+    width_mm: Math.max(...xs) - minX,
+    depth_mm: to - from,
+    left_mm: -minX,
+    draw: (doc, frame) => drawFamilySection(doc, section, standard, frame),
+    plot: {
+      depth_mm: to - from,
+      points: stress.samples.map((sample) => ({ y_mm: sample.s_mm - from, tau_MPa: sample.tau_MPa })),
+      tauMax_MPa: stress.tauMax_MPa,
+      tauMaxAt_mm: stress.at_mm - from,
+      jumps: stress.jumps.map((jump) => {
+        const below = jump.level_mm > na;
+        return { level_mm: jump.level_mm - from, webSide_MPa: below ? jump.below_MPa : jump.above_MPa, flangeSide_MPa: below ? jump.above_MPa : jump.below_MPa };
+      }),
+      webAverage: stress.webAverage_MPa === null ? null : { tau_MPa: stress.webAverage_MPa, formula: WEB_AVERAGE_FORMULAS[section.dimensions.family] },
+      elasticLimit_MPa: stress.elasticLimit_MPa,
+    },
+    formula: `τ(s) = V·Q(s)/(I·b(s)), b the total cut width, ${section.axis} axis`,
+  };
+}
+
+function sheetFigureOf(sheet: CalculationSheetData, governing: GoverningCheck, data: CheckReportData): SheetFigure {
+  if (sheet.family) return familyFigure(sheet.family, data.parameters.standard);
+  if (sheet.section) return iSectionFigure(sheet.section, governing, sheet.elasticLimit_MPa);
+  throw new ValidationError(`The calculation sheet for ${sheet.memberLabel} has no section to draw.`, { code: 'report_sheet_invalid' });
+}
+
+function sheetDrawings(doc: Pdf, sheet: CalculationSheetData, governing: GoverningCheck, data: CheckReportData): void {
+  const figure = sheetFigureOf(sheet, governing, data);
   const innerHeight = DRAWING_HEIGHT_PT - DIMENSION_ROOM_PT;
-  const scale = drawingScale(width_mm, props.depth_mm, DRAWING_WIDTH_PT - DIMENSION_ROOM_PT, innerHeight);
+  const scale = drawingScale(figure.width_mm, figure.depth_mm, DRAWING_WIDTH_PT - DIMENSION_ROOM_PT, innerHeight);
   const ptPerMm = PT_PER_MM / scale;
   ensureSpace(doc, DRAWING_HEIGHT_PT + 50);
   const top = doc.y + 28;
-  // Centred vertically in the drawing area.
-  const undersideY = top + (innerHeight + props.depth_mm * ptPerMm) / 2;
-  const frame = { webAxisX_pt: PAGE.margin_pt + DRAWING_WIDTH_PT / 2 + 10, undersideY_pt: undersideY, ptPerMm };
-  drawSection(doc, props, frame);
+  // Centred in the drawing area.
+  const undersideY = top + (innerHeight + figure.depth_mm * ptPerMm) / 2;
+  const frame = { webAxisX_pt: PAGE.margin_pt + 10 + DRAWING_WIDTH_PT / 2 + (figure.left_mm - figure.width_mm / 2) * ptPerMm, undersideY_pt: undersideY, ptPerMm };
+  figure.draw(doc, frame);
   const plotLeft = PAGE.margin_pt + DRAWING_WIDTH_PT + 30;
   const plotWidth = PAGE.margin_pt + CONTENT_WIDTH_PT - plotLeft - LABEL_COLUMN_PT;
-  const legend = drawShearStressPlot(doc, profile, props, frame, { left_pt: plotLeft, width_pt: plotWidth, labelWidth_pt: LABEL_COLUMN_PT }, sheet.elasticLimit_MPa);
+  const legend = drawShearStressPlot(doc, figure.plot, frame, { left_pt: plotLeft, width_pt: plotWidth, labelWidth_pt: LABEL_COLUMN_PT });
 
   let y = top + innerHeight + 30;
   writeText(doc, `Section to scale 1:${formatNumber(scale)} on A4; dimensions in mm.`, 'body', PAGE.margin_pt, y, { size: TEXT_SIZE.tiny, color: COLOURS.muted, width: DRAWING_WIDTH_PT });
   writeText(
     doc,
-    `Elastic shear stress τ(y) = V·Q(y)/(I·t(y)) for the governing VEd = ${kN(governing.VEd_N)} kN, level with the section. ` +
+    `Elastic shear stress ${figure.formula}, for the governing VEd = ${kN(governing.VEd_N)} kN, level with the section. ` +
       'At each flange τ jumps where the width changes: "jump a / b" gives the value just inside the web (or fillet) and just inside the flange.',
     'body',
     plotLeft,
@@ -297,13 +361,13 @@ function calculationSheet(doc: Pdf, sheet: CalculationSheetData, data: CheckRepo
     [{ header: 'Member', weight: 1 }, { header: '', weight: 1.6 }, { header: 'Result', weight: 1 }, { header: '', weight: 1.2 }],
     [
       ['GlobalId', check.globalId, 'Standard', STANDARD_LABELS[data.parameters.standard]],
-      ['Profile', `${sheet.profileName} (${check.fabrication ?? sheet.section.fabrication})`, 'Governing combination', governing.combination],
+      ['Profile', `${sheet.profileName} (${check.fabrication ?? sheet.section?.fabrication ?? '—'})`, 'Governing combination', governing.combination],
       ['Grade', `${check.grade ?? 'given fy'} · fy = ${formatNumber(check.fy_MPa ?? Number.NaN)} MPa`, 'VEd / VRd', `${kN(governing.VEd_N)} / ${kN(governing.VRd_N)} kN`],
       ['Storey', sheet.storey ?? '—', 'Utilisation', { text: `${percentText(governing.utilisation)} · ${status.label}`, fill: status.fill }],
     ],
   );
   if (sheet.sectionNote) paragraph(doc, sheet.sectionNote, { size: TEXT_SIZE.small });
-  sheetDrawings(doc, sheet, governing);
+  sheetDrawings(doc, sheet, governing, data);
   if (check.flags.length > 0) paragraph(doc, check.flags.map((flag) => `• ${flagText(flag)}`).join('\n'), { size: TEXT_SIZE.small });
 
   heading(doc, 'Clause by clause (governing combination)');

@@ -2,12 +2,15 @@
  * Section drawing to scale beside τ(y) over the depth, sharing one vertical scale so each stress sits level with
  * the part of the section that carries it. Drawn with pdfkit vector paths.
  */
+import type { FamilySheetSection } from '../checks/checks-api-types';
+import type { Standard } from '../engine/check';
 import { flangeGeometry } from '../engine/section';
 import type { SectionProperties } from '../engine/section-properties';
-import type { ShearStressProfile } from '../engine/shear-stress';
+import { outlineAlongShear } from '../engine/shear-axis';
 import { type Pdf, textWidth, writeText } from './pdf-text';
 import { formatNumber } from './report-format';
 import { COLOURS, TEXT_SIZE } from './report-layout';
+import { sectionDimensionMarks } from './section-dimension-marks';
 import { niceTicks, sectionOutline_mm } from './section-outline';
 
 /** Where y = 0 (the underside) and the web axis land on the page, and how many points one millimetre takes. */
@@ -114,6 +117,51 @@ export function drawSection(doc: Pdf, props: SectionProperties, frame: SheetFram
   doc.moveTo(frame.webAxisX_pt, topY - 4).lineTo(frame.webAxisX_pt, baseY + 4).lineWidth(0.3).dash(6, { space: 2 }).strokeColor(COLOURS.muted).stroke().undash();
 }
 
+/**
+ * A section of another family from its outline (voids left open by the even-odd rule), turned a quarter for the
+ * minor axis as its τ(s) is, with its main dimensions in the run's notation. x = 0 is the bounding box's centre.
+ */
+export function drawFamilySection(doc: Pdf, section: FamilySheetSection, standard: Standard, frame: SheetFrame): void {
+  const from = section.properties.from_mm;
+  const at = ([x, s]: readonly [number, number]): [number, number] => [pageX(frame, x), pageY(frame, s - from)];
+  const polygon = outlineAlongShear(section.outline, section.axis);
+  for (const loop of [polygon.outer, ...polygon.voids]) {
+    loop.forEach((point, i) => {
+      const [x, y] = at(point);
+      if (i === 0) doc.moveTo(x, y);
+      else doc.lineTo(x, y);
+    });
+    doc.closePath();
+  }
+  doc.lineWidth(0.9).fillAndStroke(COLOURS.patinaLight, COLOURS.patina, 'even-odd');
+
+  for (const mark of sectionDimensionMarks(section.dimensions, standard, section.axis)) {
+    const [x1, y1] = at(mark.from);
+    const [x2, y2] = at(mark.to);
+    if (mark.kind === 'thickness') {
+      // Arrows on the plate's faces, pointing in, and a leader on past `to` to the label.
+      const angle = Math.atan2(y2 - y1, x2 - x1);
+      const [ex, ey] = [x2 + 12 * Math.cos(angle), y2 + 12 * Math.sin(angle)];
+      doc.moveTo(x1 - 10 * Math.cos(angle), y1 - 10 * Math.sin(angle)).lineTo(ex, ey).lineWidth(0.4).strokeColor(COLOURS.ink).stroke();
+      arrowHead(doc, x1, y1, angle);
+      arrowHead(doc, x2, y2, angle + Math.PI);
+      const right = ex >= x2;
+      const width = textWidth(doc, mark.label, 'mono', DIM_SIZE);
+      writeText(doc, mark.label, 'mono', right ? ex + 2 : ex - width - 2, ey - DIM_SIZE / 2, { size: DIM_SIZE, color: COLOURS.ink, lineBreak: false });
+      continue;
+    }
+    const sign = mark.side === 'left' || mark.side === 'top' ? -1 : 1;
+    const vertical = mark.side === 'left' || mark.side === 'right';
+    const offset = 14 * sign;
+    const a: [number, number] = vertical ? [x1 + offset, y1] : [x1, y1 + offset];
+    const b: [number, number] = vertical ? [x2 + offset, y2] : [x2, y2 + offset];
+    extensionLine(doc, [x1 + (vertical ? 2 * sign : 0), y1 + (vertical ? 0 : 2 * sign)], [a[0] + (vertical ? 3 * sign : 0), a[1] + (vertical ? 0 : 3 * sign)]);
+    extensionLine(doc, [x2 + (vertical ? 2 * sign : 0), y2 + (vertical ? 0 : 2 * sign)], [b[0] + (vertical ? 3 * sign : 0), b[1] + (vertical ? 0 : 3 * sign)]);
+    const labelAt = vertical ? (sign < 0 ? 'left' : 'right') : 'above';
+    dimension(doc, a, b, mark.label, labelAt);
+  }
+}
+
 export interface PlotBox {
   left_pt: number;
   width_pt: number;
@@ -141,20 +189,27 @@ export interface PlotLegendEntry {
   text: string;
 }
 
+/** τ over the depth as the plot draws it, levels measured up from the underside of the section. */
+export interface StressPlotData {
+  depth_mm: number;
+  /** Ascending; both sides of each jump at one level. */
+  points: readonly { y_mm: number; tau_MPa: number }[];
+  tauMax_MPa: number;
+  tauMaxAt_mm: number;
+  /** Each width jump: τ on the side nearer the neutral axis (the web or wall) and beyond it (the flange). */
+  jumps: readonly { level_mm: number; webSide_MPa: number; flangeSide_MPa: number }[];
+  /** The web average and its formula; null where the run reports none. */
+  webAverage: { tau_MPa: number; formula: string } | null;
+  elasticLimit_MPa?: number;
+}
+
 /**
- * τ(y) from the engine's samples: filled area, the peak at the neutral axis, the jump at each web–flange junction,
- * the web average V/(hw·tw) (a rule of thumb, not the code check) and, for EN, the elastic limit of (6.19).
+ * τ from the engine's samples: filled area, the peak at the neutral axis, the jump at each width change, the web
+ * average (a rule of thumb, not the code check) and, for EN, the elastic limit of (6.19).
  * Returns the legend of the dashed lines for the caller to print.
  */
-export function drawShearStressPlot(
-  doc: Pdf,
-  profile: ShearStressProfile,
-  props: SectionProperties,
-  frame: SheetFrame,
-  box: PlotBox,
-  elasticLimit_MPa?: number,
-): PlotLegendEntry[] {
-  const d = props.depth_mm;
+export function drawShearStressPlot(doc: Pdf, profile: StressPlotData, frame: SheetFrame, box: PlotBox): PlotLegendEntry[] {
+  const { depth_mm: d, elasticLimit_MPa } = profile;
   const topY = pageY(frame, d);
   const baseY = pageY(frame, 0);
   const largest = Math.max(profile.tauMax_MPa, elasticLimit_MPa ?? 0);
@@ -186,14 +241,16 @@ export function drawShearStressPlot(
   levelLabel(doc, box, peak, `τmax ${formatNumber(profile.tauMax_MPa)}`);
 
   // The jump at each junction: stress just inside the web (or fillet) and just inside the flange.
-  for (const junction of [profile.topJunction, profile.bottomJunction]) {
+  for (const junction of profile.jumps) {
     const point = plotPoint(frame, box, scale, junction.webSide_MPa, junction.level_mm);
     levelLabel(doc, box, point, `jump ${formatNumber(junction.webSide_MPa)} / ${formatNumber(junction.flangeSide_MPa)}`);
   }
 
   const legend: PlotLegendEntry[] = [];
-  dashedVertical(doc, box.left_pt + profile.webAverageClear_MPa * scale, topY, baseY, COLOURS.copper);
-  legend.push({ colour: COLOURS.copper, text: `V/(hw·tw) = ${formatNumber(profile.webAverageClear_MPa)} MPa: web average, a rule of thumb, never the code check` });
+  if (profile.webAverage) {
+    dashedVertical(doc, box.left_pt + profile.webAverage.tau_MPa * scale, topY, baseY, COLOURS.copper);
+    legend.push({ colour: COLOURS.copper, text: `${profile.webAverage.formula} = ${formatNumber(profile.webAverage.tau_MPa)} MPa: web average, a rule of thumb, never the code check` });
+  }
   if (elasticLimit_MPa !== undefined) {
     dashedVertical(doc, box.left_pt + elasticLimit_MPa * scale, topY, baseY, COLOURS.fail);
     legend.push({ colour: COLOURS.fail, text: `fy/(√3·γM0) = ${formatNumber(elasticLimit_MPa)} MPa: limit of the elastic check (6.19)` });
