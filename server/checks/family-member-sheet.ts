@@ -31,9 +31,10 @@ export interface FamilyEvaluation {
 /**
  * A member of another family against one shear on one axis as a run checks it (check-run-compute.ts
  * checkFamilyMember: the run's fabrication for the profile, the member's grade or the run's default, a project
- * resistance factor): the governing trace the sheet shows. Null when the axis has no rule for this section.
+ * resistance factor, the moment at the station for shear with bending): the governing trace the sheet shows. Null
+ * when the axis has no rule for this section.
  */
-export function evaluateFamilyMember(member: MemberRecord, parameters: CheckParameters, axis: ShearAxis, shear_N: number): FamilyEvaluation | null {
+export function evaluateFamilyMember(member: MemberRecord, parameters: CheckParameters, axis: ShearAxis, shear_N: number, moment_Nmm?: number): FamilyEvaluation | null {
   const profile = member.profile;
   if (!profile || isIProfile(profile) || member.status === 'not-applicable') return null;
   const overrides = new Map(Object.entries(parameters.fabricationOverrides).map(([name, fabrication]) => [sectionKey(name), fabrication]));
@@ -47,7 +48,7 @@ export function evaluateFamilyMember(member: MemberRecord, parameters: CheckPara
   const capacity = withProjectResistanceFactor(base, parameters);
   const contextFlags: FamilyCheckFlag[] = assumed ? ['assumed-grade'] : [];
   if (profile.source === 'catalogue' || profile.source === 'project-catalogue') contextFlags.push('catalogue-section');
-  const result = evaluateFamilyCheck({ ...prepared, [axis]: capacity }, axis, { shear_N }, contextFlags);
+  const result = evaluateFamilyCheck({ ...prepared, [axis]: capacity }, axis, { shear_N, ...(moment_Nmm !== undefined && { moment_Nmm }) }, contextFlags);
   return { dimensions, grade, capacity, result };
 }
 

@@ -80,7 +80,7 @@ export function buildMemberSheet(input: SheetInput): MemberSheet {
     combinations: combinationsOf(check),
   };
   if (member.profile && !isIProfile(member.profile)) {
-    const family = evaluateFamilyMember(member, parameters, governing.axis ?? 'major', governing.VEd_N);
+    const family = evaluateFamilyMember(member, parameters, governing.axis ?? 'major', governing.VEd_N, governing.MEd_Nmm);
     if (!family) return base;
     return {
       ...base,
