@@ -14,9 +14,11 @@ import * as path from 'node:path';
 import { type CheckParameters, checkParametersSchema } from '../checks/check-parameters';
 import { type CheckRunComputation, computeCheckRun, type MemberCheck } from '../checks/check-run-compute';
 import { engineVersion } from '../checks/engine-version';
+import { governingCheckText } from '../checks/governing-check-text';
 import { resultStatusOf } from '../checks/member-result-row';
 import { STANDARDS, type Standard } from '../engine/check';
 import { type EnYieldRule, GRADE_IDS, type GradeId, isGradeId } from '../engine/grades';
+import type { FamilyCheckName, ShearAxis } from '../engine/shear-axis';
 import { FORCE_UNITS, type ForceUnit, LENGTH_UNITS, type LengthUnit } from '../engine/units';
 import { exportBcf } from '../findings/bcf/bcf-export';
 import { nameBasedUuid } from '../findings/bcf/bcf-guid';
@@ -53,9 +55,11 @@ const USAGE = `usage: taulens check <model.ifc | model.ifczip> --forces <forces.
                      [--member-key ${MEMBER_KEY_KINDS.join('|')}] [--default-grade ${GRADE_IDS.join('|')}]
                      [--yield-rule ${YIELD_RULES.join('|')}]
 
-Checks the web of every I-section beam, column and member of the model for the shear forces of an analysis export:
-the elastic shear stress τ = VQ/(It) and the capacity by AISC 360-22 §G2.1 (LRFD or ASD) or EN 1993-1-1 §6.2.6
-with EN 1993-1-5 §5, with the code's recommended factors.
+Checks every steel section of the model (I, channel, tee, box, tube; angles by AISC G3) for the forces of an
+analysis export: the major-axis shear (Vz) with the My at its station, the minor-axis shear (Vy) with the Mz at its
+station, and shear with bending (EN 1993-1-1 §6.2.8 / EN 1993-1-5 §7.1; by AISC 360-22 shear and flexure side by
+side), with the elastic shear stress τ = VQ/(It) reported beside, by AISC 360-22 chapter G (LRFD or ASD) or
+EN 1993-1-1 §6.2.6 with EN 1993-1-5 §5, with the code's recommended factors.
 
 The forces file is CSV (any delimiter) or XLSX. Its header names the columns; the default format is
   member,combination,shear          (optionally station)
@@ -78,8 +82,10 @@ Each member takes, per combination, the largest |shear| over its stations.
   --default-grade   grade for members whose material names none (default S355 for EN, A992 for AISC)
   --yield-rule      EN yield strength by thickness: EN 10025-2 bands (default) or EN 1993-1-1 Table 3.1
 
-Per member, status is 'pass', 'fail', 'not-checked' (no forces, or no usable section) or 'not-applicable' (not an
-I-section); governing gives the combination with the highest utilisation and the station (m) of its shear.
+Per member, status is 'pass', 'fail', 'not-checked' (no forces, or no usable section) or 'not-applicable' (no shear
+rule for its section); profile.family names the section's family; governing gives the axis and check with the highest
+utilisation, its combination and the station (m) of its shear; checks lists the governing result of each axis and
+check the forces allowed (a member without Vy is checked for what it has; reason says what was left out).
 Exit status: 0 every checked member passes, 1 any member fails, 2 bad input (the message is on stderr).`;
 
 interface CheckArguments {
@@ -157,10 +163,29 @@ async function readMembers(options: CheckArguments, parameters: CheckParameters,
   return { model, members };
 }
 
+/** One check's governing values as --json prints them: forces in kN and kNm, stations in m. */
+interface PrintedCheck {
+  axis: ShearAxis;
+  check: FamilyCheckName;
+  combination: string;
+  station_m: number | null;
+  VEd_kN: number;
+  /** The moment at the shear's station, for 'shear with bending'; null otherwise. */
+  MEd_kNm: number | null;
+  VRd_kN: number;
+  utilisation: number;
+}
+
 interface CheckedMember extends Omit<ListedMember, 'status'> {
   status: MemberCheck['status'];
-  governing: { combination: string; station_m: number | null; VEd_kN: number; VRd_kN: number; utilisation: number; tauMax_MPa: number; tauAvgWeb_MPa: number } | null;
+  governing:
+    | (PrintedCheck & { tauMax_MPa: number; tauAvgWeb_MPa: number })
+    | null;
+  /** The governing result per axis and check the member was checked for. */
+  checks: PrintedCheck[];
 }
+
+const metres = (station_mm: number | undefined): number | null => (station_mm === undefined ? null : station_mm / 1000);
 
 function checkedMember(record: MemberRecord, check: MemberCheck): CheckedMember {
   const listed = listedMember(record);
@@ -172,14 +197,27 @@ function checkedMember(record: MemberRecord, check: MemberCheck): CheckedMember 
     ...(reason ? { reason } : {}),
     flags: [...new Set([...listed.flags, ...check.flags])],
     governing: governing && {
+      axis: governing.axis ?? 'major',
+      check: governing.check ?? 'major-axis shear',
       combination: governing.combination,
-      station_m: governing.station_mm === undefined ? null : governing.station_mm / 1000,
+      station_m: metres(governing.station_mm),
       VEd_kN: governing.VEd_N / 1000,
+      MEd_kNm: governing.check === 'shear with bending' && governing.MEd_Nmm !== undefined ? governing.MEd_Nmm / 1e6 : null,
       VRd_kN: governing.VRd_N / 1000,
       utilisation: governing.utilisation,
       tauMax_MPa: governing.tauMax_MPa,
       tauAvgWeb_MPa: governing.tauAvgWeb_MPa,
     },
+    checks: (check.checks ?? []).map((c) => ({
+      axis: c.axis,
+      check: c.check,
+      combination: c.combination,
+      station_m: metres(c.station_mm),
+      VEd_kN: c.VEd_N / 1000,
+      MEd_kNm: c.MEd_Nmm === null ? null : c.MEd_Nmm / 1e6,
+      VRd_kN: c.VRd_N / 1000,
+      utilisation: c.utilisation,
+    })),
   };
 }
 
@@ -200,6 +238,7 @@ function failureFindings(records: readonly MemberRecord[], run: CheckRunComputat
     VEd_kN: check.governing ? check.governing.VEd_N / 1000 : null,
     VRd_kN: check.governing ? check.governing.VRd_N / 1000 : null,
     governingCombination: check.governing?.combination ?? null,
+    governingCheck: governingCheckText(check.governing?.axis ?? 'major', check.governing?.check ?? 'major-axis shear'),
     flags: check.flags,
   }));
   const byGlobalId = new Map(results.map((result) => [result.globalId, result]));
@@ -214,12 +253,12 @@ function failureFindings(records: readonly MemberRecord[], run: CheckRunComputat
         kind: 'failure',
         title: draft.title,
         description:
-          `${percentText(result.utilisation!)} utilisation under ${result.governingCombination} ` +
+          `${percentText(result.utilisation!)} utilisation in ${result.governingCheck} under ${result.governingCombination} ` +
           `(VEd ${Math.abs(result.VEd_kN!).toFixed(1)} kN, VRd ${result.VRd_kN!.toFixed(1)} kN) by ${STANDARD_LABELS[context.standard]}, ` +
           `forces from ${path.basename(context.forcesFile)}. ${REPORT_CAUTIONS_TEXT}`,
         status: 'open',
         priority: draft.priority,
-        labels: ['web shear'],
+        labels: ['web shear', result.governingCheck!],
         createdAt,
         createdBy: 'taulens-check@localhost',
         comments: [],
@@ -246,8 +285,8 @@ function warnAboutMatching(report: MatchReport, model: ModelInfo, io: CommandIo)
 }
 
 function table(model: ModelInfo, standard: Standard, members: readonly CheckedMember[], run: CheckRunComputation): string {
-  const header = ['GlobalId'.padEnd(22), 'Tag'.padEnd(10), 'Profile'.padEnd(16), 'Status'.padEnd(14), 'Combination'.padEnd(14), 'At m'.padStart(7), 'VEd kN'.padStart(9), 'VRd kN'.padStart(9), 'Util.'.padStart(8)];
-  const lines = [`${model.fileName}: web shear by ${STANDARD_LABELS[standard]}`, '', header.join('  '), header.map((h) => '-'.repeat(h.length)).join('  ')];
+  const header = ['GlobalId'.padEnd(22), 'Tag'.padEnd(10), 'Profile'.padEnd(16), 'Status'.padEnd(14), 'Combination'.padEnd(14), 'Check'.padEnd(32), 'At m'.padStart(7), 'VEd kN'.padStart(9), 'VRd kN'.padStart(9), 'Util.'.padStart(8)];
+  const lines = [`${model.fileName}: shear on both axes and shear with bending by ${STANDARD_LABELS[standard]}`, '', header.join('  '), header.map((h) => '-'.repeat(h.length)).join('  ')];
   for (const member of members) {
     const g = member.governing;
     lines.push(
@@ -257,6 +296,7 @@ function table(model: ModelInfo, standard: Standard, members: readonly CheckedMe
         (member.profile?.name ?? '').slice(0, 16).padEnd(16),
         member.status.padEnd(14),
         (g?.combination ?? '').slice(0, 14).padEnd(14),
+        (g ? governingCheckText(g.axis, g.check)! : '').padEnd(32),
         (g?.station_m != null ? g.station_m.toFixed(2) : '').padStart(7),
         (g ? Math.abs(g.VEd_kN).toFixed(1) : '').padStart(9),
         (g ? g.VRd_kN.toFixed(1) : '').padStart(9),
