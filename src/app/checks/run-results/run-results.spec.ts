@@ -40,13 +40,13 @@ describe('RunResults', () => {
     const cells = [...table.querySelectorAll('tbody tr td')].map((td) => td.textContent!.replace(/\s+/g, ' ').trim());
     expect(table.querySelector('a.member-link')!.textContent).toBe('G-101');
     expect(table.querySelector('td .sub')!.textContent).toBe('Girder G-101');
-    expect(cells.slice(1, 7)).toEqual(['Level 2', 'IPE 300', 'S355', 'ULS-2', '405.2', '360.5']);
+    expect(cells.slice(1, 8)).toEqual(['Level 2', 'IPE 300', 'S355', 'ULS-2', 'major-axis shear', '405.2', '360.5']);
     // Percentages round up, as in reports: 1.1241 → 112.5 %.
-    expect(cells[7]).toBe('112.5 %');
+    expect(cells[8]).toBe('112.5 %');
     const bar = table.querySelector<HTMLElement>('tl-utilisation-bar .bar')!;
     expect(bar.style.width).toBe('100%');
     expect(rgbHexToCss(Number.parseInt(hexOf(bar.style.backgroundColor), 16))).toBe(rgbHexToCss(utilisationColour(1.1241)));
-    expect(cells[9]).toBe('grade assumed');
+    expect(cells[10]).toBe('grade assumed');
     const link = table.querySelector<HTMLAnchorElement>('a[aria-label="Show G-101 in 3D"]')!;
     expect(link.getAttribute('href')).toBe(`/projects/${TEST_PROJECT_ID}/3d-view?run=run-1&member=2O2Fr$t4X7Zf8NOew3FLOH`);
     expect(table.querySelector<HTMLAnchorElement>('a.member-link')!.getAttribute('href')).toBe(
