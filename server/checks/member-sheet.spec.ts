@@ -143,3 +143,18 @@ describe('buildMemberSheet for sections of other families', () => {
     expectClose(sheet.familyStress!.tauMax_MPa, (1.5 * (V_N / 2)) / (h * tw), 0.02, 'τmax ≈ 1.5·V/A per web');
   });
 });
+
+describe('buildMemberSheet for an I-section governed by another check', () => {
+  it('shows the recorded result and says its trace is not drawn, rather than a major-axis trace that does not govern', () => {
+    const parameters = recommendedParameters('en1993-1-1');
+    // An invented welded girder, 600 deep, with a large minor-axis shear (Vy) and a small Vz: the minor axis governs.
+    const record: MemberRecord = { ...member({ ...at(600), name: 'G', source: 'ifc-profile', ifcType: 'IfcIShapeProfileDef', fabrication: 'welded' }), material: { name: 'S355', grade: 'S355', fy_MPa: 355, assumed: false } };
+    const base = computeCheckRun({ members: [record], shears: new Map([[record.globalId, [{ combination: 'ULS-1', shear_N: 10_000, row: 2, memberKey: 'G' }]]]), parameters }).members[0];
+    const check = { ...base, governing: { ...base.governing!, axis: 'minor' as const, check: 'minor-axis shear' as const } };
+    const sheet = buildMemberSheet({ member: record, check, standard: 'en1993-1-1', parameters, runEngineVersion: 'e1', currentEngineVersion: 'e1' });
+    expect(sheet.trace).toEqual([]);
+    expect(sheet.section).toBeNull();
+    expect(sheet.governing).not.toBeNull();
+    expect(sheet.sectionNote).toContain('its clause trace is not drawn on this sheet');
+  });
+});

@@ -21,6 +21,7 @@ import type { CheckParameters } from './check-parameters';
 import { engineParamsOf, evaluateMember, type MemberCheck } from './check-run-compute';
 import type { MemberSheet } from './checks-api-types';
 import { evaluateFamilyMember, familySectionOf, familyStressOf } from './family-member-sheet';
+import { governingCheckText } from './governing-check-text';
 import { resultStatusOf } from './member-result-row';
 
 export interface SheetInput {
@@ -90,6 +91,11 @@ export function buildMemberSheet(input: SheetInput): MemberSheet {
       familyStress: familyStressOf(family, governing.VEd_N),
       trace: family.result.trace,
     };
+  }
+  if (governing.check !== undefined && governing.check !== 'major-axis shear') {
+    // The I-section sheet draws the major-axis web check; a member governed by its minor axis or by shear with bending
+    // shows the run's recorded result and says so, rather than a trace of a check that does not govern.
+    return { ...base, ...recorded, sectionNote: `${base.sectionNote ?? ''} Governed by ${governingCheckText(governing.axis, governing.check)}: the recorded result is shown; its clause trace is not drawn on this sheet.`.trim() };
   }
   const evaluation = evaluateMember(member, parameters, governing.VEd_N);
   if (!evaluation) return base;
