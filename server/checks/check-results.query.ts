@@ -42,7 +42,21 @@ export async function finishedRun(dataSource: DataSource, projectId: string, run
 export async function listRunMemberResults(dataSource: DataSource, runId: string): Promise<RunMemberResult[]> {
   return dataSource.getRepository(CheckMemberResult).find({
     where: { runId },
-    select: { globalId: true, tag: true, name: true, storey: true, profileName: true, status: true, utilisation: true, VEd_kN: true, VRd_kN: true, governingCombination: true, flags: true },
+    select: {
+      globalId: true,
+      tag: true,
+      name: true,
+      storey: true,
+      profileName: true,
+      status: true,
+      utilisation: true,
+      VEd_kN: true,
+      VRd_kN: true,
+      governingCombination: true,
+      governingAxis: true,
+      governingCheck: true,
+      flags: true,
+    },
     order: { ordinal: 'ASC' },
   });
 }

@@ -153,3 +153,15 @@ describe('planRunSync', () => {
     expect(update.status).toEqual({ from: 'open', to: 'ready-to-verify' });
   });
 });
+
+describe('planRunSync: the governing check in words', () => {
+  it('names a governing check other than the plain major-axis web shear in the description', () => {
+    const minor: RunMemberResult = { ...row(B12, 'fail', 1.5), governingAxis: 'minor', governingCheck: 'shear with bending' };
+    const [draft] = planRunSync({ ...run(3), standardLabel: 'EN 1993-1-1' }, [minor], []).create;
+    expect(draft.description).toBe('150 % utilisation under ULS-3 (shear with bending, minor axis) (VEd 225 kN, VRd 150 kN) in the EN 1993-1-1 check of model revision 3.');
+    const major: RunMemberResult = { ...row(B12, 'fail', 1.5), governingAxis: 'major', governingCheck: 'major-axis shear' };
+    expect(planRunSync({ ...run(3), standardLabel: 'EN 1993-1-1' }, [major], []).create[0].description).toBe(
+      '150 % utilisation under ULS-3 (VEd 225 kN, VRd 150 kN) in the EN 1993-1-1 check of model revision 3.',
+    );
+  });
+});

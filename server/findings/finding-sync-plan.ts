@@ -19,6 +19,8 @@
  *   and so does any run of a revision older than the one a finding was last seen in.
  * Changes made here are recorded in the history as made by the system.
  */
+import { governingCheckText } from '../checks/governing-check-text';
+import type { FamilyCheckName, ShearAxis } from '../engine/shear-axis';
 import { percentRoundedUp } from '../reports/report-format';
 import { FINDING_PRIORITIES, type FindingPriority, type FindingStatus, type GeneratedKind } from './finding-fields';
 
@@ -34,6 +36,9 @@ export interface RunMemberResult {
   VEd_kN: number | null;
   VRd_kN: number | null;
   governingCombination: string | null;
+  /** The axis and check that govern (absent in runs made before both axes were checked; the CLI gives the check's text). */
+  governingAxis?: ShearAxis | null;
+  governingCheck?: string | null;
   flags: readonly string[];
 }
 
@@ -164,7 +169,9 @@ function descriptionFor(kind: GeneratedKind, result: RunMemberResult, run: SyncR
     return flags.length > 0 ? `${checkOf(run)} flagged: ${flags.join(', ')}.` : `${checkOf(run)} flagged nothing to review.`;
   }
   const utilisationText = result.utilisation === null ? 'Utilisation not known' : `${percentRoundedUp(result.utilisation)} % utilisation`;
-  const forces = `under ${result.governingCombination ?? 'the governing combination'} (VEd ${kN(result.VEd_kN)}, VRd ${kN(result.VRd_kN)})`;
+  // The plain web check keeps its short wording; another governing check (minor axis, shear with bending) is named.
+  const check = result.governingCheck && result.governingCheck !== 'major-axis shear' ? ` (${governingCheckText(result.governingAxis, result.governingCheck as FamilyCheckName)})` : '';
+  const forces = `under ${result.governingCombination ?? 'the governing combination'}${check} (VEd ${kN(result.VEd_kN)}, VRd ${kN(result.VRd_kN)})`;
   const warning = kind === 'web-shear-warning' && result.status === 'warning' ? ", at or above the run's warning ratio" : '';
   const cleared = conditionCleared(kind, result) ? ` ${kind === 'web-shear-fail' ? 'Within capacity' : 'Below the warning ratio'} in this run.` : '';
   return `${utilisationText} ${forces} in ${checkOf(run)}${warning}.${cleared}`;
