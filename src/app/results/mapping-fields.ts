@@ -4,6 +4,7 @@
  * without a page.
  */
 import type { ForceUnit, LengthUnit } from '../../../server/engine/units';
+import type { MomentUnit } from '../../../server/results/unit-words';
 import type { ColumnMapping, MemberKeyKind } from './results-api';
 
 export const END_COLUMN_KEYS = ['x1', 'y1', 'z1', 'x2', 'y2', 'z2'] as const satisfies readonly (keyof NonNullable<ColumnMapping['endColumns']>)[];
@@ -15,8 +16,13 @@ export interface MappingFields {
   combinationColumn: string;
   stationColumn: string;
   shearColumn: string;
+  /** Optional: shear across the flanges (Vy) and the moments about the major (My) and minor (Mz) axes. */
+  minorShearColumn: string;
+  majorMomentColumn: string;
+  minorMomentColumn: string;
   forceUnit: ForceUnit | '';
   lengthUnit: LengthUnit | '';
+  momentUnit: MomentUnit | '';
   useEnds: boolean;
   ends: Record<EndColumnKey, string>;
 }
@@ -44,8 +50,12 @@ export function mappingFieldsFrom(mapping: Partial<ColumnMapping>, headers: read
     combinationColumn: known(mapping.combinationColumn),
     stationColumn: known(mapping.stationColumn),
     shearColumn: known(mapping.shearColumn),
+    minorShearColumn: known(mapping.minorShearColumn),
+    majorMomentColumn: known(mapping.majorMomentColumn),
+    minorMomentColumn: known(mapping.minorMomentColumn),
     forceUnit: mapping.forceUnit ?? '',
     lengthUnit: mapping.lengthUnit ?? '',
+    momentUnit: mapping.momentUnit ?? '',
     useEnds: END_COLUMN_KEYS.every((key) => ends[key] !== ''),
     ends,
   };
@@ -64,6 +74,7 @@ export function mappingProblems(fields: MappingFields): string[] {
   if ((fields.stationColumn || fields.useEnds) && !fields.lengthUnit) {
     problems.push('Choose the length unit of the station and coordinate columns.');
   }
+  if (hasMoments(fields) && !fields.momentUnit) problems.push('Choose the unit of the moment columns.');
   const seen = new Set<string>();
   for (const column of usedColumns(fields)) {
     if (seen.has(column)) problems.push(`Column "${column}" is chosen twice.`);
@@ -74,7 +85,20 @@ export function mappingProblems(fields: MappingFields): string[] {
 
 function usedColumns(fields: MappingFields): string[] {
   const ends = fields.useEnds ? END_COLUMN_KEYS.map((key) => fields.ends[key]) : [];
-  return [fields.memberColumn, fields.combinationColumn, fields.stationColumn, fields.shearColumn, ...ends].filter(Boolean);
+  return [
+    fields.memberColumn,
+    fields.combinationColumn,
+    fields.stationColumn,
+    fields.shearColumn,
+    fields.minorShearColumn,
+    fields.majorMomentColumn,
+    fields.minorMomentColumn,
+    ...ends,
+  ].filter(Boolean);
+}
+
+function hasMoments(fields: MappingFields): boolean {
+  return fields.majorMomentColumn !== '' || fields.minorMomentColumn !== '';
 }
 
 /** The mapping to send; call only when `mappingProblems` is empty. Unmapped optional columns are left out. */
@@ -87,6 +111,10 @@ export function columnMappingOf(fields: MappingFields): ColumnMapping {
     shearColumn: fields.shearColumn,
     forceUnit: fields.forceUnit as ForceUnit,
     ...(fields.stationColumn && { stationColumn: fields.stationColumn }),
+    ...(fields.minorShearColumn && { minorShearColumn: fields.minorShearColumn }),
+    ...(fields.majorMomentColumn && { majorMomentColumn: fields.majorMomentColumn }),
+    ...(fields.minorMomentColumn && { minorMomentColumn: fields.minorMomentColumn }),
+    ...(hasMoments(fields) && fields.momentUnit && { momentUnit: fields.momentUnit }),
     ...(fields.useEnds && { endColumns: { ...fields.ends } }),
     ...(needsLength && fields.lengthUnit && { lengthUnit: fields.lengthUnit }),
   };

@@ -1,5 +1,6 @@
 import { HttpTestingController } from '@angular/common/http/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
+import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import { TestBed } from '@angular/core/testing';
 import { Router } from '@angular/router';
@@ -99,6 +100,60 @@ describe('ResultsImport', () => {
     // The matching report of the new set opens.
     expect(TestBed.inject(Router).url).toBe(`/projects/${TEST_PROJECT_ID}/shear-results/set-1`);
     (await nextRequest(backend, `${api}/results/set-1`)).flush({ error: { code: 'not_found', message: 'Gone.' } }, { status: 404, statusText: 'Not Found' });
+  });
+
+  it('fills the minor-axis shear and moment columns from the detected mapping and sends them', async () => {
+    // Invented export with the shear across the flanges and both moments.
+    const forcesUpload: ResultsUpload = {
+      ...csvUpload,
+      headers: ['Bar', 'Combo', 'Vz [kN]', 'Vy [kN]', 'My [kNm]', 'Mz [kNm]'],
+      rows: [['G-101', 'ULS-1', '212.5', '8.4', '95.0', '3.1']],
+      guessedMapping: {
+        memberColumn: 'Bar',
+        combinationColumn: 'Combo',
+        shearColumn: 'Vz [kN]',
+        minorShearColumn: 'Vy [kN]',
+        majorMomentColumn: 'My [kNm]',
+        minorMomentColumn: 'Mz [kNm]',
+        forceUnit: 'kN',
+        momentUnit: 'kNm',
+        memberKeyKind: 'auto',
+      },
+    };
+    await chooseFile('canopy-forces.csv', forcesUpload);
+    await next('Next: columns');
+
+    const headerCells = [...page.querySelectorAll('.preview-table th')].map((th) => th.textContent!.replace(/\s+/g, ' ').trim());
+    expect(headerCells).toEqual(['member Bar', 'combination Combo', 'shear Vz [kN]', 'Vy Vy [kN]', 'My My [kNm]', 'Mz Mz [kNm]']);
+    const loader = TestbedHarnessEnvironment.loader(harness.fixture);
+    const selected = async (label: string) =>
+      (await (await loader.getHarness(MatFormFieldHarness.with({ floatingLabelText: label }))).getControl(MatSelectHarness))!.getValueText();
+    expect(await selected('Shear across the flanges, Vy (optional)')).toBe('Vy [kN]');
+    expect(await selected('Moment about the major axis, My (optional)')).toBe('My [kNm]');
+    expect(await selected('Moment about the minor axis, Mz (optional)')).toBe('Mz [kNm]');
+    expect(await selected('Moment unit')).toBe('kNm');
+    expect(page.querySelector('.problems')).toBeNull();
+
+    await next('Next: revision and name');
+    button('Import').click();
+    const post = await nextRequest(backend, { method: 'POST', url: `${api}/results` });
+    expect((post.request.body as { mapping: unknown }).mapping).toEqual(forcesUpload.guessedMapping);
+    post.flush({ resultSet: { id: 'set-2' } as ResultSet }, { status: 201, statusText: 'Created' });
+    await settle();
+    (await nextRequest(backend, `${api}/results/set-2`)).flush({ error: { code: 'not_found', message: 'Gone.' } }, { status: 404, statusText: 'Not Found' });
+  });
+
+  it('asks for the moment unit when a moment column is mapped without one', async () => {
+    await chooseFile('canopy-forces.csv', {
+      ...csvUpload,
+      headers: ['Bar', 'Combo', 'V [kN]', 'My'],
+      guessedMapping: { memberColumn: 'Bar', combinationColumn: 'Combo', shearColumn: 'V [kN]', majorMomentColumn: 'My', forceUnit: 'kN' },
+      missingMapping: ['momentUnit'],
+    });
+    await next('Next: columns');
+    const problems = [...page.querySelectorAll('.problems li')].map((li) => li.textContent!.trim());
+    expect(problems).toEqual(['Choose the unit of the moment columns.']);
+    expect(button('Next: revision and name').disabled).toBe(true);
   });
 
   it('asks which sheet of a workbook holds the shear forces before going on', async () => {

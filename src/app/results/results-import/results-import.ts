@@ -13,6 +13,7 @@ import { MatStepperModule } from '@angular/material/stepper';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { map, Observable, startWith } from 'rxjs';
 import { FORCE_UNITS, type ForceUnit, LENGTH_UNITS, type LengthUnit } from '../../../../server/engine/units';
+import { MOMENT_UNITS, type MomentUnit } from '../../../../server/results/unit-words';
 import { ApiError, errorMessage } from '../../core/api-error';
 import { ProjectContext } from '../../projects/project-context';
 import {
@@ -46,8 +47,12 @@ function createMappingForm() {
       combinationColumn: column(),
       stationColumn: column(),
       shearColumn: column(),
+      minorShearColumn: column(),
+      majorMomentColumn: column(),
+      minorMomentColumn: column(),
       forceUnit: new FormControl<ForceUnit | ''>('', { nonNullable: true }),
       lengthUnit: new FormControl<LengthUnit | ''>('', { nonNullable: true }),
+      momentUnit: new FormControl<MomentUnit | ''>('', { nonNullable: true }),
       useEnds: new FormControl(false, { nonNullable: true }),
       ends: new FormGroup({ x1: column(), y1: column(), z1: column(), x2: column(), y2: column(), z2: column() }),
     },
@@ -91,6 +96,13 @@ export class ResultsImport {
 
   protected readonly forceUnits = FORCE_UNITS;
   protected readonly lengthUnits = LENGTH_UNITS;
+  protected readonly momentUnits = MOMENT_UNITS;
+  /** Columns read besides the web shear (EN 1993 member axes: y-y major, z along the web); none is required. */
+  protected readonly optionalColumns: readonly { field: 'minorShearColumn' | 'majorMomentColumn' | 'minorMomentColumn'; label: string }[] = [
+    { field: 'minorShearColumn', label: 'Shear across the flanges, Vy (optional)' },
+    { field: 'majorMomentColumn', label: 'Moment about the major axis, My (optional)' },
+    { field: 'minorMomentColumn', label: 'Moment about the minor axis, Mz (optional)' },
+  ];
   protected readonly endKeys = END_COLUMN_KEYS;
   protected readonly keyKinds = Object.entries(MEMBER_KEY_KIND_LABELS) as [MemberKeyKind, string][];
 
@@ -209,11 +221,16 @@ export class ResultsImport {
   }
 }
 
-const ROLE_NAMES: Record<'memberColumn' | 'combinationColumn' | 'stationColumn' | 'shearColumn', string> = {
+type SingleColumnField = 'memberColumn' | 'combinationColumn' | 'stationColumn' | 'shearColumn' | 'minorShearColumn' | 'majorMomentColumn' | 'minorMomentColumn';
+
+const ROLE_NAMES: Record<SingleColumnField, string> = {
   memberColumn: 'member',
   combinationColumn: 'combination',
   stationColumn: 'station',
   shearColumn: 'shear',
+  minorShearColumn: 'Vy',
+  majorMomentColumn: 'My',
+  minorMomentColumn: 'Mz',
 };
 
 /** Header → what it is mapped to, for the labels above the preview's columns. */
