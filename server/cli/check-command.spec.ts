@@ -11,7 +11,9 @@ import ExcelJS from 'exceljs';
 import { schemaErrors, schemaForEntry } from '../../test/fixtures/bcf/bcf-schemas';
 import { fixturePath, SHEET_PER_COMBINATION } from '../../test/fixtures/results/result-files';
 import { buildingSmartSample } from '../../test/fixtures/ifc/buildingsmart-samples';
-import { writeFrameFile } from '../../test/generator/generate-frame';
+import { addAnalysisModel } from '../../test/generator/analysis-model-writer';
+import { frameLayout } from '../../test/generator/frame-layout';
+import { generateFrame, writeFrameFile } from '../../test/generator/generate-frame';
 import { evaluateFamilyCheck, prepareFamilyCapacity } from '../engine/family-capacity';
 import { fromNewtons } from '../engine/units';
 import { type MemberProfile, sectionDimensionsOf } from '../ifc/model-read-result';
@@ -365,6 +367,94 @@ describe('taulens check', () => {
       const bending = byTag('T34').checks[1];
       expect(Math.abs(bending.utilisation - 40 / 152.3) / (40 / 152.3)).toBeLessThan(0.01);
       expect(Math.abs(byTag('T34').checks[0].VRd_kN - 453.8) / 453.8).toBeLessThan(0.01);
+    });
+  });
+
+  describe('forces from an IFC structural analysis model', () => {
+    // Invented frames with an invented analysis model (test/generator/analysis-model-writer.ts), which writes the same
+    // forces as CSV in the default format: the check is that both sources give the same result, member by member.
+    const check = async (model: string, forces: string, ...extra: string[]) => {
+      let stdout = '';
+      let stderr = '';
+      const status = await dispatch(['check', model, '--forces', forces, '--standard', 'en1993-1-1', ...extra], { out: (t) => (stdout += t), err: (t) => (stderr += t) });
+      return { status, stdout, stderr };
+    };
+    const analysisFrame = (name: string, options: { schema: 'IFC4' | 'IFC4X3'; unit: 'mm' | 'm'; members: number; defect?: 'no-results' }) => {
+      const analysis = addAnalysisModel(generateFrame({ members: options.members, schema: options.schema, unit: options.unit, fileName: name }), frameLayout(options.members), options);
+      return { ifc: write(name, analysis.ifc), csv: write(name.replace(/\.ifc$/, '.forces.csv'), analysis.csv), forces: analysis.forces };
+    };
+    const governingOf = (member: CheckedMember) => ({
+      status: member.status,
+      combination: member.governing?.combination,
+      check: member.governing && `${member.governing.axis} ${member.governing.check}`,
+      station_m: member.governing?.station_m,
+      utilisation: member.governing?.utilisation,
+    });
+    /** The members of both --json outputs, with the same governing result and checks; returns the IFC run's. */
+    const expectSameChecks = (ifcJson: string, csvJson: string): CheckedMember[] => {
+      const ifcMembers: CheckedMember[] = JSON.parse(ifcJson).members;
+      const csvMembers: CheckedMember[] = JSON.parse(csvJson).members;
+      expect(ifcMembers.map((m) => m.globalId)).toEqual(csvMembers.map((m) => m.globalId));
+      ifcMembers.forEach((member, i) => {
+        const ifc = governingOf(member);
+        const csv = governingOf(csvMembers[i]);
+        expect({ ...ifc, utilisation: undefined }).toEqual({ ...csv, utilisation: undefined });
+        // The CSV carries the IFC's numbers to 9 decimals of kN and kN·m (forcesCsv), so the results agree to rounding.
+        if (csv.utilisation !== undefined) expect(ifc.utilisation).toBeCloseTo(csv.utilisation, 9);
+        expect(member.checks.map((c) => [c.axis, c.check, c.combination, c.station_m])).toEqual(csvMembers[i].checks.map((c) => [c.axis, c.check, c.combination, c.station_m]));
+      });
+      return ifcMembers;
+    };
+
+    it.each([
+      ['IFC4 in mm, the model file holding its own analysis', 'IFC4', 'mm'],
+      ['IFC4X3 in m (forces in kN, moments in kN·m)', 'IFC4X3', 'm'],
+    ] as const)('%s: the same governing combination, check, station and utilisation per member as the CSV', async (_what, schema, unit) => {
+      const generated = analysisFrame(`quay-shed-${schema}-${unit}.ifc`, { schema, unit, members: 30 });
+      const fromIfc = await check(generated.ifc, generated.ifc, '--json');
+      const fromCsv = await check(generated.ifc, generated.csv, '--json');
+      expect(fromIfc.stderr).toBe('');
+      expect(fromCsv.stderr).toBe('');
+      expect(fromIfc.status).toBe(fromCsv.status);
+      const ifcMembers = expectSameChecks(fromIfc.stdout, fromCsv.stdout);
+      // Every beam and column has forces (braces have no analysis member); some are linked by coordinates only.
+      const withForces = new Set(generated.forces.map((f) => f.globalId));
+      expect(generated.forces.some((f) => f.link === 'coordinates')).toBe(true);
+      expect(ifcMembers.filter((m) => m.governing).map((m) => m.globalId).sort()).toEqual([...withForces].sort());
+      const forcesJson = JSON.parse(fromIfc.stdout).forces;
+      expect(forcesJson.source).toBe('ifc-analysis-model');
+      expect(forcesJson.combinations).toEqual(JSON.parse(fromCsv.stdout).forces.combinations);
+      expect(JSON.parse(fromIfc.stdout).cautions).toBe(REPORT_CAUTIONS_TEXT);
+    });
+
+    it('reads the forces from a separate analysis file', async () => {
+      const generated = analysisFrame('depot-analysis.ifc', { schema: 'IFC4', unit: 'mm', members: 20 });
+      const physical = write('depot.ifc', generateFrame({ members: 20, schema: 'IFC4', unit: 'mm', fileName: 'depot.ifc' }));
+      const fromIfc = await check(physical, generated.ifc, '--json');
+      const fromCsv = await check(physical, generated.csv, '--json');
+      expect(fromIfc.stderr).toBe('');
+      expect(fromIfc.status).toBe(fromCsv.status);
+      expect(expectSameChecks(fromIfc.stdout, fromCsv.stdout).filter((m) => m.governing).length).toBeGreaterThan(0);
+    });
+
+    it('a model with analysis members but no results exits 2 with one plain message', async () => {
+      const generated = analysisFrame('yard-no-results.ifc', { schema: 'IFC4', unit: 'mm', members: 12, defect: 'no-results' });
+      const run = await check(generated.ifc, generated.ifc);
+      expect(run.status).toBe(2);
+      expect(run.stdout).toBe('');
+      expect(run.stderr).toMatch(/^taulens check: .*yard-no-results\.ifc: The file holds \d+ analysis members \(IfcStructuralCurveMember\) but no results/);
+      expect(run.stderr.trim().split('\n')).toHaveLength(1);
+      expect(run.stderr).not.toMatch(/\n\s+at /);
+    });
+
+    it('a model without analysis members, and options that only describe a CSV, exit 2', async () => {
+      const noAnalysis = await check(frame, frame);
+      expect(noAnalysis.status).toBe(2);
+      expect(noAnalysis.stderr).toContain('The file holds no analysis members (IfcStructuralCurveMember)');
+      const generated = analysisFrame('pier-shed.ifc', { schema: 'IFC4', unit: 'mm', members: 12 });
+      const withUnit = await check(generated.ifc, generated.ifc, '--force-unit', 'kN');
+      expect(withUnit.status).toBe(2);
+      expect(withUnit.stderr).toContain('--force-unit describes a CSV or XLSX forces file');
     });
   });
 });

@@ -20,6 +20,7 @@ import { STANDARDS, type Standard } from '../engine/check';
 import { type EnYieldRule, GRADE_IDS, type GradeId, isGradeId } from '../engine/grades';
 import type { FamilyCheckName, ShearAxis } from '../engine/shear-axis';
 import { FORCE_UNITS, type ForceUnit, LENGTH_UNITS, type LengthUnit } from '../engine/units';
+import type { ColumnMapping } from '../results/column-mapping';
 import { exportBcf } from '../findings/bcf/bcf-export';
 import { nameBasedUuid } from '../findings/bcf/bcf-guid';
 import type { FindingExport } from '../findings/export/finding-export';
@@ -28,27 +29,32 @@ import { DomainError } from '../http/errors';
 import { extractIfcFromZip } from '../ifc/ifc-archive';
 import type { MemberRecord, ModelInfo } from '../ifc/model-read-result';
 import { readModel } from '../ifc/read-model';
+import { StructuralResultsError } from '../ifc/structural-results';
 import { percentText, STANDARD_LABELS } from '../reports/report-format';
 import { REPORT_CAUTIONS_TEXT } from '../reports/report-cautions';
 import { MEMBER_KEY_KINDS, type MemberKeyKind } from '../results/column-mapping';
-import { governingShearsByMember } from '../results/governing-shear';
+import { type GoverningTable, governingShearsByMember } from '../results/governing-shear';
 import { type MatchReport, matchResultsToMembers } from '../results/member-matching';
+import type { ResultKeySummary } from '../results/result-key-index';
 import { ResultsFileError } from '../results/results-file-error';
 import { importResultsFile } from '../results/results-import';
 import { MOMENT_UNITS, type MomentUnit } from '../results/unit-words';
 import { type Command, type CommandIo, optionValue, optionValues, positionals, UsageError } from './command';
 import { forcesMapping } from './forces-mapping';
+import { importIfcForces, isIfcForcesFile } from './ifc-forces';
 import { type ListedMember, listedMember } from './member-listing';
 
 const VALUE_FLAGS = ['--forces', '--mapping', '--force-unit', '--length-unit', '--moment-unit', '--standard', '--sheet', '--member-key', '--default-grade', '--yield-rule', '--bcf'];
 const SWITCHES = ['--json'];
+/** Options that say how to read a CSV or XLSX file; an IFC analysis model states its own units and members. */
+const TABLE_ONLY_FLAGS = ['--mapping', '--force-unit', '--length-unit', '--moment-unit', '--sheet', '--member-key'];
 const YIELD_RULES: readonly EnYieldRule[] = ['en10025-2', 'en1993-1-1-table-3.1'];
 /** Unmatched force keys listed on stderr before "and N more". */
 const LISTED_KEYS = 10;
 /** Namespace of the BCF topic GUIDs this command derives from the model and member, so a re-export keeps them. */
 const TOPIC_NAMESPACE = '6f1d3c52-8a4e-4b7f-9c21-3e5a7d90b4c8';
 
-const USAGE = `usage: taulens check <model.ifc | model.ifczip> --forces <forces.csv | forces.xlsx> [--mapping <mapping.json>]
+const USAGE = `usage: taulens check <model.ifc | model.ifczip> --forces <forces.csv | forces.xlsx | analysis.ifc> [--mapping <mapping.json>]
                      --force-unit ${FORCE_UNITS.join('|')} --standard ${STANDARDS.join('|')}
                      [--json] [--bcf out.bcf] [--length-unit ${LENGTH_UNITS.join('|')}]
                      [--moment-unit ${MOMENT_UNITS.join('|')}] [--sheet <name> …]
@@ -69,7 +75,14 @@ Mz; load case; envelope max/min), as are one column per combination and units in
 the columns cannot be told apart for certain the command stops and prints the mapping to write for --mapping.
 Each member takes, per combination, the largest |shear| over its stations.
 
-  --forces          the shear forces file (required)
+The forces may also be an IFC4 or IFC4X3 structural analysis model (.ifc or .ifczip; the model file itself when it
+holds its analysis): the internal forces of each analysis member (IfcStructuralCurveMember) in each result group
+(IfcStructuralResultGroup, one per combination) at their stations, in the file's own units, Vz along the member's
+local z axis. An analysis member counts for the beam, column or member it is assigned to, else for the one whose axis
+it lies on (within 250 mm). The options that describe a CSV or XLSX file (--mapping, --force-unit, --length-unit,
+--moment-unit, --sheet, --member-key) do not apply to it.
+
+  --forces          the shear forces file, or the IFC analysis model (required)
   --mapping         a column mapping (JSON, the format of a saved web mapping template) instead of detection
   --force-unit      unit of the shear column (required unless the header or the mapping says it, e.g. 'V [kN]')
   --standard        the design code (required)
@@ -102,6 +115,8 @@ interface CheckArguments {
   yieldRule: EnYieldRule;
   json: boolean;
   bcf?: string;
+  /** The forces are an IFC structural analysis model, not a table. */
+  ifcForces: boolean;
 }
 
 function oneOf<T extends string>(flag: string, value: string | undefined, allowed: readonly T[]): T | undefined {
@@ -125,6 +140,9 @@ function parse(args: readonly string[]): CheckArguments {
   for (const file of [files[0], forces, ...(mappingFile ? [mappingFile] : [])]) {
     if (!fs.existsSync(file) || !fs.statSync(file).isFile()) throw new UsageError(`no such file: ${file}`);
   }
+  const ifcForces = isIfcForcesFile(forces);
+  const tableOnly = ifcForces && TABLE_ONLY_FLAGS.find((flag) => args.includes(flag));
+  if (tableOnly) throw new UsageError(`${tableOnly} describes a CSV or XLSX forces file; ${forces} is an IFC analysis model, which states its own units and members`);
   return {
     model: files[0],
     forces,
@@ -139,6 +157,7 @@ function parse(args: readonly string[]): CheckArguments {
     yieldRule: oneOf('--yield-rule', optionValue(args, '--yield-rule'), YIELD_RULES) ?? 'en10025-2',
     json: args.includes('--json'),
     bcf: optionValue(args, '--bcf'),
+    ifcForces,
   };
 }
 
@@ -150,6 +169,49 @@ function isZip(file: string): boolean {
   } finally {
     fs.closeSync(fd);
   }
+}
+
+/** Forces read from either source, in the shape the check takes, with what --json says of them. */
+interface ReadForces {
+  memberKeys: ResultKeySummary[];
+  governing: GoverningTable;
+  keyKind: MemberKeyKind;
+  description: Record<string, unknown>;
+}
+
+/** A CSV or XLSX forces file, read before the model so a bad file stops the command early. */
+async function tableForces(options: CheckArguments): Promise<ReadForces> {
+  const mapping: ColumnMapping = await forcesMapping(options);
+  const { summary, governing } = await importResultsFile(options.forces, mapping, mapping.sheets ? undefined : options.sheets[0]);
+  return {
+    memberKeys: summary.memberKeys,
+    governing,
+    keyKind: mapping.memberKeyKind,
+    description: { rows: summary.rowCount, keys: summary.memberKeys.length, combinations: summary.combinations, forceUnit: mapping.forceUnit, mapping },
+  };
+}
+
+/** An IFC analysis model's forces, linked to the members already read (whose axes place unassigned analysis members). */
+async function analysisForces(options: CheckArguments, records: readonly MemberRecord[], scratch: string): Promise<ReadForces> {
+  let ifc = options.forces;
+  if (isZip(ifc)) {
+    ifc = path.join(scratch, 'forces.ifc');
+    await extractIfcFromZip(options.forces, ifc);
+  }
+  const forces = await importIfcForces(ifc, records);
+  return {
+    memberKeys: forces.memberKeys,
+    governing: forces.governing,
+    keyKind: 'globalId',
+    description: {
+      source: 'ifc-analysis-model',
+      rows: forces.rowCount,
+      keys: forces.memberKeys.length,
+      combinations: forces.combinations,
+      analysisMemberLinks: forces.links,
+      stationsWithoutShear: forces.stationsWithoutShear,
+    },
+  };
 }
 
 async function readMembers(options: CheckArguments, parameters: CheckParameters, scratch: string): Promise<{ model: ModelInfo; members: MemberRecord[] }> {
@@ -316,12 +378,12 @@ async function run(args: readonly string[], io: CommandIo): Promise<number> {
   const parameters = checkParametersSchema.parse({ standard: options.standard, ...(options.defaultGrade && { defaultGrade: options.defaultGrade }), ...(options.standard === 'en1993-1-1' && { yieldRule: options.yieldRule }) });
   const scratch = fs.mkdtempSync(path.join(os.tmpdir(), 'taulens-check-'));
   try {
-    const mapping = await forcesMapping(options);
-    const { summary, governing } = await importResultsFile(options.forces, mapping, mapping.sheets ? undefined : options.sheets[0]);
+    const fromTable = options.ifcForces ? undefined : await tableForces(options);
     const { model, members: records } = await readMembers(options, parameters, scratch);
-    const report = matchResultsToMembers(summary.memberKeys, records, { keyKind: mapping.memberKeyKind });
+    const forces = fromTable ?? (await analysisForces(options, records, scratch));
+    const report = matchResultsToMembers(forces.memberKeys, records, { keyKind: forces.keyKind });
     warnAboutMatching(report, model, io);
-    const computed = computeCheckRun({ members: records, shears: governingShearsByMember(governing, report.matched), parameters });
+    const computed = computeCheckRun({ members: records, shears: governingShearsByMember(forces.governing, report.matched), parameters });
     const members = records.map((record, i) => checkedMember(record, computed.members[i]));
     if (options.bcf) {
       const modelSha256 = sha256Of(options.model);
@@ -337,7 +399,7 @@ async function run(args: readonly string[], io: CommandIo): Promise<number> {
         standard: options.standard,
         parameters,
         engineVersion: engineVersion(),
-        forces: { fileName: path.basename(options.forces), sha256: sha256Of(options.forces), rows: summary.rowCount, keys: summary.memberKeys.length, combinations: summary.combinations, forceUnit: mapping.forceUnit, mapping },
+        forces: { fileName: path.basename(options.forces), sha256: sha256Of(options.forces), ...forces.description },
         summary: computed.summary,
         unmatchedForces: report.unmatchedKeys,
         ambiguousForces: report.ambiguous.map((match) => ({ key: match.memberKey, candidates: match.candidates })),
@@ -352,6 +414,10 @@ async function run(args: readonly string[], io: CommandIo): Promise<number> {
     if (error instanceof ResultsFileError) {
       const rows = (error.details.issues ?? []).slice(0, LISTED_KEYS).map((issue) => `\n  ${issue.message}`).join('');
       io.err(`taulens check: ${options.forces}: ${error.message}${rows}\n`);
+      return 2;
+    }
+    if (error instanceof StructuralResultsError) {
+      io.err(`taulens check: ${options.forces}: ${error.message}\n`);
       return 2;
     }
     if (error instanceof DomainError) {
