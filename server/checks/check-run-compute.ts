@@ -394,7 +394,7 @@ function evaluateGoverning(rules: MemberRules, axis: ShearAxis, forces: AxisForc
   };
 }
 
-interface MaterialChoice {
+export interface MaterialChoice {
   grade: GradeId;
   assumed: boolean;
 }
@@ -437,13 +437,14 @@ export function evaluateMember(member: CheckableMember, parameters: CheckParamet
 }
 
 /** The member's grade, or the run's default grade when the model's material named none. */
-function materialOf(member: CheckableMember, parameters: CheckParameters): MaterialChoice {
+export function materialOf(member: CheckableMember, parameters: CheckParameters): MaterialChoice {
   const material = member.material;
   if (material && !material.assumed) return { grade: material.grade, assumed: false };
   return { grade: parameters.defaultGrade, assumed: true };
 }
 
-function fabricationOverrides(parameters: CheckParameters): Map<string, Fabrication> {
+/** The run's fabrication per section, by catalogue key. */
+export function fabricationOverrides(parameters: CheckParameters): Map<string, Fabrication> {
   return new Map(Object.entries(parameters.fabricationOverrides).map(([name, fabrication]) => [sectionKey(name), fabrication]));
 }
 
@@ -520,23 +521,26 @@ class RunFamilyCapacities {
     }
     let prepared = this.adjusted.get(base);
     if (!prepared) {
-      prepared = { ...base, major: this.withResistanceFactor(base.major), minor: this.withResistanceFactor(base.minor) };
+      prepared = { ...base, major: withProjectResistanceFactor(base.major, this.parameters), minor: withProjectResistanceFactor(base.minor, this.parameters) };
       this.adjusted.set(base, prepared);
     }
     return prepared;
   }
+}
 
-  private withResistanceFactor(axis: PreparedFamilyCapacity['major']): PreparedFamilyCapacity['major'] {
-    if (!axis.applicable || !axis.aisc) return axis;
-    const parameters = this.parameters;
-    const factor = projectResistanceFactor(parameters);
-    if (factor === null) return axis;
-    const VRd_N = factor * axis.aisc.vn_N;
-    const formula = parameters.standard === 'aisc360-22-lrfd' ? 'φv·Vn' : 'Vn/Ωv';
-    const override = step('AISC 360-22 §G1', 'Available shear strength with the project’s resistance factor', formula, `${f(factor)} × ${f(axis.aisc.vn_N / 1000)} kN`, VRd_N / 1000, 'kN');
-    const adjusted: AxisCapacity = { ...axis, VRd_N, trace: [...axis.trace, override] };
-    return adjusted;
-  }
+/**
+ * An axis of another family with the project's AISC resistance factor in place of the code's, and its step in the
+ * trace, as runs and calculation sheets apply it.
+ */
+export function withProjectResistanceFactor<A extends PreparedFamilyCapacity['major']>(axis: A, parameters: CheckParameters): A {
+  if (!axis.applicable || !axis.aisc) return axis;
+  const factor = projectResistanceFactor(parameters);
+  if (factor === null) return axis;
+  const VRd_N = factor * axis.aisc.vn_N;
+  const formula = parameters.standard === 'aisc360-22-lrfd' ? 'φv·Vn' : 'Vn/Ωv';
+  const override = step('AISC 360-22 §G1', 'Available shear strength with the project’s resistance factor', formula, `${f(factor)} × ${f(axis.aisc.vn_N / 1000)} kN`, VRd_N / 1000, 'kN');
+  const adjusted: AxisCapacity = { ...axis, VRd_N, trace: [...axis.trace, override] };
+  return adjusted as A;
 }
 
 /** The project's AISC resistance factor φv, or 1/Ωv for ASD, when the run sets one; null otherwise. */

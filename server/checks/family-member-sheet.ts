@@ -10,10 +10,9 @@ import { polygonShearStressProfile } from '../engine/polygon-shear-stress';
 import { webShearArea_mm2 } from '../engine/section-family';
 import { sectionOutline } from '../engine/section-outline';
 import type { ShearAxis } from '../engine/shear-axis';
-import { formatNumber, step } from '../engine/trace';
 import { isIProfile, type MemberRecord, sectionDimensionsOf } from '../ifc/model-read-result';
 import type { CheckParameters } from './check-parameters';
-import { engineParamsOf } from './check-run-compute';
+import { engineParamsOf, fabricationOverrides, materialOf, withProjectResistanceFactor } from './check-run-compute';
 import type { FamilySheetSection, FamilySheetStress } from './checks-api-types';
 
 /** Chord tolerance of the drawn outline: a tenth of a millimetre is below what any print of a section shows (common practice, no source). */
@@ -37,10 +36,8 @@ export interface FamilyEvaluation {
 export function evaluateFamilyMember(member: MemberRecord, parameters: CheckParameters, axis: ShearAxis, shear_N: number, moment_Nmm?: number): FamilyEvaluation | null {
   const profile = member.profile;
   if (!profile || isIProfile(profile) || member.status === 'not-applicable') return null;
-  const overrides = new Map(Object.entries(parameters.fabricationOverrides).map(([name, fabrication]) => [sectionKey(name), fabrication]));
-  const fabrication = overrides.get(sectionKey(profile.name)) ?? profile.fabrication;
-  const assumed = !member.material || member.material.assumed;
-  const grade = assumed ? parameters.defaultGrade : member.material!.grade;
+  const fabrication = fabricationOverrides(parameters).get(sectionKey(profile.name)) ?? profile.fabrication;
+  const { grade, assumed } = materialOf(member, parameters);
   const dimensions = sectionDimensionsOf(profile) as FamilySheetSection['dimensions'];
   const prepared = prepareFamilyCapacity(dimensions, { grade }, parameters.standard, { ...engineParamsOf(parameters), fabrication });
   const base = prepared[axis];
@@ -50,18 +47,6 @@ export function evaluateFamilyMember(member: MemberRecord, parameters: CheckPara
   if (profile.source === 'catalogue' || profile.source === 'project-catalogue') contextFlags.push('catalogue-section');
   const result = evaluateFamilyCheck({ ...prepared, [axis]: capacity }, axis, { shear_N, ...(moment_Nmm !== undefined && { moment_Nmm }) }, contextFlags);
   return { dimensions, grade, capacity, result };
-}
-
-/** AISC: the project's φv (LRFD) or 1/Ωv (ASD) in place of the code's, with its step in the trace, as a run applies it. */
-function withProjectResistanceFactor(capacity: AxisCapacity, parameters: CheckParameters): AxisCapacity {
-  const lrfd = parameters.standard === 'aisc360-22-lrfd';
-  const factor = lrfd ? parameters.phiV : parameters.standard === 'aisc360-22-asd' && parameters.omegaV !== null ? 1 / parameters.omegaV : null;
-  if (!capacity.aisc || factor === null) return capacity;
-  const vn_N = capacity.aisc.vn_N;
-  const VRd_N = factor * vn_N;
-  const formula = lrfd ? 'φv·Vn' : 'Vn/Ωv';
-  const override = step('AISC 360-22 §G1', 'Available shear strength with the project’s resistance factor', formula, `${formatNumber(factor)} × ${formatNumber(vn_N / 1000)} kN`, VRd_N / 1000, 'kN');
-  return { ...capacity, VRd_N, trace: [...capacity.trace, override] };
 }
 
 export function familySectionOf({ dimensions, capacity }: FamilyEvaluation): FamilySheetSection {

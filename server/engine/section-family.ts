@@ -122,6 +122,17 @@ export type SectionDimensions =
   | PlateDimensions
   | OtherDimensions;
 
+/** Every number of a section's dimensions by its dotted path ('topFlange.width_mm'), for comparing two sections. */
+export function dimensionValues(d: SectionDimensions): Record<string, number> {
+  const values: Record<string, number> = {};
+  const collect = (value: unknown, path: string): void => {
+    if (typeof value === 'number') values[path] = value;
+    else if (value && typeof value === 'object') for (const [key, inner] of Object.entries(value)) collect(inner, path ? `${path}.${key}` : key);
+  };
+  collect(d, '');
+  return values;
+}
+
 /** Overall depth (along y) of any family. */
 export function overallDepth_mm(d: SectionDimensions): number {
   return d.family === 'tube' ? d.diameter_mm : d.depth_mm;

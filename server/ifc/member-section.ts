@@ -11,7 +11,7 @@ import { findCatalogueEntry } from '../catalogue/catalogue-lookup';
 import type { CatalogueHit, CatalogueSection } from '../catalogue/catalogue-section';
 import type { FlangeInput, ISectionInput } from '../engine/section';
 import { SectionInputError } from '../engine/section';
-import { overallDepth_mm, overallWidth_mm, SECTION_FAMILY_LABELS, webThickness_mm, type SectionDimensions, type SectionPolygon } from '../engine/section-family';
+import { dimensionValues, overallDepth_mm, overallWidth_mm, SECTION_FAMILY_LABELS, webThickness_mm, type SectionDimensions, type SectionPolygon } from '../engine/section-family';
 import { defaultFabrication } from '../engine/family-capacity';
 import { polygonAxisSection } from '../engine/polygon-axis-section';
 import { sectionOutline } from '../engine/section-outline';
@@ -239,16 +239,10 @@ export class SectionResolver {
 /** Name and geometry describe the same section: same family, every dimension within 2 % or 0.5 mm (common practice, no source). */
 function sameSection(named: SectionDimensions, measured: SectionDimensions): boolean {
   if (named.family !== measured.family) return false;
-  const a = numbersOf(named);
-  const b = numbersOf(measured);
+  const a = dimensionValues(named);
+  const b = dimensionValues(measured);
   const keys = Object.keys(a).filter((k) => !/radius|slope/i.test(k) && k in b);
   return keys.length > 0 && keys.every((k) => Math.abs(a[k] - b[k]) <= Math.max(0.5, 0.02 * Math.abs(a[k])));
-}
-
-function numbersOf(value: unknown, prefix = '', into: Record<string, number> = {}): Record<string, number> {
-  if (typeof value === 'number') into[prefix] = value;
-  else if (value && typeof value === 'object') for (const [k, v] of Object.entries(value)) numbersOf(v, prefix ? `${prefix}.${k}` : k, into);
-  return into;
 }
 
 /** Area and principal second moments within the tolerances recognition uses (1 % and 2 %). */

@@ -9,7 +9,7 @@ import { frameLayout } from '../../test/generator/frame-layout';
 import { generateFrame } from '../../test/generator/generate-frame';
 import { type FrameSchema, isRealExportPath, memberPathOf } from '../../test/generator/frame-writer';
 import { REAL_EXPORT_SECTIONS, type RealExportSection } from '../../test/generator/real-export-sections';
-import { overallDepth_mm, type SectionDimensions } from '../engine/section-family';
+import { dimensionValues, overallDepth_mm, type SectionDimensions } from '../engine/section-family';
 import { type MemberRecord, type ModelReadResult, sectionDimensionsOf } from './model-read-result';
 import { readModel } from './read-model';
 
@@ -19,21 +19,14 @@ function bytes(text: string): Uint8Array {
   return new TextEncoder().encode(text);
 }
 
-/** Every number of a section's dimensions by its dotted path ('topFlange.width_mm'). */
-function numbersOf(value: unknown, prefix = '', into: Record<string, number> = {}): Record<string, number> {
-  if (typeof value === 'number') into[prefix] = value;
-  else if (value && typeof value === 'object') for (const [k, v] of Object.entries(value)) numbersOf(v, prefix ? `${prefix}.${k}` : k, into);
-  return into;
-}
-
 /**
  * Plates and extents to 0.1 % (outline arcs are chorded to 0.005 % of the depth, body cuts are exact on planar faces);
  * radii to 1 % from a curve's arcs, but 20 % from a body, whose fillets are three facets per quarter circle.
  */
 function expectSameSection(actual: SectionDimensions, expected: SectionDimensions, fromBody: boolean, label: string): void {
   expect({ label, family: actual.family }).toEqual({ label, family: expected.family });
-  const got = numbersOf(actual);
-  for (const [key, want] of Object.entries(numbersOf(expected))) {
+  const got = dimensionValues(actual);
+  for (const [key, want] of Object.entries(dimensionValues(expected))) {
     const radius = /radius|slope/i.test(key);
     // An optional radius left out means none.
     if (radius && got[key] === undefined) got[key] = 0;

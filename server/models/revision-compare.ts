@@ -2,7 +2,7 @@
  * Compares two revisions' members by GlobalId: added, removed, and changed in section, grade, fabrication, length or
  * position. Differences within the tolerances are modelling noise (re-exported coordinates, rounding), not changes.
  */
-import { dimensionsLabel } from '../engine/section-family';
+import { dimensionValues, dimensionsLabel } from '../engine/section-family';
 import { type MemberProfile, type MemberRecord, type Point3_mm, sectionDimensionsOf } from '../ifc/model-read-result';
 import { type MemberRow, memberRowOf } from './member-row';
 
@@ -39,23 +39,14 @@ export interface RevisionComparison {
 
 const round = (value: number, decimals: number): number => Math.round(value * 10 ** decimals) / 10 ** decimals;
 
-/** Every dimension of the section in a fixed order (flanges, radii and slopes included), for comparing two revisions. */
-function dimensionsOf(profile: MemberProfile): number[] {
-  const values: number[] = [];
-  const collect = (value: unknown): void => {
-    if (typeof value === 'number') values.push(value);
-    else if (value && typeof value === 'object') for (const key of Object.keys(value).sort()) collect((value as Record<string, unknown>)[key]);
-  };
-  collect(sectionDimensionsOf(profile));
-  return values;
-}
-
 function sameSection(a: MemberProfile | null, b: MemberProfile | null): boolean {
   if (!a || !b) return a === b;
   if (a.name !== b.name || a.family !== b.family) return false;
-  const da = dimensionsOf(a);
-  const db = dimensionsOf(b);
-  return da.length === db.length && da.every((value, i) => Math.abs(value - db[i]) <= COMPARE_TOLERANCES.dimension_mm);
+  // Every dimension, flanges, radii and slopes included: the same fields within the tolerance.
+  const da = dimensionValues(sectionDimensionsOf(a));
+  const db = dimensionValues(sectionDimensionsOf(b));
+  const keys = Object.keys(da);
+  return keys.length === Object.keys(db).length && keys.every((key) => key in db && Math.abs(da[key] - db[key]) <= COMPARE_TOLERANCES.dimension_mm);
 }
 
 /** The name, and the dimensions when the name alone would not show the change. */
